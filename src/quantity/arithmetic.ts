@@ -1,0 +1,343 @@
+/**
+ * Arithmetic on quantities. Every function here compiles to the plain-number
+ * operation; the checking happens only in the types.
+ *
+ * - `add`, `sub`, comparisons, `min`, `max`, `sum`: operands must share
+ *   dimension and system (a CGS length never adds to an SI length).
+ * - `mul`, `div`: dimensions combine; an SI operand may meet an SI or a
+ *   system-free operand (or a plain number), never a CGS one.
+ * - `pow`, `sqrt`, `cbrt`: integer powers from -4 to 4; roots only where every
+ *   exponent divides evenly (a compile error otherwise).
+ *
+ * @module
+ */
+import type { HasNever, DimCbrt, DimInverse, DimPower, DimProduct, DimQuotient, DimSqrt, PowerExponent } from "./dimension";
+import type {
+  AnyQuantity,
+  CombinedTag,
+  DimensionOf,
+  OperandFor,
+  Pure,
+  QuantityWithTag,
+  SystemOf,
+} from "./quantity";
+
+/** A quantity or a plain number. */
+export type Operand = AnyQuantity | number;
+
+/** The type of `a * b`. */
+export type Product<A, B> = QuantityWithTag<
+  DimProduct<DimensionOf<A>, DimensionOf<B>>,
+  CombinedTag<SystemOf<A>, SystemOf<B>>
+>;
+
+/** The type of `a / b`. */
+export type Quotient<A, B> = QuantityWithTag<
+  DimQuotient<DimensionOf<A>, DimensionOf<B>>,
+  CombinedTag<SystemOf<A>, SystemOf<B>>
+>;
+
+/** The type of `1 / a`. */
+export type Inverse<A> = QuantityWithTag<DimInverse<DimensionOf<A>>, SystemOf<A>>;
+
+/** The type of `a ** n` (named `Raised` because `Power` is the physical quantity). */
+export type Raised<A, N extends PowerExponent> = QuantityWithTag<DimPower<DimensionOf<A>, N>, SystemOf<A>>;
+
+/** Marker in a compile error: a square root needs every exponent even. */
+export interface SquareRootNeedsEvenExponents<Q> {
+  readonly "cannot take the square root: some dimension exponent is odd": Q;
+}
+
+/** Marker in a compile error: a cube root needs every exponent divisible by 3. */
+export interface CubeRootNeedsExponentsDivisibleBy3<Q> {
+  readonly "cannot take the cube root: some dimension exponent is not divisible by 3": Q;
+}
+
+/**
+ * Sum of two quantities of the same dimension and system.
+ *
+ * @example
+ * ```ts
+ * import { SI, add, units } from "starlume";
+ * const total = add(SI.of(1, units.au), SI.of(1, units.km)); // metres
+ * ```
+ */
+export function add<Q extends AnyQuantity>(a: Q, b: NoInfer<Q>): Q {
+  return (a + b) as Q;
+}
+
+/**
+ * Difference of two quantities of the same dimension and system.
+ *
+ * @example
+ * ```ts
+ * import { CGS, sub, units } from "starlume";
+ * const gap = sub(CGS.of(656.3, units.nm), CGS.of(486.1, units.nm)); // centimetres
+ * ```
+ */
+export function sub<Q extends AnyQuantity>(a: Q, b: NoInfer<Q>): Q {
+  return (a - b) as Q;
+}
+
+/**
+ * Negation.
+ *
+ * @example
+ * ```ts
+ * import { SI, neg, units } from "starlume";
+ * neg(SI.of(3, units.km_per_s));
+ * ```
+ */
+export function neg<Q extends AnyQuantity>(a: Q): Q {
+  return -a as Q;
+}
+
+/**
+ * Absolute value.
+ *
+ * @example
+ * ```ts
+ * import { SI, abs, units } from "starlume";
+ * abs(SI.of(-3, units.km_per_s));
+ * ```
+ */
+export function abs<Q extends AnyQuantity>(a: Q): Q {
+  return Math.abs(a) as Q;
+}
+
+/**
+ * Product; dimensions add exponent-wise. Mixing SI and CGS operands does not
+ * compile; system-free quantities and plain numbers combine with either.
+ *
+ * @example
+ * ```ts
+ * import { SI, mul, units, type Area } from "starlume";
+ * const r = SI.of(1, units.Rsol);
+ * const a: Area<"SI"> = mul(r, r);
+ * ```
+ */
+export function mul<A extends Operand, B extends OperandFor<SystemOf<A>>>(a: A, b: B): Product<A, B> {
+  return (a * b) as Product<A, B>;
+}
+
+/**
+ * Quotient; dimensions subtract exponent-wise. Same system rule as {@link mul}.
+ *
+ * @example
+ * ```ts
+ * import { SI, div, units, type Velocity } from "starlume";
+ * const v: Velocity<"SI"> = div(SI.of(1, units.au), SI.of(1, units.day));
+ * ```
+ */
+export function div<A extends Operand, B extends OperandFor<SystemOf<A>>>(a: A, b: B): Quotient<A, B> {
+  return (a / b) as Quotient<A, B>;
+}
+
+/**
+ * Reciprocal `1 / a`.
+ *
+ * @example
+ * ```ts
+ * import { SI, inv, units, type Wavenumber } from "starlume";
+ * const k: Wavenumber<"SI"> = inv(SI.of(500, units.nm));
+ * ```
+ */
+export function inv<A extends Operand>(a: A): Inverse<A> {
+  return (1 / a) as Inverse<A>;
+}
+
+/**
+ * Integer power from -4 to 4 (dimension exponents multiply). Uses repeated
+ * multiplication for small powers, which is exact where `Math.pow` may not be.
+ *
+ * @example
+ * ```ts
+ * import { SI, pow, units, type Volume } from "starlume";
+ * const v: Volume<"SI"> = pow(SI.of(2, units.m), 3);
+ * ```
+ */
+export function pow<A extends Operand, N extends PowerExponent>(a: A, n: N): Raised<A, N> {
+  let r: number;
+  switch (n) {
+    case 0:
+      r = 1;
+      break;
+    case 1:
+      r = a;
+      break;
+    case 2:
+      r = a * a;
+      break;
+    case -1:
+      r = 1 / a;
+      break;
+    case -2:
+      r = 1 / (a * a);
+      break;
+    default:
+      r = a ** n;
+  }
+  return r as Raised<A, N>;
+}
+
+/**
+ * Square root; a compile error unless every dimension exponent is even.
+ *
+ * @example
+ * ```ts
+ * import { SI, sqrt, units, type Length } from "starlume";
+ * const area = SI.of(9, units.m2);
+ * const side: Length<"SI"> = sqrt(area);
+ * ```
+ */
+export function sqrt<Q extends Operand>(
+  a: HasNever<DimSqrt<DimensionOf<Q>>> extends true ? SquareRootNeedsEvenExponents<Q> : Q,
+): QuantityWithTag<DimSqrt<DimensionOf<Q>>, SystemOf<Q>> {
+  return Math.sqrt(a as number) as QuantityWithTag<DimSqrt<DimensionOf<Q>>, SystemOf<Q>>;
+}
+
+/**
+ * Cube root; a compile error unless every dimension exponent is divisible by 3.
+ *
+ * @example
+ * ```ts
+ * import { SI, cbrt, pow, units, type Length } from "starlume";
+ * const side: Length<"SI"> = cbrt(pow(SI.of(2, units.m), 3));
+ * ```
+ */
+export function cbrt<Q extends Operand>(
+  a: HasNever<DimCbrt<DimensionOf<Q>>> extends true ? CubeRootNeedsExponentsDivisibleBy3<Q> : Q,
+): QuantityWithTag<DimCbrt<DimensionOf<Q>>, SystemOf<Q>> {
+  return Math.cbrt(a as number) as QuantityWithTag<DimCbrt<DimensionOf<Q>>, SystemOf<Q>>;
+}
+
+/**
+ * Multiply a quantity by a pure number (a plain number or a dimensionless
+ * quantity; an angle or any other quantity is rejected).
+ *
+ * @example
+ * ```ts
+ * import { SI, scale, units } from "starlume";
+ * const twoAu = scale(SI.of(1, units.au), 2);
+ * ```
+ */
+export function scale<Q extends AnyQuantity>(a: Q, factor: Pure): Q {
+  return (a * factor) as Q;
+}
+
+/**
+ * `a < b` for quantities of the same dimension and system.
+ *
+ * @example
+ * ```ts
+ * import { SI, lt, units } from "starlume";
+ * lt(SI.of(1, units.pc), SI.of(1, units.ly)); // false
+ * ```
+ */
+export function lt<Q extends AnyQuantity>(a: Q, b: NoInfer<Q>): boolean {
+  return a < b;
+}
+
+/**
+ * `a <= b` for quantities of the same dimension and system.
+ *
+ * @example
+ * ```ts
+ * import { SI, le, units } from "starlume";
+ * le(SI.of(1, units.au), SI.of(1, units.pc)); // true
+ * ```
+ */
+export function le<Q extends AnyQuantity>(a: Q, b: NoInfer<Q>): boolean {
+  return a <= b;
+}
+
+/**
+ * `a > b` for quantities of the same dimension and system.
+ *
+ * @example
+ * ```ts
+ * import { SI, gt, units } from "starlume";
+ * gt(SI.of(1, units.pc), SI.of(1, units.ly)); // true
+ * ```
+ */
+export function gt<Q extends AnyQuantity>(a: Q, b: NoInfer<Q>): boolean {
+  return a > b;
+}
+
+/**
+ * `a >= b` for quantities of the same dimension and system.
+ *
+ * @example
+ * ```ts
+ * import { SI, ge, units } from "starlume";
+ * ge(SI.of(1, units.pc), SI.of(1, units.pc)); // true
+ * ```
+ */
+export function ge<Q extends AnyQuantity>(a: Q, b: NoInfer<Q>): boolean {
+  return a >= b;
+}
+
+/**
+ * Whether `|a - b| <= rel * max(|a|, |b|)`; for quantities of the same
+ * dimension and system.
+ *
+ * @example
+ * ```ts
+ * import { SI, near, units } from "starlume";
+ * near(SI.of(1000, units.m), SI.of(1, units.km), 1e-15); // true
+ * ```
+ */
+export function near<Q extends AnyQuantity>(a: Q, b: NoInfer<Q>, rel: number): boolean {
+  return Math.abs(a - b) <= rel * Math.max(Math.abs(a), Math.abs(b));
+}
+
+/**
+ * Smallest of one or more quantities of the same dimension and system.
+ *
+ * @example
+ * ```ts
+ * import { SI, min, units } from "starlume";
+ * min(SI.of(3, units.K), SI.of(2, units.K));
+ * ```
+ */
+export function min<Q extends AnyQuantity>(first: Q, ...rest: NoInfer<Q>[]): Q {
+  let m: number = first;
+  for (const x of rest) if (x < m || Number.isNaN(x)) m = x;
+  return m as Q;
+}
+
+/**
+ * Largest of one or more quantities of the same dimension and system.
+ *
+ * @example
+ * ```ts
+ * import { SI, max, units } from "starlume";
+ * max(SI.of(3, units.K), SI.of(2, units.K));
+ * ```
+ */
+export function max<Q extends AnyQuantity>(first: Q, ...rest: NoInfer<Q>[]): Q {
+  let m: number = first;
+  for (const x of rest) if (x > m || Number.isNaN(x)) m = x;
+  return m as Q;
+}
+
+/**
+ * Sum of a list of quantities of the same dimension and system, with
+ * Neumaier's compensated summation (error bounded independent of length).
+ *
+ * @example
+ * ```ts
+ * import { SI, sum, units } from "starlume";
+ * sum([SI.of(1, units.W), SI.of(2, units.W)]);
+ * ```
+ */
+export function sum<Q extends AnyQuantity>(values: readonly Q[]): Q {
+  let s = 0;
+  let c = 0;
+  for (const x of values) {
+    const t = s + x;
+    c += Math.abs(s) >= Math.abs(x) ? s - t + x : x - t + s;
+    s = t;
+  }
+  return (s + c) as Q;
+}
