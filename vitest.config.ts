@@ -4,5 +4,10 @@ export default defineConfig({
   test: {
     include: ["src/**/*.test.ts", "test/**/*.test.ts"],
     environment: "node",
+    typecheck: {
+      enabled: true,
+      include: ["test/types/**/*.test-d.ts"],
+      tsconfig: "./tsconfig.json",
+    },
   },
 });

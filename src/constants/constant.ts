@@ -5,7 +5,7 @@
  */
 import type { Dimension } from "../quantity/dimension";
 import type { Quantity } from "../quantity/quantity";
-import { times10 } from "../quantity/unit";
+import { decimalScale } from "../quantity/unit";
 
 /**
  * A physical or astronomical constant, typed in both systems, with its
@@ -58,7 +58,10 @@ export function defineConstant<D extends Dimension>(
     name,
     dimension,
     si: valueSI as Quantity<D, "SI">,
-    cgs: times10(valueSI, -cgsExp) as Quantity<D, "CGS">,
+    // shift the decimal point of the shortest decimal form, so that a value
+    // published in decimal (G = 6.6743e-11) becomes exactly the published CGS
+    // decimal (6.6743e-8), not 6.6743e-11 × 1000 rounded in binary.
+    cgs: decimalScale(valueSI, -cgsExp) as Quantity<D, "CGS">,
     uncertaintySI,
     relativeUncertainty: uncertaintySI / Math.abs(valueSI),
     exact: uncertaintySI === 0,

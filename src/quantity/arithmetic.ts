@@ -53,6 +53,16 @@ export interface CubeRootNeedsExponentsDivisibleBy3<Q> {
   readonly "cannot take the cube root: some dimension exponent is not divisible by 3": Q;
 }
 
+type IsUnion<T, U = T> = T extends unknown ? ([U] extends [T] ? false : true) : never;
+
+/** Marker in a compile error: a list mixes quantities of different kinds or systems. */
+export interface MixedQuantities<Q> {
+  readonly "all values must share one dimension and one system": Q;
+}
+
+/** `unknown` when `Q` is one quantity type; an error marker when it is a union (mixed list). */
+export type OneKind<Q> = true extends IsUnion<Q> ? MixedQuantities<Q> : unknown;
+
 /**
  * Sum of two quantities of the same dimension and system.
  *
@@ -331,7 +341,7 @@ export function max<Q extends AnyQuantity>(first: Q, ...rest: NoInfer<Q>[]): Q {
  * sum([SI.of(1, units.W), SI.of(2, units.W)]);
  * ```
  */
-export function sum<Q extends AnyQuantity>(values: readonly Q[]): Q {
+export function sum<Q extends AnyQuantity>(values: readonly Q[] & OneKind<Q>): Q {
   let s = 0;
   let c = 0;
   for (const x of values) {

@@ -127,8 +127,10 @@ function formatNumber(x: number, options: FormatOptions | undefined): string {
   }
   if (notation === "fixed") return x.toFixed(Math.min(digits, 100));
   const a = Math.abs(x);
-  if (notation === "exponential" || (a !== 0 && (a < 1e-4 || a >= 1e6))) {
-    return x.toExponential(digits - 1).replace("e+", "e");
+  if (notation === "exponential") return x.toExponential(digits - 1).replace("e+", "e");
+  if (a !== 0 && (a < 1e-4 || a >= 1e6)) {
+    // auto: drop trailing zeros of the mantissa, as plain notation does
+    return x.toExponential(digits - 1).replace(/\.?0+e/, "e").replace("e+", "e");
   }
   return String(Number(x.toPrecision(digits)));
 }
