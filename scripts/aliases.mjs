@@ -56,7 +56,7 @@ const out = [
   " *",
   " * @module",
   " */",
-  'import { dimension, type Dim, type Dimension } from "./dimension";',
+  'import { dimension, type Dimension, type L_M_T_K_N_A_Sr } from "./dimension";',
   'import type { Quantity, QuantityArray, SystemName } from "./quantity";',
   "",
 ];
@@ -65,7 +65,7 @@ for (const [name, doc, exps] of defs) {
   const free = !exps.length && !exps.mass;
   const lit = "{ " + keys.filter((k) => exps[k]).map((k) => `${k}: ${exps[k]}`).join("; ") + (Object.keys(exps).length ? " }" : "}");
   out.push(`/** Dimension of ${name}. ${doc} */`);
-  out.push(`export type ${name}Dimension = Dim<${lit}>;`);
+  out.push(`export type ${name}Dimension = L_M_T_K_N_A_Sr<${keys.map((k) => exps[k] ?? 0).join(", ")}>;`);
   if (free) {
     out.push(`/** ${doc} System-free: the same value in SI and CGS. The optional \`S\` is accepted and ignored. */`);
     out.push(`export type ${name}<S extends SystemName = SystemName> = Quantity<${name}Dimension, S>;`);

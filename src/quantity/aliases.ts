@@ -5,312 +5,312 @@
  *
  * @module
  */
-import { dimension, type Dim, type Dimension } from "./dimension";
+import { dimension, type Dimension, type L_M_T_K_N_A_Sr } from "./dimension";
 import type { Quantity, QuantityArray, SystemName } from "./quantity";
 
 /** Dimension of Dimensionless. A pure number (ratio, count, magnitude difference). */
-export type DimensionlessDimension = Dim<{ }>;
+export type DimensionlessDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, 0, 0, 0>;
 /** A pure number (ratio, count, magnitude difference). System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
 export type Dimensionless<S extends SystemName = SystemName> = Quantity<DimensionlessDimension, S>;
 /** A `Float64Array` of Dimensionless values. */
 export type DimensionlessArray<S extends SystemName = SystemName> = QuantityArray<DimensionlessDimension, S>;
 
 /** Dimension of Length. Length: m (SI) or cm (CGS). */
-export type LengthDimension = Dim<{ length: 1 }>;
+export type LengthDimension = L_M_T_K_N_A_Sr<1, 0, 0, 0, 0, 0, 0>;
 /** Length: m (SI) or cm (CGS). `S` is the system its value is expressed in. */
 export type Length<S extends SystemName> = Quantity<LengthDimension, S>;
 /** A `Float64Array` of Length values in system `S`. */
 export type LengthArray<S extends SystemName> = QuantityArray<LengthDimension, S>;
 
 /** Dimension of Mass. Mass: kg (SI) or g (CGS). */
-export type MassDimension = Dim<{ mass: 1 }>;
+export type MassDimension = L_M_T_K_N_A_Sr<0, 1, 0, 0, 0, 0, 0>;
 /** Mass: kg (SI) or g (CGS). `S` is the system its value is expressed in. */
 export type Mass<S extends SystemName> = Quantity<MassDimension, S>;
 /** A `Float64Array` of Mass values in system `S`. */
 export type MassArray<S extends SystemName> = QuantityArray<MassDimension, S>;
 
 /** Dimension of Time. Time: s in both systems. */
-export type TimeDimension = Dim<{ time: 1 }>;
+export type TimeDimension = L_M_T_K_N_A_Sr<0, 0, 1, 0, 0, 0, 0>;
 /** Time: s in both systems. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
 export type Time<S extends SystemName = SystemName> = Quantity<TimeDimension, S>;
 /** A `Float64Array` of Time values. */
 export type TimeArray<S extends SystemName = SystemName> = QuantityArray<TimeDimension, S>;
 
 /** Dimension of Temperature. Thermodynamic temperature: K in both systems. */
-export type TemperatureDimension = Dim<{ temperature: 1 }>;
+export type TemperatureDimension = L_M_T_K_N_A_Sr<0, 0, 0, 1, 0, 0, 0>;
 /** Thermodynamic temperature: K in both systems. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
 export type Temperature<S extends SystemName = SystemName> = Quantity<TemperatureDimension, S>;
 /** A `Float64Array` of Temperature values. */
 export type TemperatureArray<S extends SystemName = SystemName> = QuantityArray<TemperatureDimension, S>;
 
 /** Dimension of Amount. Amount of substance: mol in both systems. */
-export type AmountDimension = Dim<{ amount: 1 }>;
+export type AmountDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, 1, 0, 0>;
 /** Amount of substance: mol in both systems. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
 export type Amount<S extends SystemName = SystemName> = Quantity<AmountDimension, S>;
 /** A `Float64Array` of Amount values. */
 export type AmountArray<S extends SystemName = SystemName> = QuantityArray<AmountDimension, S>;
 
 /** Dimension of Angle. Plane angle: rad in both systems (a dimension of its own here). */
-export type AngleDimension = Dim<{ angle: 1 }>;
+export type AngleDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, 0, 1, 0>;
 /** Plane angle: rad in both systems (a dimension of its own here). System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
 export type Angle<S extends SystemName = SystemName> = Quantity<AngleDimension, S>;
 /** A `Float64Array` of Angle values. */
 export type AngleArray<S extends SystemName = SystemName> = QuantityArray<AngleDimension, S>;
 
 /** Dimension of SolidAngle. Solid angle: sr in both systems (a dimension of its own here). */
-export type SolidAngleDimension = Dim<{ solidAngle: 1 }>;
+export type SolidAngleDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, 0, 0, 1>;
 /** Solid angle: sr in both systems (a dimension of its own here). System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
 export type SolidAngle<S extends SystemName = SystemName> = Quantity<SolidAngleDimension, S>;
 /** A `Float64Array` of SolidAngle values. */
 export type SolidAngleArray<S extends SystemName = SystemName> = QuantityArray<SolidAngleDimension, S>;
 
 /** Dimension of Area. Area: m² or cm². */
-export type AreaDimension = Dim<{ length: 2 }>;
+export type AreaDimension = L_M_T_K_N_A_Sr<2, 0, 0, 0, 0, 0, 0>;
 /** Area: m² or cm². `S` is the system its value is expressed in. */
 export type Area<S extends SystemName> = Quantity<AreaDimension, S>;
 /** A `Float64Array` of Area values in system `S`. */
 export type AreaArray<S extends SystemName> = QuantityArray<AreaDimension, S>;
 
 /** Dimension of Volume. Volume: m³ or cm³. */
-export type VolumeDimension = Dim<{ length: 3 }>;
+export type VolumeDimension = L_M_T_K_N_A_Sr<3, 0, 0, 0, 0, 0, 0>;
 /** Volume: m³ or cm³. `S` is the system its value is expressed in. */
 export type Volume<S extends SystemName> = Quantity<VolumeDimension, S>;
 /** A `Float64Array` of Volume values in system `S`. */
 export type VolumeArray<S extends SystemName> = QuantityArray<VolumeDimension, S>;
 
 /** Dimension of Velocity. Velocity: m s⁻¹ or cm s⁻¹. */
-export type VelocityDimension = Dim<{ length: 1; time: -1 }>;
+export type VelocityDimension = L_M_T_K_N_A_Sr<1, 0, -1, 0, 0, 0, 0>;
 /** Velocity: m s⁻¹ or cm s⁻¹. `S` is the system its value is expressed in. */
 export type Velocity<S extends SystemName> = Quantity<VelocityDimension, S>;
 /** A `Float64Array` of Velocity values in system `S`. */
 export type VelocityArray<S extends SystemName> = QuantityArray<VelocityDimension, S>;
 
 /** Dimension of Acceleration. Acceleration: m s⁻² or cm s⁻² (Gal). */
-export type AccelerationDimension = Dim<{ length: 1; time: -2 }>;
+export type AccelerationDimension = L_M_T_K_N_A_Sr<1, 0, -2, 0, 0, 0, 0>;
 /** Acceleration: m s⁻² or cm s⁻² (Gal). `S` is the system its value is expressed in. */
 export type Acceleration<S extends SystemName> = Quantity<AccelerationDimension, S>;
 /** A `Float64Array` of Acceleration values in system `S`. */
 export type AccelerationArray<S extends SystemName> = QuantityArray<AccelerationDimension, S>;
 
 /** Dimension of Frequency. Frequency: Hz in both systems. */
-export type FrequencyDimension = Dim<{ time: -1 }>;
+export type FrequencyDimension = L_M_T_K_N_A_Sr<0, 0, -1, 0, 0, 0, 0>;
 /** Frequency: Hz in both systems. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
 export type Frequency<S extends SystemName = SystemName> = Quantity<FrequencyDimension, S>;
 /** A `Float64Array` of Frequency values. */
 export type FrequencyArray<S extends SystemName = SystemName> = QuantityArray<FrequencyDimension, S>;
 
 /** Dimension of Wavenumber. Wavenumber (inverse length): m⁻¹ or cm⁻¹. */
-export type WavenumberDimension = Dim<{ length: -1 }>;
+export type WavenumberDimension = L_M_T_K_N_A_Sr<-1, 0, 0, 0, 0, 0, 0>;
 /** Wavenumber (inverse length): m⁻¹ or cm⁻¹. `S` is the system its value is expressed in. */
 export type Wavenumber<S extends SystemName> = Quantity<WavenumberDimension, S>;
 /** A `Float64Array` of Wavenumber values in system `S`. */
 export type WavenumberArray<S extends SystemName> = QuantityArray<WavenumberDimension, S>;
 
 /** Dimension of Force. Force: N or dyn. */
-export type ForceDimension = Dim<{ length: 1; mass: 1; time: -2 }>;
+export type ForceDimension = L_M_T_K_N_A_Sr<1, 1, -2, 0, 0, 0, 0>;
 /** Force: N or dyn. `S` is the system its value is expressed in. */
 export type Force<S extends SystemName> = Quantity<ForceDimension, S>;
 /** A `Float64Array` of Force values in system `S`. */
 export type ForceArray<S extends SystemName> = QuantityArray<ForceDimension, S>;
 
 /** Dimension of Energy. Energy: J or erg. */
-export type EnergyDimension = Dim<{ length: 2; mass: 1; time: -2 }>;
+export type EnergyDimension = L_M_T_K_N_A_Sr<2, 1, -2, 0, 0, 0, 0>;
 /** Energy: J or erg. `S` is the system its value is expressed in. */
 export type Energy<S extends SystemName> = Quantity<EnergyDimension, S>;
 /** A `Float64Array` of Energy values in system `S`. */
 export type EnergyArray<S extends SystemName> = QuantityArray<EnergyDimension, S>;
 
 /** Dimension of Power. Power (luminosity): W or erg s⁻¹. */
-export type PowerDimension = Dim<{ length: 2; mass: 1; time: -3 }>;
+export type PowerDimension = L_M_T_K_N_A_Sr<2, 1, -3, 0, 0, 0, 0>;
 /** Power (luminosity): W or erg s⁻¹. `S` is the system its value is expressed in. */
 export type Power<S extends SystemName> = Quantity<PowerDimension, S>;
 /** A `Float64Array` of Power values in system `S`. */
 export type PowerArray<S extends SystemName> = QuantityArray<PowerDimension, S>;
 
 /** Dimension of Action. Action (energy × time): J s or erg s. */
-export type ActionDimension = Dim<{ length: 2; mass: 1; time: -1 }>;
+export type ActionDimension = L_M_T_K_N_A_Sr<2, 1, -1, 0, 0, 0, 0>;
 /** Action (energy × time): J s or erg s. `S` is the system its value is expressed in. */
 export type Action<S extends SystemName> = Quantity<ActionDimension, S>;
 /** A `Float64Array` of Action values in system `S`. */
 export type ActionArray<S extends SystemName> = QuantityArray<ActionDimension, S>;
 
 /** Dimension of Density. Mass density: kg m⁻³ or g cm⁻³. */
-export type DensityDimension = Dim<{ length: -3; mass: 1 }>;
+export type DensityDimension = L_M_T_K_N_A_Sr<-3, 1, 0, 0, 0, 0, 0>;
 /** Mass density: kg m⁻³ or g cm⁻³. `S` is the system its value is expressed in. */
 export type Density<S extends SystemName> = Quantity<DensityDimension, S>;
 /** A `Float64Array` of Density values in system `S`. */
 export type DensityArray<S extends SystemName> = QuantityArray<DensityDimension, S>;
 
 /** Dimension of HeatCapacity. Energy per kelvin (e.g. Boltzmann's constant): J K⁻¹ or erg K⁻¹. */
-export type HeatCapacityDimension = Dim<{ length: 2; mass: 1; time: -2; temperature: -1 }>;
+export type HeatCapacityDimension = L_M_T_K_N_A_Sr<2, 1, -2, -1, 0, 0, 0>;
 /** Energy per kelvin (e.g. Boltzmann's constant): J K⁻¹ or erg K⁻¹. `S` is the system its value is expressed in. */
 export type HeatCapacity<S extends SystemName> = Quantity<HeatCapacityDimension, S>;
 /** A `Float64Array` of HeatCapacity values in system `S`. */
 export type HeatCapacityArray<S extends SystemName> = QuantityArray<HeatCapacityDimension, S>;
 
 /** Dimension of GravitationalParameter. Mass parameter GM: m³ s⁻² or cm³ s⁻². */
-export type GravitationalParameterDimension = Dim<{ length: 3; time: -2 }>;
+export type GravitationalParameterDimension = L_M_T_K_N_A_Sr<3, 0, -2, 0, 0, 0, 0>;
 /** Mass parameter GM: m³ s⁻² or cm³ s⁻². `S` is the system its value is expressed in. */
 export type GravitationalParameter<S extends SystemName> = Quantity<GravitationalParameterDimension, S>;
 /** A `Float64Array` of GravitationalParameter values in system `S`. */
 export type GravitationalParameterArray<S extends SystemName> = QuantityArray<GravitationalParameterDimension, S>;
 
 /** Dimension of GravitationalConstant. Newton's G: m³ kg⁻¹ s⁻² or cm³ g⁻¹ s⁻². */
-export type GravitationalConstantDimension = Dim<{ length: 3; mass: -1; time: -2 }>;
+export type GravitationalConstantDimension = L_M_T_K_N_A_Sr<3, -1, -2, 0, 0, 0, 0>;
 /** Newton's G: m³ kg⁻¹ s⁻² or cm³ g⁻¹ s⁻². `S` is the system its value is expressed in. */
 export type GravitationalConstant<S extends SystemName> = Quantity<GravitationalConstantDimension, S>;
 /** A `Float64Array` of GravitationalConstant values in system `S`. */
 export type GravitationalConstantArray<S extends SystemName> = QuantityArray<GravitationalConstantDimension, S>;
 
 /** Dimension of Flux. Energy flux (irradiance, exitance, bolometric flux): W m⁻² or erg s⁻¹ cm⁻². */
-export type FluxDimension = Dim<{ mass: 1; time: -3 }>;
+export type FluxDimension = L_M_T_K_N_A_Sr<0, 1, -3, 0, 0, 0, 0>;
 /** Energy flux (irradiance, exitance, bolometric flux): W m⁻² or erg s⁻¹ cm⁻². `S` is the system its value is expressed in. */
 export type Flux<S extends SystemName> = Quantity<FluxDimension, S>;
 /** A `Float64Array` of Flux values in system `S`. */
 export type FluxArray<S extends SystemName> = QuantityArray<FluxDimension, S>;
 
 /** Dimension of Radiance. Radiance (per steradian): W m⁻² sr⁻¹ or erg s⁻¹ cm⁻² sr⁻¹. */
-export type RadianceDimension = Dim<{ mass: 1; time: -3; solidAngle: -1 }>;
+export type RadianceDimension = L_M_T_K_N_A_Sr<0, 1, -3, 0, 0, 0, -1>;
 /** Radiance (per steradian): W m⁻² sr⁻¹ or erg s⁻¹ cm⁻² sr⁻¹. `S` is the system its value is expressed in. */
 export type Radiance<S extends SystemName> = Quantity<RadianceDimension, S>;
 /** A `Float64Array` of Radiance values in system `S`. */
 export type RadianceArray<S extends SystemName> = QuantityArray<RadianceDimension, S>;
 
 /** Dimension of SpectralRadiancePerWavelength. Spectral radiance per unit wavelength B_λ: W m⁻² sr⁻¹ m⁻¹ or erg s⁻¹ cm⁻² sr⁻¹ cm⁻¹. */
-export type SpectralRadiancePerWavelengthDimension = Dim<{ length: -1; mass: 1; time: -3; solidAngle: -1 }>;
+export type SpectralRadiancePerWavelengthDimension = L_M_T_K_N_A_Sr<-1, 1, -3, 0, 0, 0, -1>;
 /** Spectral radiance per unit wavelength B_λ: W m⁻² sr⁻¹ m⁻¹ or erg s⁻¹ cm⁻² sr⁻¹ cm⁻¹. `S` is the system its value is expressed in. */
 export type SpectralRadiancePerWavelength<S extends SystemName> = Quantity<SpectralRadiancePerWavelengthDimension, S>;
 /** A `Float64Array` of SpectralRadiancePerWavelength values in system `S`. */
 export type SpectralRadiancePerWavelengthArray<S extends SystemName> = QuantityArray<SpectralRadiancePerWavelengthDimension, S>;
 
 /** Dimension of SpectralRadiancePerFrequency. Spectral radiance per unit frequency B_ν: W m⁻² sr⁻¹ Hz⁻¹ or erg s⁻¹ cm⁻² sr⁻¹ Hz⁻¹. */
-export type SpectralRadiancePerFrequencyDimension = Dim<{ mass: 1; time: -2; solidAngle: -1 }>;
+export type SpectralRadiancePerFrequencyDimension = L_M_T_K_N_A_Sr<0, 1, -2, 0, 0, 0, -1>;
 /** Spectral radiance per unit frequency B_ν: W m⁻² sr⁻¹ Hz⁻¹ or erg s⁻¹ cm⁻² sr⁻¹ Hz⁻¹. `S` is the system its value is expressed in. */
 export type SpectralRadiancePerFrequency<S extends SystemName> = Quantity<SpectralRadiancePerFrequencyDimension, S>;
 /** A `Float64Array` of SpectralRadiancePerFrequency values in system `S`. */
 export type SpectralRadiancePerFrequencyArray<S extends SystemName> = QuantityArray<SpectralRadiancePerFrequencyDimension, S>;
 
 /** Dimension of SpectralRadiancePerWavenumber. Spectral radiance per unit wavenumber: W m⁻² sr⁻¹ (m⁻¹)⁻¹ or erg s⁻¹ cm⁻² sr⁻¹ (cm⁻¹)⁻¹. */
-export type SpectralRadiancePerWavenumberDimension = Dim<{ length: 1; mass: 1; time: -3; solidAngle: -1 }>;
+export type SpectralRadiancePerWavenumberDimension = L_M_T_K_N_A_Sr<1, 1, -3, 0, 0, 0, -1>;
 /** Spectral radiance per unit wavenumber: W m⁻² sr⁻¹ (m⁻¹)⁻¹ or erg s⁻¹ cm⁻² sr⁻¹ (cm⁻¹)⁻¹. `S` is the system its value is expressed in. */
 export type SpectralRadiancePerWavenumber<S extends SystemName> = Quantity<SpectralRadiancePerWavenumberDimension, S>;
 /** A `Float64Array` of SpectralRadiancePerWavenumber values in system `S`. */
 export type SpectralRadiancePerWavenumberArray<S extends SystemName> = QuantityArray<SpectralRadiancePerWavenumberDimension, S>;
 
 /** Dimension of SpectralFluxPerWavelength. Spectral flux density per unit wavelength f_λ: W m⁻² m⁻¹ or erg s⁻¹ cm⁻² cm⁻¹. */
-export type SpectralFluxPerWavelengthDimension = Dim<{ length: -1; mass: 1; time: -3 }>;
+export type SpectralFluxPerWavelengthDimension = L_M_T_K_N_A_Sr<-1, 1, -3, 0, 0, 0, 0>;
 /** Spectral flux density per unit wavelength f_λ: W m⁻² m⁻¹ or erg s⁻¹ cm⁻² cm⁻¹. `S` is the system its value is expressed in. */
 export type SpectralFluxPerWavelength<S extends SystemName> = Quantity<SpectralFluxPerWavelengthDimension, S>;
 /** A `Float64Array` of SpectralFluxPerWavelength values in system `S`. */
 export type SpectralFluxPerWavelengthArray<S extends SystemName> = QuantityArray<SpectralFluxPerWavelengthDimension, S>;
 
 /** Dimension of SpectralFluxPerFrequency. Spectral flux density per unit frequency f_ν: W m⁻² Hz⁻¹ or erg s⁻¹ cm⁻² Hz⁻¹ (Jy = 10⁻²⁶ W m⁻² Hz⁻¹). */
-export type SpectralFluxPerFrequencyDimension = Dim<{ mass: 1; time: -2 }>;
+export type SpectralFluxPerFrequencyDimension = L_M_T_K_N_A_Sr<0, 1, -2, 0, 0, 0, 0>;
 /** Spectral flux density per unit frequency f_ν: W m⁻² Hz⁻¹ or erg s⁻¹ cm⁻² Hz⁻¹ (Jy = 10⁻²⁶ W m⁻² Hz⁻¹). `S` is the system its value is expressed in. */
 export type SpectralFluxPerFrequency<S extends SystemName> = Quantity<SpectralFluxPerFrequencyDimension, S>;
 /** A `Float64Array` of SpectralFluxPerFrequency values in system `S`. */
 export type SpectralFluxPerFrequencyArray<S extends SystemName> = QuantityArray<SpectralFluxPerFrequencyDimension, S>;
 
 /** Dimension of SpectralFluxPerWavenumber. Spectral flux density per unit wavenumber: W m⁻² (m⁻¹)⁻¹. */
-export type SpectralFluxPerWavenumberDimension = Dim<{ length: 1; mass: 1; time: -3 }>;
+export type SpectralFluxPerWavenumberDimension = L_M_T_K_N_A_Sr<1, 1, -3, 0, 0, 0, 0>;
 /** Spectral flux density per unit wavenumber: W m⁻² (m⁻¹)⁻¹. `S` is the system its value is expressed in. */
 export type SpectralFluxPerWavenumber<S extends SystemName> = Quantity<SpectralFluxPerWavenumberDimension, S>;
 /** A `Float64Array` of SpectralFluxPerWavenumber values in system `S`. */
 export type SpectralFluxPerWavenumberArray<S extends SystemName> = QuantityArray<SpectralFluxPerWavenumberDimension, S>;
 
 /** Dimension of PhotonRate. Photon emission rate: photons s⁻¹ (dimension of a frequency). */
-export type PhotonRateDimension = Dim<{ time: -1 }>;
+export type PhotonRateDimension = L_M_T_K_N_A_Sr<0, 0, -1, 0, 0, 0, 0>;
 /** Photon emission rate: photons s⁻¹ (dimension of a frequency). System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
 export type PhotonRate<S extends SystemName = SystemName> = Quantity<PhotonRateDimension, S>;
 /** A `Float64Array` of PhotonRate values. */
 export type PhotonRateArray<S extends SystemName = SystemName> = QuantityArray<PhotonRateDimension, S>;
 
 /** Dimension of PhotonFlux. Photon flux: photons s⁻¹ m⁻² or cm⁻². */
-export type PhotonFluxDimension = Dim<{ length: -2; time: -1 }>;
+export type PhotonFluxDimension = L_M_T_K_N_A_Sr<-2, 0, -1, 0, 0, 0, 0>;
 /** Photon flux: photons s⁻¹ m⁻² or cm⁻². `S` is the system its value is expressed in. */
 export type PhotonFlux<S extends SystemName> = Quantity<PhotonFluxDimension, S>;
 /** A `Float64Array` of PhotonFlux values in system `S`. */
 export type PhotonFluxArray<S extends SystemName> = QuantityArray<PhotonFluxDimension, S>;
 
 /** Dimension of PhotonRadiance. Photon radiance: photons s⁻¹ m⁻² sr⁻¹. */
-export type PhotonRadianceDimension = Dim<{ length: -2; time: -1; solidAngle: -1 }>;
+export type PhotonRadianceDimension = L_M_T_K_N_A_Sr<-2, 0, -1, 0, 0, 0, -1>;
 /** Photon radiance: photons s⁻¹ m⁻² sr⁻¹. `S` is the system its value is expressed in. */
 export type PhotonRadiance<S extends SystemName> = Quantity<PhotonRadianceDimension, S>;
 /** A `Float64Array` of PhotonRadiance values in system `S`. */
 export type PhotonRadianceArray<S extends SystemName> = QuantityArray<PhotonRadianceDimension, S>;
 
 /** Dimension of SpectralPhotonRadiancePerWavelength. Spectral photon radiance per unit wavelength: photons s⁻¹ m⁻² sr⁻¹ m⁻¹. */
-export type SpectralPhotonRadiancePerWavelengthDimension = Dim<{ length: -3; time: -1; solidAngle: -1 }>;
+export type SpectralPhotonRadiancePerWavelengthDimension = L_M_T_K_N_A_Sr<-3, 0, -1, 0, 0, 0, -1>;
 /** Spectral photon radiance per unit wavelength: photons s⁻¹ m⁻² sr⁻¹ m⁻¹. `S` is the system its value is expressed in. */
 export type SpectralPhotonRadiancePerWavelength<S extends SystemName> = Quantity<SpectralPhotonRadiancePerWavelengthDimension, S>;
 /** A `Float64Array` of SpectralPhotonRadiancePerWavelength values in system `S`. */
 export type SpectralPhotonRadiancePerWavelengthArray<S extends SystemName> = QuantityArray<SpectralPhotonRadiancePerWavelengthDimension, S>;
 
 /** Dimension of SpectralPhotonRadiancePerFrequency. Spectral photon radiance per unit frequency: photons s⁻¹ m⁻² sr⁻¹ Hz⁻¹. */
-export type SpectralPhotonRadiancePerFrequencyDimension = Dim<{ length: -2; solidAngle: -1 }>;
+export type SpectralPhotonRadiancePerFrequencyDimension = L_M_T_K_N_A_Sr<-2, 0, 0, 0, 0, 0, -1>;
 /** Spectral photon radiance per unit frequency: photons s⁻¹ m⁻² sr⁻¹ Hz⁻¹. `S` is the system its value is expressed in. */
 export type SpectralPhotonRadiancePerFrequency<S extends SystemName> = Quantity<SpectralPhotonRadiancePerFrequencyDimension, S>;
 /** A `Float64Array` of SpectralPhotonRadiancePerFrequency values in system `S`. */
 export type SpectralPhotonRadiancePerFrequencyArray<S extends SystemName> = QuantityArray<SpectralPhotonRadiancePerFrequencyDimension, S>;
 
 /** Dimension of SpectralPhotonRadiancePerWavenumber. Spectral photon radiance per unit wavenumber: photons s⁻¹ m⁻² sr⁻¹ (m⁻¹)⁻¹. */
-export type SpectralPhotonRadiancePerWavenumberDimension = Dim<{ length: -1; time: -1; solidAngle: -1 }>;
+export type SpectralPhotonRadiancePerWavenumberDimension = L_M_T_K_N_A_Sr<-1, 0, -1, 0, 0, 0, -1>;
 /** Spectral photon radiance per unit wavenumber: photons s⁻¹ m⁻² sr⁻¹ (m⁻¹)⁻¹. `S` is the system its value is expressed in. */
 export type SpectralPhotonRadiancePerWavenumber<S extends SystemName> = Quantity<SpectralPhotonRadiancePerWavenumberDimension, S>;
 /** A `Float64Array` of SpectralPhotonRadiancePerWavenumber values in system `S`. */
 export type SpectralPhotonRadiancePerWavenumberArray<S extends SystemName> = QuantityArray<SpectralPhotonRadiancePerWavenumberDimension, S>;
 
 /** Dimension of FluxPerTemperature4. Stefan–Boltzmann-like constant: W m⁻² K⁻⁴. */
-export type FluxPerTemperature4Dimension = Dim<{ mass: 1; time: -3; temperature: -4 }>;
+export type FluxPerTemperature4Dimension = L_M_T_K_N_A_Sr<0, 1, -3, -4, 0, 0, 0>;
 /** Stefan–Boltzmann-like constant: W m⁻² K⁻⁴. `S` is the system its value is expressed in. */
 export type FluxPerTemperature4<S extends SystemName> = Quantity<FluxPerTemperature4Dimension, S>;
 /** A `Float64Array` of FluxPerTemperature4 values in system `S`. */
 export type FluxPerTemperature4Array<S extends SystemName> = QuantityArray<FluxPerTemperature4Dimension, S>;
 
 /** Dimension of LengthTemperature. Length × temperature (Wien's b, c₂): m K. */
-export type LengthTemperatureDimension = Dim<{ length: 1; temperature: 1 }>;
+export type LengthTemperatureDimension = L_M_T_K_N_A_Sr<1, 0, 0, 1, 0, 0, 0>;
 /** Length × temperature (Wien's b, c₂): m K. `S` is the system its value is expressed in. */
 export type LengthTemperature<S extends SystemName> = Quantity<LengthTemperatureDimension, S>;
 /** A `Float64Array` of LengthTemperature values in system `S`. */
 export type LengthTemperatureArray<S extends SystemName> = QuantityArray<LengthTemperatureDimension, S>;
 
 /** Dimension of FrequencyPerTemperature. Frequency per kelvin (Wien's b′): Hz K⁻¹. */
-export type FrequencyPerTemperatureDimension = Dim<{ time: -1; temperature: -1 }>;
+export type FrequencyPerTemperatureDimension = L_M_T_K_N_A_Sr<0, 0, -1, -1, 0, 0, 0>;
 /** Frequency per kelvin (Wien's b′): Hz K⁻¹. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
 export type FrequencyPerTemperature<S extends SystemName = SystemName> = Quantity<FrequencyPerTemperatureDimension, S>;
 /** A `Float64Array` of FrequencyPerTemperature values. */
 export type FrequencyPerTemperatureArray<S extends SystemName = SystemName> = QuantityArray<FrequencyPerTemperatureDimension, S>;
 
 /** Dimension of PowerArea. Power × area (c₁): W m². */
-export type PowerAreaDimension = Dim<{ length: 4; mass: 1; time: -3 }>;
+export type PowerAreaDimension = L_M_T_K_N_A_Sr<4, 1, -3, 0, 0, 0, 0>;
 /** Power × area (c₁): W m². `S` is the system its value is expressed in. */
 export type PowerArea<S extends SystemName> = Quantity<PowerAreaDimension, S>;
 /** A `Float64Array` of PowerArea values in system `S`. */
 export type PowerAreaArray<S extends SystemName> = QuantityArray<PowerAreaDimension, S>;
 
 /** Dimension of PowerAreaPerSolidAngle. Power × area per steradian (c₁L): W m² sr⁻¹. */
-export type PowerAreaPerSolidAngleDimension = Dim<{ length: 4; mass: 1; time: -3; solidAngle: -1 }>;
+export type PowerAreaPerSolidAngleDimension = L_M_T_K_N_A_Sr<4, 1, -3, 0, 0, 0, -1>;
 /** Power × area per steradian (c₁L): W m² sr⁻¹. `S` is the system its value is expressed in. */
 export type PowerAreaPerSolidAngle<S extends SystemName> = Quantity<PowerAreaPerSolidAngleDimension, S>;
 /** A `Float64Array` of PowerAreaPerSolidAngle values in system `S`. */
 export type PowerAreaPerSolidAngleArray<S extends SystemName> = QuantityArray<PowerAreaPerSolidAngleDimension, S>;
 
 /** Dimension of PerAmount. Per mole (Avogadro): mol⁻¹. */
-export type PerAmountDimension = Dim<{ amount: -1 }>;
+export type PerAmountDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, -1, 0, 0>;
 /** Per mole (Avogadro): mol⁻¹. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
 export type PerAmount<S extends SystemName = SystemName> = Quantity<PerAmountDimension, S>;
 /** A `Float64Array` of PerAmount values. */
 export type PerAmountArray<S extends SystemName = SystemName> = QuantityArray<PerAmountDimension, S>;
 
 /** Dimension of MolarHeatCapacity. J mol⁻¹ K⁻¹ (gas constant). */
-export type MolarHeatCapacityDimension = Dim<{ length: 2; mass: 1; time: -2; temperature: -1; amount: -1 }>;
+export type MolarHeatCapacityDimension = L_M_T_K_N_A_Sr<2, 1, -2, -1, -1, 0, 0>;
 /** J mol⁻¹ K⁻¹ (gas constant). `S` is the system its value is expressed in. */
 export type MolarHeatCapacity<S extends SystemName> = Quantity<MolarHeatCapacityDimension, S>;
 /** A `Float64Array` of MolarHeatCapacity values in system `S`. */
 export type MolarHeatCapacityArray<S extends SystemName> = QuantityArray<MolarHeatCapacityDimension, S>;
 
 /** Dimension of AngularArea. Angle squared (rad²): not a solid angle; see `asSolidAngle`. */
-export type AngularAreaDimension = Dim<{ angle: 2 }>;
+export type AngularAreaDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, 0, 2, 0>;
 /** Angle squared (rad²): not a solid angle; see `asSolidAngle`. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
 export type AngularArea<S extends SystemName = SystemName> = Quantity<AngularAreaDimension, S>;
 /** A `Float64Array` of AngularArea values. */

@@ -22,26 +22,29 @@ import type {
   SystemOf,
 } from "./quantity";
 
-/** A quantity or a plain number. */
-export type Operand = AnyQuantity | number;
+/**
+ * An operand of `mul`, `div`, `inv`, `pow`, `sqrt`, `cbrt`: a branded
+ * quantity. (Multiply by a plain number with {@link scale}.)
+ */
+export type Operand = AnyQuantity;
 
 /** The type of `a * b`. */
-export type Product<A, B> = QuantityWithTag<
+export type Product<A extends AnyQuantity, B extends AnyQuantity> = QuantityWithTag<
   DimProduct<DimensionOf<A>, DimensionOf<B>>,
   CombinedTag<SystemOf<A>, SystemOf<B>>
 >;
 
 /** The type of `a / b`. */
-export type Quotient<A, B> = QuantityWithTag<
+export type Quotient<A extends AnyQuantity, B extends AnyQuantity> = QuantityWithTag<
   DimQuotient<DimensionOf<A>, DimensionOf<B>>,
   CombinedTag<SystemOf<A>, SystemOf<B>>
 >;
 
 /** The type of `1 / a`. */
-export type Inverse<A> = QuantityWithTag<DimInverse<DimensionOf<A>>, SystemOf<A>>;
+export type Inverse<A extends AnyQuantity> = QuantityWithTag<DimInverse<DimensionOf<A>>, SystemOf<A>>;
 
 /** The type of `a ** n` (named `Raised` because `Power` is the physical quantity). */
-export type Raised<A, N extends PowerExponent> = QuantityWithTag<DimPower<DimensionOf<A>, N>, SystemOf<A>>;
+export type Raised<A extends AnyQuantity, N extends PowerExponent> = QuantityWithTag<DimPower<DimensionOf<A>, N>, SystemOf<A>>;
 
 /** Marker in a compile error: a square root needs every exponent even. */
 export interface SquareRootNeedsEvenExponents<Q> {

@@ -45,24 +45,100 @@ export interface Dimension {
 
 type Key = BaseDimension;
 
+/**
+ * A concrete dimension with its seven exponents as type arguments, in the
+ * order Length, Mass, Time, temperature (K), amouNt, Angle, solid angle (Sr):
+ * `L_M_T_K_N_A_Sr<2, 1, -3, 0, 0, 0, 0>` is power. Type arguments are
+ * evaluated eagerly, so long chains of products stay flat and fast to check.
+ */
+export interface L_M_T_K_N_A_Sr<
+  L extends Exponent,
+  M extends Exponent,
+  T extends Exponent,
+  K extends Exponent,
+  N extends Exponent,
+  A extends Exponent,
+  Sr extends Exponent,
+> extends Dimension {
+  readonly length: L;
+  readonly mass: M;
+  readonly time: T;
+  readonly temperature: K;
+  readonly amount: N;
+  readonly angle: A;
+  readonly solidAngle: Sr;
+}
+
+// Two details below keep long chains of operations flat (no "excessively
+// deep" errors): each result is wrapped in a conditional type, and its type
+// arguments are written inline without helper aliases. TypeScript defers the
+// type arguments of a reference that is a type alias's whole body, or whose
+// arguments go through another alias; deferred arguments pile up as a chain.
+
 /** Exponent-wise sum of two dimensions (the dimension of a product). */
-export type DimProduct<A extends Dimension, B extends Dimension> = {
-  readonly [K in Key]: AddTable[`${A[K]}`][`${B[K]}`];
-};
+export type DimProduct<A extends Dimension, B extends Dimension> = A extends Dimension
+  ? L_M_T_K_N_A_Sr<
+  AddTable[`${A["length"]}`][`${B["length"]}`],
+  AddTable[`${A["mass"]}`][`${B["mass"]}`],
+  AddTable[`${A["time"]}`][`${B["time"]}`],
+  AddTable[`${A["temperature"]}`][`${B["temperature"]}`],
+  AddTable[`${A["amount"]}`][`${B["amount"]}`],
+  AddTable[`${A["angle"]}`][`${B["angle"]}`],
+  AddTable[`${A["solidAngle"]}`][`${B["solidAngle"]}`]
+  >
+  : never;
 
 /** The inverse dimension (all exponents negated). */
-export type DimInverse<A extends Dimension> = { readonly [K in Key]: NegTable[`${A[K]}`] };
+export type DimInverse<A extends Dimension> = A extends Dimension
+  ? L_M_T_K_N_A_Sr<
+  NegTable[`${A["length"]}`],
+  NegTable[`${A["mass"]}`],
+  NegTable[`${A["time"]}`],
+  NegTable[`${A["temperature"]}`],
+  NegTable[`${A["amount"]}`],
+  NegTable[`${A["angle"]}`],
+  NegTable[`${A["solidAngle"]}`]
+  >
+  : never;
 
 /** Exponent-wise difference (the dimension of a quotient). */
-export type DimQuotient<A extends Dimension, B extends Dimension> = {
-  readonly [K in Key]: AddTable[`${A[K]}`][`${NegTable[`${B[K]}`]}`];
-};
+export type DimQuotient<A extends Dimension, B extends Dimension> = A extends Dimension
+  ? L_M_T_K_N_A_Sr<
+  AddTable[`${A["length"]}`][`${NegTable[`${B["length"]}`]}`],
+  AddTable[`${A["mass"]}`][`${NegTable[`${B["mass"]}`]}`],
+  AddTable[`${A["time"]}`][`${NegTable[`${B["time"]}`]}`],
+  AddTable[`${A["temperature"]}`][`${NegTable[`${B["temperature"]}`]}`],
+  AddTable[`${A["amount"]}`][`${NegTable[`${B["amount"]}`]}`],
+  AddTable[`${A["angle"]}`][`${NegTable[`${B["angle"]}`]}`],
+  AddTable[`${A["solidAngle"]}`][`${NegTable[`${B["solidAngle"]}`]}`]
+  >
+  : never;
 
 /** Half of every exponent (never where one is odd). */
-export type DimSqrt<A extends Dimension> = { readonly [K in Key]: HalfTable[`${A[K]}`] };
+export type DimSqrt<A extends Dimension> = A extends Dimension
+  ? L_M_T_K_N_A_Sr<
+  HalfTable[`${A["length"]}`],
+  HalfTable[`${A["mass"]}`],
+  HalfTable[`${A["time"]}`],
+  HalfTable[`${A["temperature"]}`],
+  HalfTable[`${A["amount"]}`],
+  HalfTable[`${A["angle"]}`],
+  HalfTable[`${A["solidAngle"]}`]
+  >
+  : never;
 
 /** A third of every exponent (never where one is not divisible by 3). */
-export type DimCbrt<A extends Dimension> = { readonly [K in Key]: ThirdTable[`${A[K]}`] };
+export type DimCbrt<A extends Dimension> = A extends Dimension
+  ? L_M_T_K_N_A_Sr<
+  ThirdTable[`${A["length"]}`],
+  ThirdTable[`${A["mass"]}`],
+  ThirdTable[`${A["time"]}`],
+  ThirdTable[`${A["temperature"]}`],
+  ThirdTable[`${A["amount"]}`],
+  ThirdTable[`${A["angle"]}`],
+  ThirdTable[`${A["solidAngle"]}`]
+  >
+  : never;
 
 /** Supported integer powers for {@link pow}. */
 export type PowerExponent = -4 | -3 | -2 | -1 | 0 | 1 | 2 | 3 | 4;
@@ -87,19 +163,39 @@ export type DimPower<A extends Dimension, N extends PowerExponent> = N extends 0
                 : DimInverse<DimProduct<DimProduct<A, A>, DimProduct<A, A>>>;
 
 /** `true` when some exponent of a computed dimension is `never` (out of range, or an impossible root). */
-export type HasNever<D> = {
-  [K in keyof D]: [D[K]] extends [never] ? true : never;
-}[keyof D] extends never
-  ? false
+export type HasNever<D> = D extends Dimension
+  ? [D["length"]] extends [never]
+    ? true
+    : [D["mass"]] extends [never]
+      ? true
+      : [D["time"]] extends [never]
+        ? true
+        : [D["temperature"]] extends [never]
+          ? true
+          : [D["amount"]] extends [never]
+            ? true
+            : [D["angle"]] extends [never]
+              ? true
+              : [D["solidAngle"]] extends [never]
+                ? true
+                : false
   : true;
 
 /** A computed dimension, or the out-of-range marker when an exponent left -12..12. */
 export type CheckedDimension<D> = HasNever<D> extends true ? ExponentOutOfRange : D;
 
 /** Build a dimension type from a partial list of exponents (the rest are 0). */
-export type Dim<P extends Partial<Record<Key, Exponent>>> = {
-  readonly [K in Key]: P[K] extends Exponent ? P[K] : 0;
-};
+export type Dim<P extends Partial<Record<Key, Exponent>>> = P extends unknown
+  ? L_M_T_K_N_A_Sr<
+  P["length"] extends Exponent ? P["length"] : 0,
+  P["mass"] extends Exponent ? P["mass"] : 0,
+  P["time"] extends Exponent ? P["time"] : 0,
+  P["temperature"] extends Exponent ? P["temperature"] : 0,
+  P["amount"] extends Exponent ? P["amount"] : 0,
+  P["angle"] extends Exponent ? P["angle"] : 0,
+  P["solidAngle"] extends Exponent ? P["solidAngle"] : 0
+  >
+  : never;
 
 /** The dimension of a pure number. */
 export type NoDimension = Dim<{}>;

@@ -7,6 +7,7 @@
  */
 import type { CheckedDimension, Dimension, NoDimension, IsSystemFree } from "./dimension";
 
+
 declare const dimensionBrand: unique symbol;
 declare const systemBrand: unique symbol;
 
@@ -39,16 +40,21 @@ export type TagFor<D extends Dimension, S extends SystemTag> = IsSystemFree<D> e
  * const v: Quantity<Dim<{ length: 1; time: -1 }>, "SI"> = SI.of(30, units.km_per_s);
  * ```
  */
-export type Quantity<D extends Dimension, S extends SystemTag> = number & {
+export type Quantity<D extends Dimension, S extends SystemTag> = number &
+  Brand<D, D["length"] extends 0 ? (D["mass"] extends 0 ? "SI=CGS" : S) : S>;
+
+/**
+ * The compile-time-only brand of a quantity. An interface (rather than an
+ * object literal type) so that its type arguments are computed once, eagerly:
+ * long chains of typed operations stay flat and quick to check.
+ */
+export interface Brand<D extends Dimension, T extends SystemTag> {
   readonly [dimensionBrand]: D;
-  readonly [systemBrand]: TagFor<D, S>;
-};
+  readonly [systemBrand]: T;
+}
 
 /** Any quantity of any dimension and system (for constraints). */
-export type AnyQuantity = number & {
-  readonly [dimensionBrand]: Dimension;
-  readonly [systemBrand]: SystemTag;
-};
+export type AnyQuantity = number & Brand<Dimension, SystemTag>;
 
 /**
  * A pure number: a plain `number`, or a dimensionless quantity. A branded
@@ -60,22 +66,18 @@ export type Pure = number & {
 };
 
 /** A typed array of quantities: a `Float64Array` with the same brands. */
-export type QuantityArray<D extends Dimension, S extends SystemName> = Float64Array & {
-  readonly [dimensionBrand]: D;
-  readonly [systemBrand]: TagFor<D, S>;
-};
+export type QuantityArray<D extends Dimension, S extends SystemName> = D extends unknown
+  ? Float64Array & Brand<D, D["length"] extends 0 ? (D["mass"] extends 0 ? "SI=CGS" : S) : S>
+  : never;
 
 /** Any typed array of quantities. */
-export type AnyQuantityArray = Float64Array & {
-  readonly [dimensionBrand]: Dimension;
-  readonly [systemBrand]: SystemTag;
-};
+export type AnyQuantityArray = Float64Array & Brand<Dimension, SystemTag>;
 
-/** The dimension of a quantity type (`NoDimension` for a plain number). */
-export type DimensionOf<Q> = Q extends { readonly [dimensionBrand]: infer D extends Dimension } ? D : NoDimension;
+/** The dimension of a quantity type (an indexed access, so it resolves even inside generic code). */
+export type DimensionOf<Q extends AnyQuantity> = Q[typeof dimensionBrand];
 
-/** The system tag of a quantity type (`"SI=CGS"` for a plain number). */
-export type SystemOf<Q> = Q extends { readonly [systemBrand]: infer S extends SystemTag } ? S : "SI=CGS";
+/** The system tag of a quantity type. */
+export type SystemOf<Q extends AnyQuantity> = Q[typeof systemBrand];
 
 /**
  * The system tag of a product or quotient of quantities tagged `A` and `B`
@@ -90,10 +92,14 @@ export type CombinedTag<A extends SystemTag, B extends SystemTag> = [B] extends 
 
 /** `Quantity<D, …>` from a computed dimension and a tag; an out-of-range dimension is passed through as an error marker. */
 export type QuantityWithTag<D, T extends SystemTag> =
-  CheckedDimension<D> extends infer C ? (C extends Dimension ? Quantity<C, T> : C) : never;
+  CheckedDimension<D> extends infer C
+    ? C extends Dimension
+      ? Quantity<C, T>
+      : C
+    : never;
 
-/** Operands that may meet a quantity of system tag `T` in a product or quotient. */
-export type OperandFor<T extends SystemTag> = number & {
+/** Quantities that may meet a quantity of system tag `T` in a product or quotient: the same system, or system-free. */
+export type OperandFor<T extends SystemTag> = AnyQuantity & {
   readonly [systemBrand]?: T | "SI=CGS" | (T extends "SI=CGS" ? SystemName : never);
 };
 
