@@ -1,0 +1,85 @@
+/**
+ * Inverse-square law for an isotropic point emitter.
+ *
+ * All three kernels assume the source radiates isotropically (the same power
+ * per unit solid angle in every direction), there is no absorption or
+ * scattering between source and observer (apply extinction separately, see
+ * `extinction.ts`), and the distance is large enough that the source can be
+ * treated as a point (for a uniformly bright sphere of radius R the relation
+ * F = L/(4πd²) is in fact exact for any d ≥ R). Distances are Euclidean
+ * (no cosmological corrections).
+ *
+ * Source: the inverse-square law; e.g. any introductory astrophysics text.
+ *
+ * @module
+ */
+import { requirePositive } from "../../internal/checks";
+import { FOUR_PI, requirePositiveResult } from "./common";
+
+/**
+ * Bolometric (or band) flux received at a distance from an isotropic emitter:
+ * F = L / (4π d²).
+ *
+ * Evaluated as (L / 4π) / d / d so that d² never overflows; results that
+ * underflow below the smallest double throw.
+ *
+ * @param luminosityW - luminosity L, W (> 0, finite)
+ * @param distanceM - distance d, m (> 0, finite)
+ * @returns flux F, W m^-2
+ * @throws RangeError naming `luminosity` or `distance` when not finite and > 0
+ * @example
+ * ```ts
+ * import { fluxFromLuminositySI } from "./inverse-square";
+ * const solarConstant = fluxFromLuminositySI(3.828e26, 149597870700); // ≈ 1361 W m^-2
+ * ```
+ */
+export function fluxFromLuminositySI(luminosityW: number, distanceM: number): number {
+  requirePositive("luminosity", luminosityW, "W");
+  requirePositive("distance", distanceM, "m");
+  return requirePositiveResult("flux", luminosityW / FOUR_PI / distanceM / distanceM, "W m^-2");
+}
+
+/**
+ * Luminosity of an isotropic emitter from the flux received at a distance:
+ * L = 4π d² F.
+ *
+ * @param fluxWm2 - flux F, W m^-2 (> 0, finite)
+ * @param distanceM - distance d, m (> 0, finite)
+ * @returns luminosity L, W
+ * @throws RangeError naming `flux` or `distance`; or when L overflows a double
+ * @example
+ * ```ts
+ * import { luminosityFromFluxSI } from "./inverse-square";
+ * const lSun = luminosityFromFluxSI(1361, 149597870700); // ≈ 3.828e26 W
+ * ```
+ */
+export function luminosityFromFluxSI(fluxWm2: number, distanceM: number): number {
+  requirePositive("flux", fluxWm2, "W m^-2");
+  requirePositive("distance", distanceM, "m");
+  return requirePositiveResult("luminosity", FOUR_PI * fluxWm2 * distanceM * distanceM, "W");
+}
+
+/**
+ * Distance of an isotropic emitter of known luminosity from its flux (the
+ * "luminosity distance" in a static Euclidean space): d = √(L / (4π F)).
+ *
+ * Evaluated as √(L/4π) / √F when the direct quotient would overflow or
+ * underflow.
+ *
+ * @param luminosityW - luminosity L, W (> 0, finite)
+ * @param fluxWm2 - flux F, W m^-2 (> 0, finite)
+ * @returns distance d, m
+ * @throws RangeError naming `luminosity` or `flux`
+ * @example
+ * ```ts
+ * import { distanceFromLuminosityFluxSI } from "./inverse-square";
+ * const au = distanceFromLuminosityFluxSI(3.828e26, 1361); // ≈ 1.496e11 m
+ * ```
+ */
+export function distanceFromLuminosityFluxSI(luminosityW: number, fluxWm2: number): number {
+  requirePositive("luminosity", luminosityW, "W");
+  requirePositive("flux", fluxWm2, "W m^-2");
+  const q = luminosityW / (FOUR_PI * fluxWm2);
+  const d = q > 0 && q !== Infinity ? Math.sqrt(q) : Math.sqrt(luminosityW / FOUR_PI) / Math.sqrt(fluxWm2);
+  return requirePositiveResult("distance", d, "m");
+}

@@ -1,0 +1,163 @@
+/**
+ * Brightness temperature: the temperature of the blackbody whose Planck
+ * radiance equals a measured monochromatic radiance (exact inversion of
+ * Planck's law), and its Rayleigh–Jeans version used in radio astronomy.
+ *
+ * Exact: T_b = c₂ / (λ ln(1 + c₁L/(λ⁵B_λ))) = (hν/k) / ln(1 + 2hν³/(c²B_ν)),
+ * with ln(1 + y) evaluated as log1p(y) (accurate in the Rayleigh–Jeans regime
+ * y ≪ 1) and, when y itself would overflow or underflow, from ln y.
+ * Rayleigh–Jeans: T_RJ = λ⁴B_λ/(2ck) = c²B_ν/(2kν²).
+ * Source: e.g. Rybicki & Lightman, Radiative Processes in Astrophysics (1979), §1.5.
+ */
+import { C, C1L, K_B } from "../../constants/values";
+import { requirePositive } from "../../internal/checks";
+import { C2_HI, H_OVER_K_HI } from "./exact";
+import { TWO_H_OVER_C2 } from "./planck-core";
+
+const LN_C1L = Math.log(C1L);
+const LN_TWO_H_OVER_C2 = Math.log(TWO_H_OVER_C2);
+const LN_MAX = Math.log(Number.MAX_VALUE);
+const LN_C2 = Math.log(C2_HI);
+const LN_H_OVER_K = Math.log(H_OVER_K_HI);
+const NORMAL_MIN = 2.2250738585072014e-308;
+
+function isNormal(v: number): boolean {
+  return v >= NORMAL_MIN && v !== Infinity;
+}
+
+/**
+ * Shared inversion: T = num/ℓ with ℓ = ln(1 + y), y = exp(lnY) (y passed
+ * directly when it was computable, else NaN), num = exp(lnNum) (passed
+ * directly when computable, else NaN). Works in logs whenever a piece leaves
+ * the normal double range.
+ */
+function invert(num: number, lnNum: number, y: number, lnY: number, what: string): number {
+  let ell: number;
+  let lnEll: number;
+  if (isNormal(y)) {
+    ell = Math.log1p(y);
+    lnEll = Math.log(ell);
+  } else if (lnY > 0) {
+    ell = lnY + Math.log1p(Math.exp(-lnY)); // y huge: ln(1+y) = ln y + ln(1 + 1/y)
+    lnEll = Math.log(ell);
+  } else {
+    ell = Math.exp(lnY); // y tiny: ln(1+y) = y to double precision
+    lnEll = lnY;
+  }
+  if (isNormal(num) && isNormal(ell)) {
+    const T = num / ell;
+    if (isNormal(T)) return T;
+  }
+  const lnT = lnNum - lnEll;
+  if (lnT > LN_MAX) throw new RangeError(`${what} overflows the double range`);
+  return Math.exp(lnT);
+}
+
+/**
+ * Brightness temperature of a monochromatic radiance per unit wavelength,
+ * T_b = c₂ / (λ·ln(1 + 2hc²/(λ⁵B_λ))).
+ *
+ * @param wavelengthM - λ, m (finite, > 0)
+ * @param radiance - B_λ, W m^-2 sr^-1 m^-1 (finite, > 0)
+ * @returns T_b, K
+ * @throws RangeError for bad input
+ * Source: inversion of Planck's law.
+ * @example
+ * ```ts
+ * brightnessTemperatureWavelengthSI(500e-9, 2.63e13); // ≈ 5772 K
+ * ```
+ */
+export function brightnessTemperatureWavelengthSI(wavelengthM: number, radiance: number): number {
+  requirePositive("wavelength", wavelengthM, "m");
+  requirePositive("radiance", radiance, "W m^-2 sr^-1 m^-1");
+  const l = wavelengthM;
+  const lnL = Math.log(l);
+  const lnY = LN_C1L - 5 * lnL - Math.log(radiance);
+  let y = NaN;
+  let num = NaN;
+  if (l >= 1e-50 && l <= 1e50) {
+    const l2 = l * l;
+    y = C1L / (l2 * l2 * l) / radiance;
+    num = C2_HI / l;
+  }
+  return invert(num, LN_C2 - lnL, y, lnY, `brightness temperature (wavelength=${l} m, radiance=${radiance})`);
+}
+
+/**
+ * Brightness temperature of a monochromatic radiance per unit frequency,
+ * T_b = (hν/k) / ln(1 + 2hν³/(c²B_ν)).
+ *
+ * @param frequencyHz - ν, Hz (finite, > 0)
+ * @param radiance - B_ν, W m^-2 sr^-1 Hz^-1 (finite, > 0)
+ * @returns T_b, K
+ * @throws RangeError for bad input
+ * Source: inversion of Planck's law.
+ * @example
+ * ```ts
+ * brightnessTemperatureFrequencySI(1.6e11, 3.8e-18); // ≈ 2.7 K (CMB near its peak)
+ * ```
+ */
+export function brightnessTemperatureFrequencySI(frequencyHz: number, radiance: number): number {
+  requirePositive("frequency", frequencyHz, "Hz");
+  requirePositive("radiance", radiance, "W m^-2 sr^-1 Hz^-1");
+  const nu = frequencyHz;
+  const lnNu = Math.log(nu);
+  const lnY = LN_TWO_H_OVER_C2 + 3 * lnNu - Math.log(radiance);
+  let y = NaN;
+  let num = NaN;
+  if (nu >= 1e-80 && nu <= 1e80) {
+    y = (TWO_H_OVER_C2 * (nu * nu * nu)) / radiance;
+    num = H_OVER_K_HI * nu;
+  }
+  return invert(num, LN_H_OVER_K + lnNu, y, lnY, `brightness temperature (frequency=${nu} Hz, radiance=${radiance})`);
+}
+
+/**
+ * Rayleigh–Jeans brightness temperature per unit wavelength,
+ * T_RJ = λ⁴B_λ/(2ck) (equals the exact T_b only for hc/(λkT) ≪ 1).
+ *
+ * @param wavelengthM - λ, m (finite, > 0)
+ * @param radiance - B_λ, W m^-2 sr^-1 m^-1 (finite, > 0)
+ * @returns T_RJ, K
+ * @throws RangeError for bad input or overflow
+ * Source: Rayleigh–Jeans law.
+ * @example
+ * ```ts
+ * rayleighJeansBrightnessTemperatureWavelengthSI(0.21, 1e-9);
+ * ```
+ */
+export function rayleighJeansBrightnessTemperatureWavelengthSI(wavelengthM: number, radiance: number): number {
+  requirePositive("wavelength", wavelengthM, "m");
+  requirePositive("radiance", radiance, "W m^-2 sr^-1 m^-1");
+  const l2 = wavelengthM * wavelengthM;
+  const v = (l2 * l2 * radiance) / (2 * C * K_B);
+  if (isNormal(v) && isNormal(l2) && l2 * l2 !== Infinity) return v;
+  const lnT = 4 * Math.log(wavelengthM) + Math.log(radiance) - Math.log(2 * C * K_B);
+  if (lnT > LN_MAX) throw new RangeError(`Rayleigh–Jeans temperature overflows the double range for wavelength=${wavelengthM} m`);
+  return Math.exp(lnT);
+}
+
+/**
+ * Rayleigh–Jeans brightness temperature per unit frequency (the radio
+ * astronomer's T_B), T_RJ = c²B_ν/(2kν²).
+ *
+ * @param frequencyHz - ν, Hz (finite, > 0)
+ * @param radiance - B_ν, W m^-2 sr^-1 Hz^-1 (finite, > 0)
+ * @returns T_RJ, K
+ * @throws RangeError for bad input or overflow
+ * Source: Rayleigh–Jeans law.
+ * @example
+ * ```ts
+ * rayleighJeansBrightnessTemperatureFrequencySI(1.4204e9, 1e-20);
+ * ```
+ */
+export function rayleighJeansBrightnessTemperatureFrequencySI(frequencyHz: number, radiance: number): number {
+  requirePositive("frequency", frequencyHz, "Hz");
+  requirePositive("radiance", radiance, "W m^-2 sr^-1 Hz^-1");
+  const n2 = frequencyHz * frequencyHz;
+  const v = (C * C * radiance) / (2 * K_B) / n2;
+  if (isNormal(v) && isNormal(n2)) return v;
+  const lnT = 2 * Math.log(C) + Math.log(radiance) - Math.log(2 * K_B) - 2 * Math.log(frequencyHz);
+  if (lnT > LN_MAX) throw new RangeError(`Rayleigh–Jeans temperature overflows the double range for frequency=${frequencyHz} Hz`);
+  return Math.exp(lnT);
+}

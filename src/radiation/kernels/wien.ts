@@ -1,0 +1,289 @@
+/**
+ * Wien's displacement law: where the blackbody spectrum peaks.
+ *
+ * The peak of a density ∝ uⁿ⁻¹·... /(eˣ−1) solves x = n(1 − e^−x), x = hc/(λkT)
+ * or hν/(kT):
+ * - n = 5: peak of B_λ (energy per unit wavelength), x₅ ≈ 4.965114;
+ * - n = 3: peak of B_ν and of B_σ̃ (energy per unit frequency or wavenumber —
+ *   the same peak, since ν = cσ̃ is a linear change of variable), x₃ ≈ 2.821439;
+ * - n = 4: peak of the photon radiance per unit wavelength, x₄ ≈ 3.920690;
+ * - n = 2: peak of the photon radiance per unit frequency / wavenumber, x₂ ≈ 1.593624.
+ * The roots are computed here by Newton's method (not typed in), and the
+ * displacement constants follow: b = c₂/x₅ (m K), b′ = x₃k/h (Hz K^-1).
+ *
+ * **λ_peak · ν_peak ≠ c.** B_λ and B_ν are densities per unit wavelength and
+ * per unit frequency; they are related by the Jacobian |dν/dλ| = c/λ²
+ * (B_λ = B_ν c/λ²), which is not constant, so it moves the maximum:
+ * λ_peak = hc/(x₅kT) while c/ν_peak = hc/(x₃kT), about 1.76 times longer.
+ * Neither is "the" peak; each belongs to its own density.
+ *
+ * Source: W. Wien, Sitzungsber. Preuss. Akad. Wiss. (1893); CODATA 2018
+ * (which prints b = 2.897 771 955... × 10^-3 m K and
+ * b′ = 5.878 925 757... × 10^10 Hz K^-1).
+ */
+import { C, C2, H, K_B } from "../../constants/values";
+import { requireInRange, requirePositive } from "../../internal/checks";
+
+/**
+ * Positive root of x = n(1 − e^−x) for n > 1 (Newton's method from x₀ = n;
+ * f(x) = x − n + n e^−x, f′(x) = 1 − n e^−x, which is positive near the root).
+ *
+ * @param n - the exponent of the density (5, 4, 3, 2 for the usual peaks); finite, 1 < n ≤ 1e6
+ * @returns x (dimensionless)
+ * @throws RangeError when n is outside (1, 1e6]
+ * @example
+ * ```ts
+ * solveWienPeakX(5); // 4.965114231744276
+ * ```
+ */
+export function solveWienPeakX(n: number): number {
+  requireInRange("n", n, 1, 1e6, "(dimensionless; must exceed 1)");
+  if (n === 1) throw new RangeError("n must be > 1 (dimensionless); got 1");
+  // For n near 1 the root is near 0: start from 2(n−1) there, else from n.
+  let x = n < 1.5 ? 2 * (n - 1) : n;
+  for (let i = 0; i < 100; i++) {
+    const e = Math.exp(-x);
+    const f = x - n + n * e;
+    const fp = 1 - n * e;
+    const dx = f / fp;
+    x -= dx;
+    if (Math.abs(dx) <= 1e-17 * x) break;
+  }
+  return x;
+}
+
+/** x₅: peak of B_λ (energy per unit wavelength). */
+export const WIEN_X_WAVELENGTH = solveWienPeakX(5);
+/** x₃: peak of B_ν and of B_σ̃ (energy per unit frequency or wavenumber). */
+export const WIEN_X_FREQUENCY = solveWienPeakX(3);
+/** x₄: peak of the photon radiance per unit wavelength. */
+export const WIEN_X_PHOTON_WAVELENGTH = solveWienPeakX(4);
+/** x₂: peak of the photon radiance per unit frequency or wavenumber. */
+export const WIEN_X_PHOTON_FREQUENCY = solveWienPeakX(2);
+
+/** Wien wavelength displacement constant b = c₂/x₅, m K (CODATA 2018: 2.897 771 955e-3). */
+export const WIEN_B_WAVELENGTH = C2 / WIEN_X_WAVELENGTH;
+/** Wien frequency displacement constant b′ = x₃k/h, Hz K^-1 (CODATA 2018: 5.878 925 757e10). */
+export const WIEN_B_FREQUENCY = (WIEN_X_FREQUENCY * K_B) / H;
+/** Wavenumber displacement constant x₃k/(hc), m^-1 K^-1. */
+export const WIEN_B_WAVENUMBER = (WIEN_X_FREQUENCY * K_B) / (H * C);
+/** Photon-count wavelength displacement constant c₂/x₄, m K. */
+export const WIEN_B_PHOTON_WAVELENGTH = C2 / WIEN_X_PHOTON_WAVELENGTH;
+/** Photon-count frequency displacement constant x₂k/h, Hz K^-1. */
+export const WIEN_B_PHOTON_FREQUENCY = (WIEN_X_PHOTON_FREQUENCY * K_B) / H;
+/** Photon-count wavenumber displacement constant x₂k/(hc), m^-1 K^-1. */
+export const WIEN_B_PHOTON_WAVENUMBER = (WIEN_X_PHOTON_FREQUENCY * K_B) / (H * C);
+
+function finite(v: number, what: string, arg: string): number {
+  if (v === Infinity || v === 0) {
+    throw new RangeError(`${what} is outside the double range for ${arg}`);
+  }
+  return v;
+}
+
+/**
+ * Wavelength of the maximum of B_λ: λ_max = b/T with b = c₂/x₅.
+ *
+ * @param temperatureK - temperature T, K (finite, > 0)
+ * @returns λ_max, m
+ * @throws RangeError for bad input (or a subnormal T whose λ_max overflows)
+ * Source: Wien's displacement law; CODATA 2018 b.
+ * @example
+ * ```ts
+ * wienPeakWavelengthSI(5772); // ≈ 5.020e-7 m (502 nm)
+ * ```
+ */
+export function wienPeakWavelengthSI(temperatureK: number): number {
+  requirePositive("temperature", temperatureK, "K");
+  return finite(WIEN_B_WAVELENGTH / temperatureK, "peak wavelength", `temperature=${temperatureK} K`);
+}
+
+/**
+ * Frequency of the maximum of B_ν: ν_max = b′T, b′ = x₃k/h. Note
+ * c/ν_max ≠ λ_max (see module notes).
+ *
+ * @param temperatureK - temperature T, K (finite, > 0)
+ * @returns ν_max, Hz
+ * @throws RangeError for bad input
+ * Source: Wien's displacement law; CODATA 2018 b′.
+ * @example
+ * ```ts
+ * wienPeakFrequencySI(5772); // ≈ 3.393e14 Hz
+ * ```
+ */
+export function wienPeakFrequencySI(temperatureK: number): number {
+  requirePositive("temperature", temperatureK, "K");
+  return finite(WIEN_B_FREQUENCY * temperatureK, "peak frequency", `temperature=${temperatureK} K`);
+}
+
+/**
+ * Wavenumber of the maximum of B_σ̃: σ̃_max = x₃kT/(hc) = ν_max/c (the
+ * wavenumber peak coincides with the frequency peak).
+ *
+ * @param temperatureK - temperature T, K (finite, > 0)
+ * @returns σ̃_max, m^-1
+ * @throws RangeError for bad input
+ * Source: Wien's displacement law.
+ * @example
+ * ```ts
+ * wienPeakWavenumberSI(300); // ≈ 5.88e4 m^-1 (588 cm^-1)
+ * ```
+ */
+export function wienPeakWavenumberSI(temperatureK: number): number {
+  requirePositive("temperature", temperatureK, "K");
+  return finite(WIEN_B_WAVENUMBER * temperatureK, "peak wavenumber", `temperature=${temperatureK} K`);
+}
+
+/**
+ * Wavelength of the maximum of the photon radiance N_λ: c₂/(x₄T).
+ *
+ * @param temperatureK - temperature T, K (finite, > 0)
+ * @returns m
+ * @throws RangeError for bad input
+ * Source: Wien's displacement law for photon counts (n = 4).
+ * @example
+ * ```ts
+ * wienPhotonPeakWavelengthSI(5772); // ≈ 6.36e-7 m
+ * ```
+ */
+export function wienPhotonPeakWavelengthSI(temperatureK: number): number {
+  requirePositive("temperature", temperatureK, "K");
+  return finite(WIEN_B_PHOTON_WAVELENGTH / temperatureK, "photon peak wavelength", `temperature=${temperatureK} K`);
+}
+
+/**
+ * Frequency of the maximum of the photon radiance N_ν: x₂kT/h.
+ *
+ * @param temperatureK - temperature T, K (finite, > 0)
+ * @returns Hz
+ * @throws RangeError for bad input
+ * Source: Wien's displacement law for photon counts (n = 2).
+ * @example
+ * ```ts
+ * wienPhotonPeakFrequencySI(5772);
+ * ```
+ */
+export function wienPhotonPeakFrequencySI(temperatureK: number): number {
+  requirePositive("temperature", temperatureK, "K");
+  return finite(WIEN_B_PHOTON_FREQUENCY * temperatureK, "photon peak frequency", `temperature=${temperatureK} K`);
+}
+
+/**
+ * Wavenumber of the maximum of the photon radiance N_σ̃: x₂kT/(hc).
+ *
+ * @param temperatureK - temperature T, K (finite, > 0)
+ * @returns m^-1
+ * @throws RangeError for bad input
+ * Source: Wien's displacement law for photon counts (n = 2).
+ * @example
+ * ```ts
+ * wienPhotonPeakWavenumberSI(5772);
+ * ```
+ */
+export function wienPhotonPeakWavenumberSI(temperatureK: number): number {
+  requirePositive("temperature", temperatureK, "K");
+  return finite(WIEN_B_PHOTON_WAVENUMBER * temperatureK, "photon peak wavenumber", `temperature=${temperatureK} K`);
+}
+
+/**
+ * Temperature whose B_λ peaks at the given wavelength: T = b/λ_max.
+ *
+ * @param peakWavelengthM - λ_max, m (finite, > 0)
+ * @returns T, K
+ * @throws RangeError for bad input
+ * Source: Wien's displacement law.
+ * @example
+ * ```ts
+ * temperatureFromPeakWavelengthSI(502e-9); // ≈ 5772 K
+ * ```
+ */
+export function temperatureFromPeakWavelengthSI(peakWavelengthM: number): number {
+  requirePositive("peakWavelength", peakWavelengthM, "m");
+  return finite(WIEN_B_WAVELENGTH / peakWavelengthM, "temperature", `peakWavelength=${peakWavelengthM} m`);
+}
+
+/**
+ * Temperature whose B_ν peaks at the given frequency: T = ν_max/b′.
+ *
+ * @param peakFrequencyHz - ν_max, Hz (finite, > 0)
+ * @returns T, K
+ * @throws RangeError for bad input
+ * Source: Wien's displacement law.
+ * @example
+ * ```ts
+ * temperatureFromPeakFrequencySI(1.6e11); // ≈ 2.72 K (CMB)
+ * ```
+ */
+export function temperatureFromPeakFrequencySI(peakFrequencyHz: number): number {
+  requirePositive("peakFrequency", peakFrequencyHz, "Hz");
+  return finite(peakFrequencyHz / WIEN_B_FREQUENCY, "temperature", `peakFrequency=${peakFrequencyHz} Hz`);
+}
+
+/**
+ * Temperature whose B_σ̃ peaks at the given wavenumber: T = σ̃_max·hc/(x₃k).
+ *
+ * @param peakWavenumberPerM - σ̃_max, m^-1 (finite, > 0)
+ * @returns T, K
+ * @throws RangeError for bad input
+ * Source: Wien's displacement law.
+ * @example
+ * ```ts
+ * temperatureFromPeakWavenumberSI(58800); // ≈ 300 K
+ * ```
+ */
+export function temperatureFromPeakWavenumberSI(peakWavenumberPerM: number): number {
+  requirePositive("peakWavenumber", peakWavenumberPerM, "m^-1");
+  return finite(peakWavenumberPerM / WIEN_B_WAVENUMBER, "temperature", `peakWavenumber=${peakWavenumberPerM} m^-1`);
+}
+
+/**
+ * Temperature whose photon radiance N_λ peaks at the given wavelength: T = c₂/(x₄λ).
+ *
+ * @param peakWavelengthM - photon-count peak wavelength, m (finite, > 0)
+ * @returns T, K
+ * @throws RangeError for bad input
+ * @example
+ * ```ts
+ * temperatureFromPhotonPeakWavelengthSI(636e-9);
+ * ```
+ */
+export function temperatureFromPhotonPeakWavelengthSI(peakWavelengthM: number): number {
+  requirePositive("peakWavelength", peakWavelengthM, "m");
+  return finite(WIEN_B_PHOTON_WAVELENGTH / peakWavelengthM, "temperature", `peakWavelength=${peakWavelengthM} m`);
+}
+
+/**
+ * Temperature whose photon radiance N_ν peaks at the given frequency: T = hν/(x₂k).
+ *
+ * @param peakFrequencyHz - photon-count peak frequency, Hz (finite, > 0)
+ * @returns T, K
+ * @throws RangeError for bad input
+ * @example
+ * ```ts
+ * temperatureFromPhotonPeakFrequencySI(1.9e14);
+ * ```
+ */
+export function temperatureFromPhotonPeakFrequencySI(peakFrequencyHz: number): number {
+  requirePositive("peakFrequency", peakFrequencyHz, "Hz");
+  return finite(peakFrequencyHz / WIEN_B_PHOTON_FREQUENCY, "temperature", `peakFrequency=${peakFrequencyHz} Hz`);
+}
+
+/**
+ * Temperature whose photon radiance N_σ̃ peaks at the given wavenumber: T = hcσ̃/(x₂k).
+ *
+ * @param peakWavenumberPerM - photon-count peak wavenumber, m^-1 (finite, > 0)
+ * @returns T, K
+ * @throws RangeError for bad input
+ * @example
+ * ```ts
+ * temperatureFromPhotonPeakWavenumberSI(6.4e5);
+ * ```
+ */
+export function temperatureFromPhotonPeakWavenumberSI(peakWavenumberPerM: number): number {
+  requirePositive("peakWavenumber", peakWavenumberPerM, "m^-1");
+  return finite(
+    peakWavenumberPerM / WIEN_B_PHOTON_WAVENUMBER,
+    "temperature",
+    `peakWavenumber=${peakWavenumberPerM} m^-1`,
+  );
+}

@@ -1,0 +1,225 @@
+/**
+ * Energy levels of hydrogen-like ions (one electron bound to a nucleus of
+ * charge Z and mass M), in joules, plain SI numbers.
+ *
+ * Two models:
+ * - Bohr/Rydberg with the reduced-mass correction:
+ *   E_n = −h c R∞ Z² (μ/m_e) / n²,  μ = m_e M / (m_e + M).
+ * - Dirac (point nucleus) with the same reduced-mass scaling, as in
+ *   H. A. Bethe & E. E. Salpeter, "Quantum Mechanics of One- and Two-Electron
+ *   Atoms" (1957), §14–§16 and the recoil discussion of §21 / §42:
+ *   E(n, j) = μ c² [f(n, j) − 1],
+ *   f = [1 + (Zα / (n − δ))²]^{−1/2},  δ = j + ½ − √((j + ½)² − (Zα)²).
+ *   This omits the Lamb shift (QED; ~1e-6 relative for 1S of H), hyperfine
+ *   structure (~1e-7 relative for H 1S), the finite nuclear size, and the
+ *   next recoil term −μ²c²(f − 1)²/(2(m_e + M)) (≈ 7e-9 relative for H 1S).
+ *
+ * Energies are measured from the ionisation limit (negative for bound
+ * levels). Constants: CODATA 2018 via src/constants/values.ts.
+ *
+ * @packageDocumentation
+ */
+
+import { ALPHA, C, H, M_E, M_P, M_U, RYDBERG } from "../../constants/values";
+
+/**
+ * Alpha-particle (⁴He nucleus) mass, kg. CODATA 2018 (Tiesinga et al.,
+ * Rev. Mod. Phys. 93, 025010, 2021): 6.644 657 3357(20) × 10⁻²⁷ kg.
+ * Checked against scipy.constants' CODATA 2018 table by
+ * test/fixtures/gen/hydrogen-levels.py.
+ */
+export const ALPHA_PARTICLE_MASS_KG = 6.6446573357e-27;
+
+/**
+ * Deuteron mass, kg. CODATA 2018 (Tiesinga et al. 2021):
+ * 3.343 583 7724(10) × 10⁻²⁷ kg. Checked as {@link ALPHA_PARTICLE_MASS_KG}.
+ */
+export const DEUTERON_MASS_KG = 3.3435837724e-27;
+
+/** Proton mass, kg (CODATA 2018, from src/constants/values.ts): the ¹H nucleus. */
+export const PROTON_MASS_KG = M_P;
+
+/** Hydrogen-like ion: nuclear charge number Z and nuclear mass in kg. */
+export interface HydrogenLikeIonSI {
+  /** Nuclear charge number Z (integer ≥ 1). */
+  readonly z: number;
+  /** Nuclear mass, kg (Infinity for the infinite-mass limit, μ = m_e). */
+  readonly nuclearMassKg: number;
+}
+
+/** ¹H: Z = 1, proton mass. */
+export const HYDROGEN: HydrogenLikeIonSI = Object.freeze({ z: 1, nuclearMassKg: PROTON_MASS_KG });
+/** ²H (deuterium): Z = 1, deuteron mass. */
+export const DEUTERIUM: HydrogenLikeIonSI = Object.freeze({ z: 1, nuclearMassKg: DEUTERON_MASS_KG });
+/** ⁴He II (He⁺): Z = 2, alpha-particle mass. */
+export const HELIUM_II: HydrogenLikeIonSI = Object.freeze({ z: 2, nuclearMassKg: ALPHA_PARTICLE_MASS_KG });
+
+function show(v: number): string {
+  return Object.is(v, -0) ? "-0" : String(v);
+}
+
+/** Throw a RangeError unless `n` is an integer ≥ 1. @internal */
+export function requireQuantumNumber(name: string, n: number): number {
+  if (!Number.isInteger(n) || n < 1) {
+    throw new RangeError(`${name} must be an integer >= 1 (principal quantum number); got ${show(n)}`);
+  }
+  return n;
+}
+
+/** Throw a RangeError unless Z is an integer in [1, 137] (Zα < 1). @internal */
+export function requireNuclearCharge(z: number): number {
+  if (!Number.isInteger(z) || z < 1 || z * ALPHA >= 1) {
+    throw new RangeError(`z must be an integer in [1, 137] (nuclear charge number, Zα < 1); got ${show(z)}`);
+  }
+  return z;
+}
+
+/** Throw a RangeError unless the nuclear mass is > 0 kg (Infinity allowed). @internal */
+export function requireNuclearMass(m: number): number {
+  if (!(m > 0)) {
+    throw new RangeError(`nuclearMassKg must be a number > 0 kg (Infinity for the infinite-mass limit); got ${show(m)}`);
+  }
+  return m;
+}
+
+/**
+ * Ratio μ/m_e of the reduced mass to the electron mass,
+ * μ/m_e = 1 / (1 + m_e/M). Dimensionless; M = Infinity gives 1.
+ *
+ * @example
+ * ```ts
+ * reducedMassRatio(PROTON_MASS_KG); // 0.999 455 679…
+ * ```
+ */
+export function reducedMassRatio(nuclearMassKg: number): number {
+  requireNuclearMass(nuclearMassKg);
+  return 1 / (1 + M_E / nuclearMassKg);
+}
+
+/**
+ * Reduced mass μ = m_e M / (m_e + M) of an electron bound to a nucleus of
+ * mass M, kg. M = Infinity gives m_e.
+ *
+ * @example
+ * ```ts
+ * reducedMassKg(PROTON_MASS_KG); // 9.1044e-31
+ * ```
+ */
+export function reducedMassKg(nuclearMassKg: number): number {
+  return M_E * reducedMassRatio(nuclearMassKg);
+}
+
+/**
+ * Approximate nuclear mass from the mass number A and charge Z:
+ * M ≈ A m_u − Z m_e, kg (the atomic mass approximated by A m_u; electron
+ * binding and the nuclear mass excess are neglected). The mass excess (at most
+ * ~0.1 u, 0.78% for ¹H, below 0.1% for A ≥ 12) changes μ/m_e by about
+ * (m_e/M)·(ΔM/M): 4e-6 for ¹H — use {@link PROTON_MASS_KG},
+ * {@link DEUTERON_MASS_KG}, {@link ALPHA_PARTICLE_MASS_KG} for H, D and ⁴He —
+ * and below 5e-9 for A ≥ 12.
+ *
+ * @example
+ * ```ts
+ * nuclearMassFromMassNumberKg(12, 6); // ¹²C nucleus ≈ 1.99209e-26 kg
+ * ```
+ */
+export function nuclearMassFromMassNumberKg(massNumber: number, z: number): number {
+  if (!Number.isInteger(massNumber) || massNumber < 1) {
+    throw new RangeError(`massNumber must be an integer >= 1; got ${show(massNumber)}`);
+  }
+  requireNuclearCharge(z);
+  if (z > massNumber) {
+    throw new RangeError(`z must not exceed massNumber (${massNumber}); got ${show(z)}`);
+  }
+  return massNumber * M_U - z * M_E;
+}
+
+/**
+ * Bohr (Rydberg) energy of level n with reduced-mass correction,
+ * E_n = −h c R∞ Z² (μ/m_e) / n², J (negative: measured from the ionisation
+ * limit). Fine structure, Lamb shift and hyperfine structure are omitted
+ * (fine structure is ~(Zα)²/n relative: 5e-5 for H n = 1).
+ *
+ * @param n principal quantum number (integer ≥ 1)
+ * @param z nuclear charge number (integer 1–137)
+ * @param nuclearMassKg nuclear mass, kg (Infinity allowed)
+ * @example
+ * ```ts
+ * bohrLevelEnergySI(1, 1, PROTON_MASS_KG) / 1.602176634e-19; // −13.598 287 eV
+ * ```
+ */
+export function bohrLevelEnergySI(n: number, z: number, nuclearMassKg: number): number {
+  requireQuantumNumber("n", n);
+  requireNuclearCharge(z);
+  return (-H * C * RYDBERG * z * z * reducedMassRatio(nuclearMassKg)) / (n * n);
+}
+
+/** Throw unless j is a half-integer with ½ ≤ j ≤ n − ½. @internal */
+export function requireJ(name: string, j: number, n: number): number {
+  if (!Number.isInteger(j - 0.5) || j < 0.5 || j > n - 0.5) {
+    throw new RangeError(`${name} must be a half-integer in [1/2, n - 1/2] = [0.5, ${n - 0.5}]; got ${show(j)}`);
+  }
+  return j;
+}
+
+/**
+ * f(n, j) − 1 for the Dirac energy, computed without cancellation:
+ * with a = Zα/(n − δ), f − 1 = expm1(−½ log1p(a²)); δ is evaluated as
+ * (Zα)² / ((j + ½) + √((j + ½)² − (Zα)²)). Unchecked. @internal
+ */
+export function diracFMinusOne(n: number, j: number, z: number): number {
+  const za = z * ALPHA;
+  const k = j + 0.5;
+  const delta = (za * za) / (k + Math.sqrt((k - za) * (k + za)));
+  const a = za / (n - delta);
+  return Math.expm1(-0.5 * Math.log1p(a * a));
+}
+
+/**
+ * Dirac energy of the level (n, j) with the reduced-mass scaling,
+ * E(n, j) = μ c² [f(n, j) − 1], f = [1 + (Zα/(n − δ))²]^{−1/2},
+ * δ = j + ½ − √((j + ½)² − (Zα)²) — Bethe & Salpeter (1957) §14 with
+ * m_e → μ. J, negative (from the ionisation limit). Omitted: Lamb shift,
+ * hyperfine structure, finite nuclear size, higher-order recoil (module
+ * header). f − 1 (~1e-5) is computed with expm1/log1p.
+ *
+ * @param n principal quantum number (integer ≥ 1)
+ * @param j total angular momentum (half-integer, ½ ≤ j ≤ n − ½)
+ * @param z nuclear charge number (integer 1–137)
+ * @param nuclearMassKg nuclear mass, kg (Infinity allowed)
+ * @example
+ * ```ts
+ * diracLevelEnergySI(2, 0.5, 1, PROTON_MASS_KG); // 2s½ and 2p½ of H
+ * ```
+ */
+export function diracLevelEnergySI(n: number, j: number, z: number, nuclearMassKg: number): number {
+  requireQuantumNumber("n", n);
+  requireJ("j", j, n);
+  requireNuclearCharge(z);
+  return reducedMassKg(nuclearMassKg) * C * C * diracFMinusOne(n, j, z);
+}
+
+/**
+ * Statistical-weight centroid of the Dirac fine-structure levels of shell n:
+ * Ē_n = Σ_j g_j E(n, j) / (2n²), with g_j = 2(2j + 1) for j < n − ½ (two
+ * orbital l = j ± ½ states) and g_j = 2j + 1 = 2n for j = n − ½. J, negative.
+ * This is the "level centre of gravity" of the shell; with it, a transition
+ * energy Ē_up − Ē_low approximates the centroid of the unresolved multiplet.
+ *
+ * @example
+ * ```ts
+ * diracLevelCentroidEnergySI(3, 1, PROTON_MASS_KG);
+ * ```
+ */
+export function diracLevelCentroidEnergySI(n: number, z: number, nuclearMassKg: number): number {
+  requireQuantumNumber("n", n);
+  requireNuclearCharge(z);
+  const mc2 = reducedMassKg(nuclearMassKg) * C * C;
+  let s = 0;
+  for (let twoJ = 1; twoJ <= 2 * n - 1; twoJ += 2) {
+    const j = twoJ / 2;
+    const g = twoJ === 2 * n - 1 ? twoJ + 1 : 2 * (twoJ + 1);
+    s += g * diracFMinusOne(n, j, z);
+  }
+  return (mc2 * s) / (2 * n * n);
+}

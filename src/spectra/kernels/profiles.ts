@@ -1,0 +1,129 @@
+/**
+ * Area-normalised line profiles φ(Δ) with ∫ φ dΔ = 1, where Δ is the offset
+ * from line centre. Offsets and widths may be in any one unit (m of
+ * wavelength, Hz of frequency, …); the result is in the inverse unit
+ * (m⁻¹, s, …). Parameter conventions:
+ * - Gaussian with Doppler width b (the 1/e half-width, b = √2 σ):
+ *   φ_G = exp(−Δ²/b²) / (b √π).
+ * - Lorentzian with half-width at half-maximum γ:
+ *   φ_L = γ / (π (Δ² + γ²)).
+ * - Voigt (their convolution): φ_V = Re w((Δ + iγ)/b) / (b √π), with w the
+ *   Faddeeva function (faddeeva.ts; Weideman 1994 and continued fraction).
+ *   Limits: γ → 0 gives φ_G; b → 0 gives φ_L (b = 0 is accepted and returns
+ *   φ_L exactly).
+ * Widths must be finite; b > 0 for the Gaussian, γ > 0 for the Lorentzian;
+ * b ≥ 0, γ ≥ 0, not both 0, for the Voigt (RangeError naming the parameter).
+ *
+ * @packageDocumentation
+ */
+
+import { requireFinite, requireNonNegative, requirePositive } from "../../internal/checks";
+import type { BatchReport } from "./batch";
+import { requireOutputLength } from "./batch";
+import { faddeeva } from "./faddeeva";
+
+const SQRT_PI = Math.sqrt(Math.PI);
+const w = new Float64Array(2);
+
+/**
+ * Gaussian line profile φ_G(Δ) = exp(−(Δ/b)²)/(b√π), area 1.
+ *
+ * @param offset Δ = x − x₀ (any unit, same as b)
+ * @param dopplerWidth b = √2 σ (1/e half-width), > 0
+ * @example
+ * ```ts
+ * gaussianProfileSI(0, 1e-12); // 1/(√π · 1e-12) m^-1
+ * ```
+ */
+export function gaussianProfileSI(offset: number, dopplerWidth: number): number {
+  requireFinite("offset", offset, "(unit of the width)");
+  requirePositive("dopplerWidth", dopplerWidth, "(unit of the offset)");
+  const u = offset / dopplerWidth;
+  return Math.exp(-u * u) / (dopplerWidth * SQRT_PI);
+}
+
+/**
+ * Lorentzian line profile φ_L(Δ) = γ / (π(Δ² + γ²)), area 1.
+ *
+ * @param offset Δ (any unit, same as γ)
+ * @param lorentzHwhm γ, half-width at half-maximum, > 0
+ * @example
+ * ```ts
+ * lorentzianProfileSI(0, 2); // 1/(2π)
+ * ```
+ */
+export function lorentzianProfileSI(offset: number, lorentzHwhm: number): number {
+  requireFinite("offset", offset, "(unit of the width)");
+  requirePositive("lorentzHwhm", lorentzHwhm, "(unit of the offset)");
+  const u = offset / lorentzHwhm;
+  return 1 / (Math.PI * lorentzHwhm * (1 + u * u));
+}
+
+/**
+ * Voigt line profile φ_V(Δ) = Re w((Δ + iγ)/b)/(b√π), the convolution of a
+ * Gaussian (Doppler width b) with a Lorentzian (HWHM γ); area 1.
+ * b = 0 returns the Lorentzian, γ = 0 the Gaussian.
+ *
+ * @param offset Δ (any unit)
+ * @param dopplerWidth b ≥ 0 (same unit)
+ * @param lorentzHwhm γ ≥ 0 (same unit); b and γ not both 0
+ * @example
+ * ```ts
+ * voigtProfileSI(0, 1, 0.1); // ≈ 0.5037
+ * ```
+ */
+export function voigtProfileSI(offset: number, dopplerWidth: number, lorentzHwhm: number): number {
+  requireFinite("offset", offset, "(unit of the widths)");
+  requireNonNegative("dopplerWidth", dopplerWidth, "(unit of the offset)");
+  requireNonNegative("lorentzHwhm", lorentzHwhm, "(unit of the offset)");
+  if (dopplerWidth === 0) {
+    requirePositive("lorentzHwhm", lorentzHwhm, "(unit of the offset; dopplerWidth is 0)");
+    const u = offset / lorentzHwhm;
+    return 1 / (Math.PI * lorentzHwhm * (1 + u * u));
+  }
+  return voigtProfileUnchecked(offset, dopplerWidth, lorentzHwhm);
+}
+
+/** Voigt profile without validation (b > 0, γ ≥ 0 assumed). @internal */
+export function voigtProfileUnchecked(offset: number, dopplerWidth: number, lorentzHwhm: number): number {
+  const u = offset / dopplerWidth;
+  if (lorentzHwhm === 0) return Math.exp(-u * u) / (dopplerWidth * SQRT_PI);
+  faddeeva(u, lorentzHwhm / dopplerWidth, w);
+  return (w[0] as number) / (dopplerWidth * SQRT_PI);
+}
+
+/**
+ * Batch Voigt profile over offsets (batch.ts convention: a non-finite offset
+ * gives NaN and is reported; widths are checked once and throw).
+ *
+ * @example
+ * ```ts
+ * const out = new Float64Array(3);
+ * voigtProfilesSI(Float64Array.of(-1, 0, 1), 1, 0.1, out);
+ * ```
+ */
+export function voigtProfilesSI(
+  offsets: Float64Array,
+  dopplerWidth: number,
+  lorentzHwhm: number,
+  out: Float64Array,
+): BatchReport {
+  requireNonNegative("dopplerWidth", dopplerWidth, "(unit of the offset)");
+  requireNonNegative("lorentzHwhm", lorentzHwhm, "(unit of the offset)");
+  if (dopplerWidth === 0) requirePositive("lorentzHwhm", lorentzHwhm, "(unit of the offset; dopplerWidth is 0)");
+  requireOutputLength(offsets, out);
+  const invalid: number[] = [];
+  for (let i = 0; i < offsets.length; i++) {
+    const d = offsets[i] as number;
+    if (!Number.isFinite(d)) {
+      out[i] = NaN;
+      invalid.push(i);
+    } else if (dopplerWidth === 0) {
+      const u = d / lorentzHwhm;
+      out[i] = 1 / (Math.PI * lorentzHwhm * (1 + u * u));
+    } else {
+      out[i] = voigtProfileUnchecked(d, dopplerWidth, lorentzHwhm);
+    }
+  }
+  return { invalid };
+}
