@@ -6,3 +6,4 @@
 export * from "./quantity/index";
 export { constants } from "./constants/index";
 export type { Constant } from "./constants/index";
+export * from "./radiation/planck";

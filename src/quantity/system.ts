@@ -43,6 +43,17 @@ export interface UnitSystem<S extends SystemName> {
    */
   exp10(d: Dimension): number;
   /**
+   * The coherent unit of a dimension in this system, written in the parser's
+   * grammar (for messages): `"cm"`, `"g cm^2 s^-3"` (erg s⁻¹), `"K"`.
+   *
+   * @example
+   * ```ts
+   * import { CGS, kinds } from "starlume";
+   * CGS.coherentUnit(kinds.flux.dimension); // "g s^-3" (erg s^-1 cm^-2)
+   * ```
+   */
+  coherentUnit(d: Dimension): string;
+  /**
    * A quantity from a number in a unit.
    *
    * @example
@@ -149,9 +160,26 @@ function makeSystem<S extends SystemName>(name: S, exp10: (d: Dimension) => numb
     const s = scale(unit);
     return s.exact ? times10(value, -s.n) : value / s.factor;
   };
+  const base: Record<keyof Dimension, string> = {
+    length: name === "SI" ? "m" : "cm",
+    mass: name === "SI" ? "kg" : "g",
+    time: "s",
+    temperature: "K",
+    amount: "mol",
+    angle: "rad",
+    solidAngle: "sr",
+  };
   const system: UnitSystem<S> = {
     name,
     exp10,
+    coherentUnit: (d) => {
+      const parts: string[] = [];
+      for (const key of Object.keys(base) as (keyof Dimension)[]) {
+        const e = d[key];
+        if (e !== 0) parts.push(e === 1 ? base[key] : `${base[key]}^${e}`);
+      }
+      return parts.join(" ");
+    },
     of: (value, unit) => toBase(value, unit) as never,
     valueIn: (q, unit) => fromBase(q, unit),
     from: (q, kind) => {

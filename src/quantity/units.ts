@@ -103,6 +103,9 @@ export const units = {
   per_m: defineUnit("m^-1", "per metre", k.wavenumber.dimension, 1),
   W_per_m2: defineUnit("W m^-2", "watt per square metre", k.flux.dimension, 1),
   erg_per_s_cm2: defineUnit("erg s^-1 cm^-2", "erg per second per square centimetre", k.flux.dimension, 1, -3),
+  W_per_m2_sr_nm: defineUnit("W m^-2 sr^-1 nm^-1", "watt per square metre per steradian per nanometre", k.spectralRadiancePerWavelength.dimension, 1, 9),
+  erg_per_s_cm2_A: defineUnit("erg s^-1 cm^-2 Å^-1", "erg per second per square centimetre per ångström", k.spectralFluxPerWavelength.dimension, 1, 7),
+  W_per_m2_Hz: defineUnit("W m^-2 Hz^-1", "watt per square metre per hertz", k.spectralFluxPerFrequency.dimension, 1),
 } as const;
 
 /**
