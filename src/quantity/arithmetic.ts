@@ -187,8 +187,21 @@ export function pow<A extends Operand, N extends PowerExponent>(a: A, n: N): Rai
     case -2:
       r = 1 / (a * a);
       break;
-    default:
-      r = a ** n;
+    case 3:
+      r = a * a * a;
+      break;
+    case 4: {
+      const a2 = a * a;
+      r = a2 * a2;
+      break;
+    }
+    case -3:
+      r = 1 / (a * a * a);
+      break;
+    default: {
+      const a2 = a * a;
+      r = 1 / (a2 * a2);
+    }
   }
   return r as Raised<A, N>;
 }

@@ -11,7 +11,7 @@ import type { Dimension } from "./dimension";
 import type { Kind } from "./aliases";
 import { checkKind, parseQuantityText } from "./parse";
 import type { Quantity, QuantityArray, SystemName } from "./quantity";
-import { decimalScale, times10, type Unit } from "./unit";
+import { times10, type Unit } from "./unit";
 
 /** The other system. */
 export type OtherSystem<S extends SystemName> = S extends "SI" ? "CGS" : "SI";
@@ -147,19 +147,17 @@ function formatNumber(x: number, options: FormatOptions | undefined): string {
 }
 
 function makeSystem<S extends SystemName>(name: S, exp10: (d: Dimension) => number): UnitSystem<S> {
-  // Size of one `unit` in this system's coherent unit of its dimension.
-  const scale = (unit: Unit): { exact: boolean; n: number; factor: number } => {
-    const n = unit.exp10 - exp10(unit.dimension);
-    return unit.mantissa === 1 ? { exact: true, n, factor: 1 } : { exact: false, n, factor: decimalScale(unit.mantissa, n) };
-  };
-  const toBase = (value: number, unit: Unit): number => {
-    const s = scale(unit);
-    return s.exact ? times10(value, s.n) : value * s.factor;
-  };
-  const fromBase = (value: number, unit: Unit): number => {
-    const s = scale(unit);
-    return s.exact ? times10(value, -s.n) : value / s.factor;
-  };
+  // One `unit` in this system's coherent unit, precomputed on the unit as
+  // (v × mul) / div with one of mul, div equal to 1: a single correctly
+  // rounded operation for decimal units, no branches, no allocation.
+  const toBase =
+    name === "SI"
+      ? (value: number, unit: Unit): number => (value * unit.scales.mulSI) / unit.scales.divSI
+      : (value: number, unit: Unit): number => (value * unit.scales.mulCGS) / unit.scales.divCGS;
+  const fromBase =
+    name === "SI"
+      ? (value: number, unit: Unit): number => (value * unit.scales.divSI) / unit.scales.mulSI
+      : (value: number, unit: Unit): number => (value * unit.scales.divCGS) / unit.scales.mulCGS;
   const base: Record<keyof Dimension, string> = {
     length: name === "SI" ? "m" : "cm",
     mass: name === "SI" ? "kg" : "g",
@@ -182,13 +180,10 @@ function makeSystem<S extends SystemName>(name: S, exp10: (d: Dimension) => numb
     },
     of: (value, unit) => toBase(value, unit) as never,
     valueIn: (q, unit) => fromBase(q, unit),
-    from: (q, kind) => {
-      // other system's coherent unit expressed in this one: 10^(other − this)
-      const d = kind.dimension;
-      const other = name === "SI" ? cgsExp10(d) : 0;
-      const mine = exp10(d);
-      return times10(q, other - mine) as never;
-    },
+    from:
+      name === "SI"
+        ? (q, kind) => times10(q, -2 * kind.dimension.length - 3 * kind.dimension.mass) as never
+        : (q, kind) => times10(q, 2 * kind.dimension.length + 3 * kind.dimension.mass) as never,
     parse: (text, kind) => {
       const { value, unit } = parseQuantityText(text);
       checkKind(text, unit, kind);
@@ -200,20 +195,12 @@ function makeSystem<S extends SystemName>(name: S, exp10: (d: Dimension) => numb
     },
     arrayOf: (values, unit) => {
       const out = new Float64Array(values.length);
-      const s = scale(unit);
-      for (let i = 0; i < values.length; i++) {
-        const v = values[i] as number;
-        out[i] = s.exact ? times10(v, s.n) : v * s.factor;
-      }
+      for (let i = 0; i < values.length; i++) out[i] = toBase(values[i] as number, unit);
       return out as never;
     },
     arrayIn: (values, unit) => {
       const out = new Float64Array(values.length);
-      const s = scale(unit);
-      for (let i = 0; i < values.length; i++) {
-        const v = values[i] as number;
-        out[i] = s.exact ? times10(v, -s.n) : v / s.factor;
-      }
+      for (let i = 0; i < values.length; i++) out[i] = fromBase(values[i] as number, unit);
       return out;
     },
   };

@@ -42,21 +42,59 @@ export interface Unit<D extends Dimension = Dimension> {
   readonly factor: number;
   /** Whether SI prefixes may be attached to the symbol when parsing (`k`, `M`, `µ`, …). */
   readonly prefixable: boolean;
+  /**
+   * Precomputed scales (internal): one unit in the SI and in the CGS coherent
+   * unit of its dimension, as a power-of-ten shift (the exact path, used when
+   * the mantissa is 1) and as a correctly rounded factor.
+   * @internal
+   */
+  readonly scales: UnitScales;
 }
 
-const POW10: number[] = [];
-for (let i = 0; i <= 22; i++) POW10.push(Number(`1e${i}`));
+/**
+ * Precomputed scales of a unit in each system (internal). A value `v` in the
+ * unit is `(v * mul) / div` in the system's coherent unit. For a pure power of
+ * ten one of the two is 1 and the other an exact power of ten (≤ 10^22), so
+ * the conversion is a single correctly rounded operation; otherwise `mul` is
+ * the correctly rounded factor and `div` is 1. Branch-free either way.
+ * @internal
+ */
+export interface UnitScales {
+  readonly mulSI: number;
+  readonly divSI: number;
+  readonly mulCGS: number;
+  readonly divCGS: number;
+}
+
+// MUL[n + 22] / DIV[n + 22] = 10^n for |n| ≤ 22, one of the two being 1 and
+// the other an exact power of ten, so that times10 is one correctly rounded,
+// branch-free operation.
+const MUL = new Float64Array(45);
+const DIV = new Float64Array(45);
+for (let n = -22; n <= 22; n++) {
+  MUL[n + 22] = n >= 0 ? Number(`1e${n}`) : 1;
+  DIV[n + 22] = n >= 0 ? 1 : Number(`1e${-n}`);
+}
 
 /**
- * `v × 10^n`, correctly rounded for |n| ≤ 22 (10^n is exact in binary there,
- * so one multiplication or division is a single rounding).
+ * `v × 10^n`, correctly rounded for integer |n| ≤ 22 (10^n is exact in binary
+ * there, so one multiplication or division is a single rounding).
  *
  * @internal
  */
 export function times10(v: number, n: number): number {
-  if (n === 0) return v;
-  if (n > 0) return n <= 22 ? v * (POW10[n] as number) : v * Number(`1e${n}`);
-  return n >= -22 ? v / (POW10[-n] as number) : v * Number(`1e${n}`);
+  const i = n + 22;
+  if (i >= 0 && i <= 44) return (v * (MUL[i] as number)) / (DIV[i] as number);
+  return v * Number(`1e${n}`);
+}
+
+/** `[mul, div]` with `mantissa × 10^exp = mul / div`, one of them 1 (see {@link UnitScales}). */
+function mulDiv(mantissa: number, exp: number): [number, number] {
+  if (mantissa === 1 && exp >= -22 && exp <= 22) {
+    const p = Number(`1e${Math.abs(exp)}`);
+    return exp >= 0 ? [p, 1] : [1, p];
+  }
+  return [decimalScale(mantissa, exp), 1];
 }
 
 /** `mantissa × 10^exp`, correctly rounded from the mantissa's shortest decimal form. */
@@ -91,7 +129,11 @@ export function defineUnit<D extends Dimension>(
   if (!(mantissa > 0) || !Number.isFinite(mantissa)) {
     throw new RangeError(`unit ${symbol}: mantissa must be a finite number > 0; got ${mantissa}`);
   }
-  return { symbol, name, dimension, mantissa, exp10, factor: decimalScale(mantissa, exp10), prefixable };
+  const cgsShift = exp10 + 2 * dimension.length + 3 * dimension.mass;
+  const [mulSI, divSI] = mulDiv(mantissa, exp10);
+  const [mulCGS, divCGS] = mulDiv(mantissa, cgsShift);
+  const scales: UnitScales = { mulSI, divSI, mulCGS, divCGS };
+  return Object.freeze({ symbol, name, dimension, mantissa, exp10, factor: decimalScale(mantissa, exp10), prefixable, scales: Object.freeze(scales) });
 }
 
 /** An SI prefix. */

@@ -27,7 +27,7 @@ const deg = Math.PI / 180;
  * SI.valueIn(SI.of(1, units.pc), units.ly); // ≈ 3.2616
  * ```
  */
-export const units = {
+export const units = Object.freeze({
   // length
   m: defineUnit("m", "metre", k.length.dimension, 1, 0, true),
   cm: defineUnit("cm", "centimetre", k.length.dimension, 1, -2),
@@ -106,7 +106,7 @@ export const units = {
   W_per_m2_sr_nm: defineUnit("W m^-2 sr^-1 nm^-1", "watt per square metre per steradian per nanometre", k.spectralRadiancePerWavelength.dimension, 1, 9),
   erg_per_s_cm2_A: defineUnit("erg s^-1 cm^-2 Å^-1", "erg per second per square centimetre per ångström", k.spectralFluxPerWavelength.dimension, 1, 7),
   W_per_m2_Hz: defineUnit("W m^-2 Hz^-1", "watt per square metre per hertz", k.spectralFluxPerFrequency.dimension, 1),
-} as const;
+} as const);
 
 /**
  * Extra spellings the parser accepts for built-in units (ASCII fallbacks and

@@ -1,0 +1,148 @@
+/**
+ * Standalone HTML report: one self-contained page (inline CSS, no scripts,
+ * no external resources) with a title, a description, an optional results
+ * table, figures (inline SVG with captions) and a closing caution note.
+ * Pure string output; no DOM and no Node APIs.
+ *
+ * @module
+ */
+
+import { escapeXml } from "./xml";
+
+/** A figure: SVG markup (as produced by `svgChart`) and its caption. */
+export interface ReportFigure {
+  readonly svg: string;
+  readonly caption: string;
+}
+
+/** A table of text cells. */
+export interface ReportTable {
+  readonly header: readonly string[];
+  readonly rows: readonly (readonly string[])[];
+  readonly caption?: string;
+  /** Right-align columns whose cells all look numeric (default true). */
+  readonly alignNumbers?: boolean;
+}
+
+/** Content of {@link htmlReport}. */
+export interface ReportSpec {
+  readonly title: string;
+  readonly description?: string;
+  readonly table?: ReportTable;
+  readonly figures?: readonly ReportFigure[];
+  /** Caution text for the footer (e.g. validity limits of the models used). */
+  readonly caution?: string;
+  /** Document language (default `"en"`). */
+  readonly lang?: string;
+}
+
+const NUMERIC = /^\s*[+\-−]?(?:\d+\.?\d*|\.\d+)(?:[eE][+\-]?\d+)?(?:\s*±\s*(?:\d+\.?\d*|\.\d+)(?:[eE][+\-]?\d+)?)?\s*$/;
+
+const CSS = `
+body{font-family:Helvetica,Arial,sans-serif;max-width:60rem;margin:2rem auto;padding:0 1rem;color:#222;line-height:1.45}
+h1{font-size:1.6rem;margin-bottom:.4rem}
+table{border-collapse:collapse;margin:1rem 0;font-size:.92rem}
+caption{text-align:left;font-style:italic;padding-bottom:.3rem}
+th,td{border-bottom:1px solid #ddd;padding:.25rem .6rem;text-align:left;vertical-align:top}
+th{border-bottom:2px solid #555}
+td.num{text-align:right;font-variant-numeric:tabular-nums}
+figure{margin:1.5rem 0}
+figure svg{max-width:100%;height:auto}
+figcaption{font-size:.9rem;color:#444}
+footer{margin-top:2rem;padding-top:.8rem;border-top:1px solid #ccc;font-size:.88rem;color:#555}
+`.trim();
+
+/**
+ * Build a standalone HTML5 page. Every piece of text (title, description,
+ * table cells, captions, caution) is HTML-escaped; multi-line text keeps its
+ * paragraphs (blank-line separated). Figure markup is inserted as is, so it
+ * must come from a trusted builder such as `svgChart`; as a safeguard, markup
+ * that does not start with `<svg` or that contains `<script`, `<foreignObject`
+ * or an `on…=` event attribute is refused.
+ *
+ * @param spec - page content, see {@link ReportSpec}.
+ * @returns the HTML document.
+ * @throws RangeError naming the figure when its markup is refused, or the
+ *   table row whose length differs from the header.
+ *
+ * @example
+ * ```ts
+ * const html = htmlReport({
+ *   title: "Fit of HD 140283",
+ *   description: "Blackbody fit to 5 photometric points.",
+ *   table: { header: ["band", "flux [Jy]"], rows: [["V", "12.3"]] },
+ *   figures: [],
+ *   caution: "Blackbody model: ignores line blanketing.",
+ * });
+ * ```
+ */
+export function htmlReport(spec: ReportSpec): string {
+  const o: string[] = [];
+  const lang = escapeXml(spec.lang ?? "en");
+  o.push("<!DOCTYPE html>");
+  o.push(`<html lang="${lang}">`);
+  o.push("<head>");
+  o.push('<meta charset="utf-8">');
+  o.push('<meta name="viewport" content="width=device-width, initial-scale=1">');
+  o.push(`<title>${escapeXml(spec.title)}</title>`);
+  o.push(`<style>${CSS}</style>`);
+  o.push("</head>");
+  o.push("<body>");
+  o.push("<main>");
+  o.push(`<h1>${escapeXml(spec.title)}</h1>`);
+  if (spec.description !== undefined && spec.description.trim() !== "") o.push(paragraphs(spec.description));
+  if (spec.table !== undefined) o.push(table(spec.table));
+  (spec.figures ?? []).forEach((f, i) => {
+    checkSvg(f.svg, i);
+    o.push("<figure>");
+    o.push(f.svg.trim());
+    o.push(`<figcaption>${escapeXml(f.caption)}</figcaption>`);
+    o.push("</figure>");
+  });
+  o.push("</main>");
+  if (spec.caution !== undefined && spec.caution.trim() !== "") {
+    o.push("<footer>");
+    o.push(paragraphs(spec.caution));
+    o.push("</footer>");
+  }
+  o.push("</body>");
+  o.push("</html>");
+  return o.join("\n") + "\n";
+}
+
+function paragraphs(text: string): string {
+  return text
+    .split(/\r?\n\s*\r?\n/)
+    .map((p) => p.trim())
+    .filter((p) => p !== "")
+    .map((p) => `<p>${escapeXml(p)}</p>`)
+    .join("\n");
+}
+
+function table(t: ReportTable): string {
+  const n = t.header.length;
+  t.rows.forEach((r, i) => {
+    if (r.length !== n) throw new RangeError(`table.rows[${i}] has ${r.length} cells; the header has ${n}`);
+  });
+  const numeric = t.header.map(
+    (_, k) => (t.alignNumbers ?? true) && t.rows.length > 0 && t.rows.every((r) => (r[k] ?? "") === "" || NUMERIC.test(r[k] ?? "")),
+  );
+  const o: string[] = ["<table>"];
+  if (t.caption !== undefined) o.push(`<caption>${escapeXml(t.caption)}</caption>`);
+  o.push(`<thead><tr>${t.header.map((h) => `<th scope="col">${escapeXml(h)}</th>`).join("")}</tr></thead>`);
+  o.push("<tbody>");
+  for (const r of t.rows) {
+    o.push(`<tr>${r.map((c, k) => `<td${numeric[k] === true ? ' class="num"' : ""}>${escapeXml(c)}</td>`).join("")}</tr>`);
+  }
+  o.push("</tbody>");
+  o.push("</table>");
+  return o.join("\n");
+}
+
+function checkSvg(svg: string, i: number): void {
+  const s = svg.trim();
+  if (!s.startsWith("<svg")) throw new RangeError(`figures[${i}].svg must start with <svg`);
+  if (/<script|<foreignObject|<[^>]*\son[a-z]+\s*=|<[^>]*=\s*["']?\s*javascript:/i.test(s)) {
+    throw new RangeError(`figures[${i}].svg contains scripting (script, foreignObject, on… attribute or javascript: URL); refused`);
+  }
+}

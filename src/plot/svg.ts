@@ -1,0 +1,699 @@
+/**
+ * A small, dependency-free SVG chart builder: one function,
+ * {@link svgChart}, turns a {@link ChartSpec} into a standalone SVG document
+ * string (no DOM, no Node APIs — it runs in browsers and in Node alike).
+ *
+ * What it draws:
+ * - linear or log10 axes with nice ticks (see `ticks.ts`), light grid lines,
+ *   axis labels and a title;
+ * - line series (one `<path>` each, broken at invalid points and clipped to
+ *   the plot area geometrically, so coordinates are always finite and bounded);
+ * - scatter series with optional vertical error bars, symmetric or asymmetric;
+ *   points outside the axis ranges are omitted, bars are clipped;
+ * - band response curves, normalised to a peak of 1 and drawn faintly, either
+ *   against a secondary 0–1 axis on the right (`bandPlacement: "axis"`) or in
+ *   a lower panel sharing the x axis (`"panel"`);
+ * - vertical marker lines with labels (e.g. spectral lines);
+ * - a legend, and `<title>`/`<desc>` for accessibility.
+ *
+ * Invalid data points (NaN, ±Infinity, or ≤ 0 on a log axis) are skipped
+ * silently; invalid chart settings (sizes, ranges, mismatched array lengths)
+ * throw a `RangeError` naming the setting.
+ *
+ * Default colours: the Okabe–Ito colour-blind-safe palette (M. Okabe and
+ * K. Ito, "Color Universal Design", 2008), without its yellow, which is too
+ * pale on white.
+ *
+ * @module
+ */
+
+import { escapeXml, px } from "./xml";
+import { MIN_LINEAR_SPAN, linearTicks, logTicks } from "./ticks";
+import type { Ticks } from "./ticks";
+
+/** Axis scale. */
+export type AxisScale = "linear" | "log";
+
+/** One axis. Unset `min`/`max` are taken from the data (rounded out to nice values). */
+export interface AxisSpec {
+  readonly label?: string;
+  readonly scale?: AxisScale;
+  readonly min?: number;
+  readonly max?: number;
+}
+
+/** A line series (a polyline through the points in the given order). */
+export interface LineSeries {
+  readonly type: "line";
+  readonly name: string;
+  readonly x: ArrayLike<number>;
+  readonly y: ArrayLike<number>;
+  /** Any SVG colour; default from the palette. */
+  readonly color?: string;
+  /** Stroke width in px (default 1.5). */
+  readonly width?: number;
+  readonly dashed?: boolean;
+}
+
+/** Scatter points with optional vertical error bars. */
+export interface ScatterSeries {
+  readonly type: "scatter";
+  readonly name: string;
+  readonly x: ArrayLike<number>;
+  readonly y: ArrayLike<number>;
+  /** Symmetric 1σ error (≥ 0), used for both sides unless `yErrLow`/`yErrHigh` are given. */
+  readonly yErr?: ArrayLike<number>;
+  /** Error towards smaller y (≥ 0). */
+  readonly yErrLow?: ArrayLike<number>;
+  /** Error towards larger y (≥ 0). */
+  readonly yErrHigh?: ArrayLike<number>;
+  readonly color?: string;
+  /** Point radius in px (default 3). */
+  readonly radius?: number;
+}
+
+/** Any plotted series. */
+export type Series = LineSeries | ScatterSeries;
+
+/** A band (filter) response curve; it is divided by its own maximum before drawing. */
+export interface BandCurve {
+  readonly name: string;
+  readonly x: ArrayLike<number>;
+  readonly response: ArrayLike<number>;
+  readonly color?: string;
+}
+
+/** A labelled vertical line at `x`, drawn only if `x` is inside the x range. */
+export interface MarkerLine {
+  readonly x: number;
+  readonly label?: string;
+  readonly color?: string;
+}
+
+/** Everything {@link svgChart} needs. Only `title` is required. */
+export interface ChartSpec {
+  /** Chart title; also the SVG `<title>` (accessible name). */
+  readonly title: string;
+  /** Longer text for `<desc>` (screen readers); not drawn. */
+  readonly description?: string;
+  /** Width in px (default 720). */
+  readonly width?: number;
+  /** Height in px (default 440). */
+  readonly height?: number;
+  readonly x?: AxisSpec;
+  readonly y?: AxisSpec;
+  readonly series?: readonly Series[];
+  readonly bands?: readonly BandCurve[];
+  /** Where band curves go: `"axis"` (secondary 0–1 axis on the right, default) or `"panel"` (lower panel). */
+  readonly bandPlacement?: "axis" | "panel";
+  /** Label of the band axis (default `"band response"`). */
+  readonly bandLabel?: string;
+  readonly markers?: readonly MarkerLine[];
+  /** Show the legend (default: when there are two or more series/bands). */
+  readonly legend?: boolean;
+}
+
+/** The default colour cycle (Okabe–Ito, without yellow). */
+export const PALETTE: readonly string[] = ["#0072B2", "#D55E00", "#009E73", "#CC79A7", "#E69F00", "#56B4E9", "#000000"];
+
+interface Scale {
+  readonly log: boolean;
+  readonly min: number;
+  readonly max: number;
+  readonly ticks: Ticks;
+}
+
+interface Rect {
+  readonly x: number;
+  readonly y: number;
+  readonly w: number;
+  readonly h: number;
+}
+
+/** Largest normalised coordinate kept before clipping; keeps arithmetic finite. */
+const LIMIT = 1e6;
+
+/**
+ * Build a standalone SVG document (with `xmlns`, `width`, `height`,
+ * `viewBox`, `role="img"`, `<title>` and optional `<desc>`) from a chart spec.
+ * All text is XML-escaped; all coordinates are finite.
+ *
+ * @param spec - the chart; see {@link ChartSpec}.
+ * @returns the SVG markup.
+ * @throws RangeError naming the setting when a size, axis range or data
+ *   array length is invalid.
+ *
+ * @example
+ * ```ts
+ * const svg = svgChart({
+ *   title: "Planck spectrum, 5772 K",
+ *   x: { label: "wavelength [nm]", scale: "log" },
+ *   y: { label: "spectral radiance [W m⁻² sr⁻¹ nm⁻¹]" },
+ *   series: [{ type: "line", name: "B_λ", x: [100, 500, 1000, 5000], y: [0.2, 26.5, 14.9, 0.1] }],
+ *   markers: [{ x: 656.28, label: "Hα" }],
+ * });
+ * ```
+ */
+export function svgChart(spec: ChartSpec): string {
+  const width = spec.width ?? 720;
+  const height = spec.height ?? 440;
+  checkSize("width", width);
+  checkSize("height", height);
+  const series = spec.series ?? [];
+  const bands = spec.bands ?? [];
+  const markers = spec.markers ?? [];
+  series.forEach((s, i) => checkSeries(s, i));
+  bands.forEach((b, i) => {
+    if (b.x.length !== b.response.length) {
+      throw new RangeError(`bands[${i}] (${b.name}): x and response must have the same length; got ${b.x.length} and ${b.response.length}`);
+    }
+  });
+
+  const xLog = spec.x?.scale === "log";
+  const yLog = spec.y?.scale === "log";
+  checkAxis("x", spec.x);
+  checkAxis("y", spec.y);
+
+  // ---- ranges
+  const xs = collectX(series, bands, xLog, yLog);
+  const xRange = autoRange(spec.x?.min, spec.x?.max, xs.lo, xs.hi, xLog);
+  const ys = collectY(series, yLog, xRange, xLog);
+  const yRange = autoRange(spec.y?.min, spec.y?.max, ys.lo, ys.hi, yLog);
+  const hasData = xs.count > 0 || bands.length > 0;
+
+  // ---- layout
+  const showBands = bands.length > 0;
+  const panel = showBands && spec.bandPlacement === "panel";
+  const bandAxis = showBands && !panel;
+  const top = spec.title !== "" ? 38 : 14;
+  const left = 78;
+  const right = bandAxis ? 62 : 20;
+  const bottom = 50;
+  const plotW = Math.max(10, width - left - right);
+  const totalH = Math.max(20, height - top - bottom);
+  const panelH = panel ? Math.round(totalH * 0.24) : 0;
+  const gapH = panel ? 12 : 0;
+  const main: Rect = { x: left, y: top, w: plotW, h: totalH - panelH - gapH };
+  const lower: Rect = { x: left, y: top + main.h + gapH, w: plotW, h: panelH };
+
+  const xScale = makeScale(xRange, xLog, Math.max(2, Math.round(plotW / 90)));
+  const yScale = makeScale(yRange, yLog, Math.max(2, Math.round(main.h / 55)));
+  const bandScale: Scale = { log: false, min: 0, max: 1, ticks: { major: [0, 0.5, 1], minor: [], labels: ["0", "0.5", "1"] } };
+
+  const o: string[] = [];
+  o.push(
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${px(width)}" height="${px(height)}" viewBox="0 0 ${px(width)} ${px(height)}" role="img" font-family="Helvetica, Arial, sans-serif" font-size="12">`,
+  );
+  o.push(`<title>${escapeXml(spec.title)}</title>`);
+  if (spec.description !== undefined) o.push(`<desc>${escapeXml(spec.description)}</desc>`);
+  o.push(`<rect x="0" y="0" width="${px(width)}" height="${px(height)}" fill="#ffffff"/>`);
+
+  // ---- grid and frame
+  drawGrid(o, main, xScale, yScale);
+  if (panel) drawGrid(o, lower, xScale, bandScale);
+
+  // ---- bands (faint, behind the data)
+  const bandRect = panel ? lower : main;
+  bands.forEach((b, i) => {
+    const color = b.color ?? PALETTE[(series.length + i) % PALETTE.length] ?? "#000";
+    drawBand(o, b, color, bandRect, xScale);
+  });
+
+  // ---- markers
+  for (const m of markers) {
+    if (!Number.isFinite(m.x)) continue;
+    const u = norm(m.x, xScale);
+    if (!(u >= 0 && u <= 1)) continue;
+    const x = main.x + u * main.w;
+    const color = escapeXml(m.color ?? "#555555");
+    const y1 = panel ? lower.y + lower.h : main.y + main.h;
+    o.push(`<line x1="${px(x)}" y1="${px(main.y)}" x2="${px(x)}" y2="${px(y1)}" stroke="${color}" stroke-width="1" stroke-dasharray="4 3"/>`);
+    if (m.label !== undefined && m.label !== "") {
+      o.push(
+        `<text x="${px(x - 3)}" y="${px(main.y + 4)}" transform="rotate(-90 ${px(x - 3)} ${px(main.y + 4)})" text-anchor="end" font-size="10" fill="${color}">${escapeXml(m.label)}</text>`,
+      );
+    }
+  }
+
+  // ---- series
+  series.forEach((s, i) => {
+    const color = s.color ?? PALETTE[i % PALETTE.length] ?? "#000";
+    if (s.type === "line") drawLine(o, s, color, main, xScale, yScale);
+    else drawScatter(o, s, color, main, xScale, yScale);
+  });
+
+  if (!hasData) {
+    o.push(`<text x="${px(main.x + main.w / 2)}" y="${px(main.y + main.h / 2)}" text-anchor="middle" fill="#777777">no data</text>`);
+  }
+
+  // ---- axes
+  drawXAxis(o, main, xScale, !panel, panel ? undefined : spec.x?.label);
+  drawYAxis(o, main, yScale, "left", spec.y?.label);
+  if (panel) {
+    drawXAxis(o, lower, xScale, true, spec.x?.label);
+    drawYAxis(o, lower, bandScale, "left", undefined);
+    o.push(
+      `<text x="${px(lower.x + 6)}" y="${px(lower.y + 12)}" font-size="10" fill="#555555">${escapeXml(spec.bandLabel ?? "band response")}</text>`,
+    );
+  }
+  if (bandAxis) drawYAxis(o, main, bandScale, "right", spec.bandLabel ?? "band response");
+
+  if (spec.title !== "") {
+    o.push(`<text x="${px(width / 2)}" y="24" text-anchor="middle" font-size="15" font-weight="bold">${escapeXml(spec.title)}</text>`);
+  }
+
+  // ---- legend
+  const entries = series.length + bands.length;
+  if (spec.legend ?? entries >= 2) drawLegend(o, main, series, bands);
+
+  o.push("</svg>");
+  return o.join("\n") + "\n";
+}
+
+// ---------------------------------------------------------------------------
+// validation and ranges
+
+function checkSize(name: string, v: number): void {
+  if (!(v >= 50 && v <= 20000)) throw new RangeError(`${name} must be a number in [50, 20000] px; got ${String(v)}`);
+}
+
+function checkAxis(name: "x" | "y", a: AxisSpec | undefined): void {
+  if (a === undefined) return;
+  const log = a.scale === "log";
+  for (const key of ["min", "max"] as const) {
+    const v = a[key];
+    if (v === undefined) continue;
+    if (!Number.isFinite(v) || (log && !(v > 0))) {
+      throw new RangeError(`${name}.${key} must be a finite number${log ? " > 0 (log axis)" : ""}; got ${String(v)}`);
+    }
+  }
+  if (a.min !== undefined && a.max !== undefined) {
+    if (!(a.min < a.max)) throw new RangeError(`${name}.min must be < ${name}.max; got ${a.min} and ${a.max}`);
+    if (!log && !(a.max - a.min >= MIN_LINEAR_SPAN && a.max - a.min < Infinity)) {
+      throw new RangeError(`${name}.max - ${name}.min must be finite and >= ${MIN_LINEAR_SPAN}; got ${a.max - a.min}`);
+    }
+  }
+}
+
+function checkSeries(s: Series, i: number): void {
+  const n = s.x.length;
+  const bad = (what: string, len: number): RangeError =>
+    new RangeError(`series[${i}] (${s.name}): ${what} must have the same length as x (${n}); got ${len}`);
+  if (s.y.length !== n) throw bad("y", s.y.length);
+  if (s.type === "scatter") {
+    if (s.yErr !== undefined && s.yErr.length !== n) throw bad("yErr", s.yErr.length);
+    if (s.yErrLow !== undefined && s.yErrLow.length !== n) throw bad("yErrLow", s.yErrLow.length);
+    if (s.yErrHigh !== undefined && s.yErrHigh.length !== n) throw bad("yErrHigh", s.yErrHigh.length);
+  }
+}
+
+const valid = (v: number | undefined, log: boolean): v is number =>
+  v !== undefined && Number.isFinite(v) && (!log || v > 0);
+
+function collectX(
+  series: readonly Series[],
+  bands: readonly BandCurve[],
+  log: boolean,
+  yLog: boolean,
+): { lo: number; hi: number; count: number } {
+  let lo = Infinity;
+  let hi = -Infinity;
+  let count = 0;
+  for (const s of series) {
+    for (let i = 0; i < s.x.length; i++) {
+      const x = s.x[i];
+      if (!valid(x, log) || !valid(s.y[i], yLog)) continue;
+      if (x < lo) lo = x;
+      if (x > hi) hi = x;
+      count++;
+    }
+  }
+  if (count === 0) {
+    // Only bands (or nothing): let the bands set the x range.
+    for (const b of bands) {
+      for (let i = 0; i < b.x.length; i++) {
+        const x = b.x[i];
+        if (!valid(x, log)) continue;
+        if (x < lo) lo = x;
+        if (x > hi) hi = x;
+      }
+    }
+  }
+  return { lo, hi, count };
+}
+
+function collectY(
+  series: readonly Series[],
+  log: boolean,
+  xRange: readonly [number, number],
+  xLog: boolean,
+): { lo: number; hi: number } {
+  let lo = Infinity;
+  let hi = -Infinity;
+  const take = (v: number): void => {
+    if (!valid(v, log)) return;
+    if (v < lo) lo = v;
+    if (v > hi) hi = v;
+  };
+  for (const s of series) {
+    for (let i = 0; i < s.x.length; i++) {
+      const x = s.x[i];
+      const y = s.y[i];
+      if (!valid(x, xLog) || !valid(y, log) || x < xRange[0] || x > xRange[1]) continue;
+      take(y);
+      if (s.type === "scatter") {
+        const eLo = s.yErrLow?.[i] ?? s.yErr?.[i];
+        const eHi = s.yErrHigh?.[i] ?? s.yErr?.[i];
+        if (eLo !== undefined && eLo >= 0 && Number.isFinite(eLo)) take(y - eLo);
+        if (eHi !== undefined && eHi >= 0 && Number.isFinite(eHi)) take(y + eHi);
+      }
+    }
+  }
+  return { lo, hi };
+}
+
+/** Resolve an axis range from explicit limits and data extremes, rounding data-derived ends out to nice values. */
+function autoRange(
+  min: number | undefined,
+  max: number | undefined,
+  dataLo: number,
+  dataHi: number,
+  log: boolean,
+): [number, number] {
+  // Keep every derived number finite: linear data within ±8e307 (so spans fit in a double),
+  // log data within 1e-323…1e308 (decade ends must be representable and > 0).
+  const BIG = 8e307;
+  let lo = min ?? (log ? Math.max(dataLo, 1e-323) : Math.max(dataLo, -BIG));
+  let hi = max ?? (log ? Math.min(dataHi, 1e308) : Math.min(dataHi, BIG));
+  if (!(dataLo <= dataHi) && (min === undefined || max === undefined)) {
+    // No data: a default range, respecting whichever end was given.
+    if (log) {
+      lo = min ?? (max !== undefined ? max / 10 : 1);
+      hi = max ?? lo * 10;
+    } else {
+      lo = min ?? (max !== undefined ? max - 1 : 0);
+      hi = max ?? lo + 1;
+    }
+    return [lo, hi];
+  }
+  if (log) {
+    let elo = Math.log10(lo);
+    let ehi = Math.log10(hi);
+    if (!(elo < ehi)) {
+      // Degenerate: widen by half a decade each way, never past an explicit end.
+      if (min === undefined) elo -= 0.5;
+      if (max === undefined) ehi += 0.5;
+    }
+    const nlo = min ?? Number(`1e${Math.max(-323, Math.floor(elo + 1e-9))}`);
+    const nhi = max ?? Number(`1e${Math.min(308, Math.ceil(ehi - 1e-9))}`);
+    if (nlo < nhi) return [nlo, nhi];
+    return nlo < 1e307 ? [nlo, nlo * 10] : [nhi / 10, nhi];
+  }
+  if (!(hi - lo >= MIN_LINEAR_SPAN)) {
+    // Degenerate (or narrower than the tick code handles): widen, never past an explicit end.
+    const pad = lo === 0 ? 1 : Math.max(Math.abs(lo) * 0.1, MIN_LINEAR_SPAN);
+    if (min === undefined) lo -= pad;
+    if (max === undefined) hi += pad;
+    if (!(hi - lo >= MIN_LINEAR_SPAN)) return [lo, lo + Math.max(1, Math.abs(lo) * 0.1)];
+  }
+  const t = linearTicks(lo, hi, 6);
+  const step = t.major.length >= 2 ? (t.major[1] ?? 0) - (t.major[0] ?? 0) : hi - lo;
+  const nlo = min ?? Math.floor(lo / step + 1e-9) * step;
+  const nhi = max ?? Math.ceil(hi / step - 1e-9) * step;
+  return Number.isFinite(nlo) && Number.isFinite(nhi) && nlo < nhi ? [nlo, nhi] : [lo, hi];
+}
+
+function makeScale(range: readonly [number, number], log: boolean, target: number): Scale {
+  const [min, max] = range;
+  return { log, min, max, ticks: log ? logTicks(min, max) : linearTicks(min, max, target) };
+}
+
+/** Position of `v` on the axis as a fraction of its length (0 at min, 1 at max), or NaN if not drawable. */
+function norm(v: number, s: Scale): number {
+  let u: number;
+  if (s.log) {
+    if (!(v > 0) || v === Infinity) return NaN;
+    u = (Math.log10(v) - Math.log10(s.min)) / (Math.log10(s.max) - Math.log10(s.min));
+  } else {
+    if (!Number.isFinite(v)) return NaN;
+    u = v / (s.max - s.min) - s.min / (s.max - s.min);
+  }
+  if (!Number.isFinite(u)) return NaN;
+  return u < -LIMIT ? -LIMIT : u > LIMIT ? LIMIT : u;
+}
+
+/**
+ * Liang–Barsky clipping of the segment (u0,v0)–(u1,v1) to the unit square.
+ * Returns the entry/exit parameters [t0, t1] or null when the segment misses.
+ * Source: Y.-D. Liang and B. A. Barsky, "A new concept and method for line
+ * clipping", ACM Transactions on Graphics 3(1), 1984.
+ */
+function clipUnit(u0: number, v0: number, u1: number, v1: number): [number, number] | null {
+  const du = u1 - u0;
+  const dv = v1 - v0;
+  let t0 = 0;
+  let t1 = 1;
+  const p = [-du, du, -dv, dv];
+  const q = [u0, 1 - u0, v0, 1 - v0];
+  for (let k = 0; k < 4; k++) {
+    const pk = p[k] ?? 0;
+    const qk = q[k] ?? 0;
+    if (pk === 0) {
+      if (qk < 0) return null;
+    } else {
+      const r = qk / pk;
+      if (pk < 0) {
+        if (r > t1) return null;
+        if (r > t0) t0 = r;
+      } else {
+        if (r < t0) return null;
+        if (r < t1) t1 = r;
+      }
+    }
+  }
+  return [t0, t1];
+}
+
+// ---------------------------------------------------------------------------
+// drawing
+
+function drawGrid(o: string[], r: Rect, xs: Scale, ys: Scale): void {
+  const parts: string[] = [];
+  for (const v of xs.ticks.major) {
+    const x = r.x + norm(v, xs) * r.w;
+    parts.push(`M${px(x)} ${px(r.y)}V${px(r.y + r.h)}`);
+  }
+  for (const v of ys.ticks.major) {
+    const y = r.y + (1 - norm(v, ys)) * r.h;
+    parts.push(`M${px(r.x)} ${px(y)}H${px(r.x + r.w)}`);
+  }
+  if (parts.length > 0) o.push(`<path d="${parts.join("")}" stroke="#e3e3e3" stroke-width="1" fill="none"/>`);
+  o.push(`<rect x="${px(r.x)}" y="${px(r.y)}" width="${px(r.w)}" height="${px(r.h)}" fill="none" stroke="#333333" stroke-width="1"/>`);
+}
+
+function drawXAxis(o: string[], r: Rect, s: Scale, labels: boolean, title: string | undefined): void {
+  const base = r.y + r.h;
+  const d: string[] = [];
+  for (const v of s.ticks.major) d.push(`M${px(r.x + norm(v, s) * r.w)} ${px(base)}v5`);
+  for (const v of s.ticks.minor) d.push(`M${px(r.x + norm(v, s) * r.w)} ${px(base)}v3`);
+  if (d.length > 0) o.push(`<path d="${d.join("")}" stroke="#333333" stroke-width="1" fill="none"/>`);
+  if (labels) {
+    s.ticks.major.forEach((v, i) => {
+      o.push(
+        `<text x="${px(r.x + norm(v, s) * r.w)}" y="${px(base + 18)}" text-anchor="middle">${escapeXml(s.ticks.labels[i] ?? "")}</text>`,
+      );
+    });
+  }
+  if (title !== undefined && title !== "") {
+    o.push(`<text x="${px(r.x + r.w / 2)}" y="${px(base + 40)}" text-anchor="middle" font-size="13">${escapeXml(title)}</text>`);
+  }
+}
+
+function drawYAxis(o: string[], r: Rect, s: Scale, side: "left" | "right", title: string | undefined): void {
+  const xEdge = side === "left" ? r.x : r.x + r.w;
+  const dir = side === "left" ? -1 : 1;
+  const d: string[] = [];
+  const yOf = (v: number): number => r.y + (1 - norm(v, s)) * r.h;
+  for (const v of s.ticks.major) d.push(`M${px(xEdge)} ${px(yOf(v))}h${dir * 5}`);
+  for (const v of s.ticks.minor) d.push(`M${px(xEdge)} ${px(yOf(v))}h${dir * 3}`);
+  const faint = side === "right" ? ' opacity="0.6"' : "";
+  if (d.length > 0) o.push(`<path d="${d.join("")}" stroke="#333333" stroke-width="1" fill="none"${faint}/>`);
+  s.ticks.major.forEach((v, i) => {
+    o.push(
+      `<text x="${px(xEdge + dir * 8)}" y="${px(yOf(v) + 4)}" text-anchor="${side === "left" ? "end" : "start"}"${faint}>${escapeXml(s.ticks.labels[i] ?? "")}</text>`,
+    );
+  });
+  if (title !== undefined && title !== "") {
+    const x = side === "left" ? r.x - 60 : r.x + r.w + 46;
+    const y = r.y + r.h / 2;
+    o.push(
+      `<text x="${px(x)}" y="${px(y)}" transform="rotate(-90 ${px(x)} ${px(y)})" text-anchor="middle" font-size="13"${faint}>${escapeXml(title)}</text>`,
+    );
+  }
+}
+
+/** Visible pieces of a polyline through (x[i], y[i]), clipped to the rect; each piece is a list of pixel points. */
+function clippedPieces(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  r: Rect,
+  xs: Scale,
+  ys: Scale,
+): number[][] {
+  const pieces: number[][] = [];
+  let cur: number[] | null = null;
+  let pu = NaN;
+  let pv = NaN;
+  const toPx = (u: number, v: number, into: number[]): void => {
+    into.push(r.x + u * r.w, r.y + (1 - v) * r.h);
+  };
+  for (let i = 0; i < x.length; i++) {
+    const u = norm(x[i] ?? NaN, xs);
+    const v = norm(y[i] ?? NaN, ys);
+    if (Number.isNaN(u) || Number.isNaN(v)) {
+      cur = null;
+      pu = NaN;
+      continue;
+    }
+    if (!Number.isNaN(pu)) {
+      const t = clipUnit(pu, pv, u, v);
+      if (t === null) cur = null;
+      else {
+        const [t0, t1] = t;
+        const du = u - pu;
+        const dv = v - pv;
+        if (cur === null || t0 > 0) {
+          cur = [];
+          pieces.push(cur);
+          toPx(pu + t0 * du, pv + t0 * dv, cur);
+        }
+        toPx(pu + t1 * du, pv + t1 * dv, cur);
+        if (t1 < 1) cur = null;
+      }
+    }
+    pu = u;
+    pv = v;
+  }
+  return pieces;
+}
+
+function pathData(pieces: readonly number[][]): string {
+  let d = "";
+  for (const p of pieces) {
+    for (let k = 0; k < p.length; k += 2) d += `${k === 0 ? "M" : "L"}${px(p[k] ?? 0)} ${px(p[k + 1] ?? 0)}`;
+  }
+  return d;
+}
+
+function drawLine(o: string[], s: LineSeries, color: string, r: Rect, xs: Scale, ys: Scale): void {
+  const d = pathData(clippedPieces(s.x, s.y, r, xs, ys));
+  if (d === "") return;
+  const w = s.width !== undefined && s.width > 0 && Number.isFinite(s.width) ? s.width : 1.5;
+  const dash = s.dashed === true ? ' stroke-dasharray="6 4"' : "";
+  o.push(
+    `<path d="${d}" fill="none" stroke="${escapeXml(color)}" stroke-width="${px(w)}" stroke-linejoin="round"${dash}><title>${escapeXml(s.name)}</title></path>`,
+  );
+}
+
+function drawScatter(o: string[], s: ScatterSeries, color: string, r: Rect, xs: Scale, ys: Scale): void {
+  const rad = s.radius !== undefined && s.radius > 0 && Number.isFinite(s.radius) ? s.radius : 3;
+  const bars: string[] = [];
+  const dots: string[] = [];
+  for (let i = 0; i < s.x.length; i++) {
+    const u = norm(s.x[i] ?? NaN, xs);
+    const v = norm(s.y[i] ?? NaN, ys);
+    if (!(u >= 0 && u <= 1 && v >= 0 && v <= 1)) continue; // invalid or outside the ranges: omitted
+    const cx = r.x + u * r.w;
+    const cy = r.y + (1 - v) * r.h;
+    dots.push(`<circle cx="${px(cx)}" cy="${px(cy)}" r="${px(rad)}"/>`);
+    const y = s.y[i] ?? NaN;
+    const eLo = s.yErrLow?.[i] ?? s.yErr?.[i];
+    const eHi = s.yErrHigh?.[i] ?? s.yErr?.[i];
+    const okErr = (e: number | undefined): e is number => e !== undefined && e >= 0 && Number.isFinite(e);
+    if (!okErr(eLo) && !okErr(eHi)) continue;
+    // Lower end: a value ≤ 0 on a log axis is off the bottom → clipped to the axis.
+    let vLo = okErr(eLo) ? norm(y - eLo, ys) : v;
+    if (Number.isNaN(vLo)) vLo = 0;
+    let vHi = okErr(eHi) ? norm(y + eHi, ys) : v;
+    if (Number.isNaN(vHi)) vHi = 1;
+    const capLo = vLo >= 0;
+    const capHi = vHi <= 1;
+    vLo = Math.max(0, vLo);
+    vHi = Math.min(1, vHi);
+    const yLo = r.y + (1 - vLo) * r.h;
+    const yHi = r.y + (1 - vHi) * r.h;
+    let d = `M${px(cx)} ${px(yLo)}V${px(yHi)}`;
+    const cap = rad + 1;
+    if (capLo && okErr(eLo)) d += `M${px(cx - cap)} ${px(yLo)}h${px(2 * cap)}`;
+    if (capHi && okErr(eHi)) d += `M${px(cx - cap)} ${px(yHi)}h${px(2 * cap)}`;
+    bars.push(d);
+  }
+  const c = escapeXml(color);
+  o.push(`<g fill="${c}" stroke="${c}"><title>${escapeXml(s.name)}</title>`);
+  if (bars.length > 0) o.push(`<path d="${bars.join("")}" fill="none" stroke-width="1"/>`);
+  o.push(...dots);
+  o.push("</g>");
+}
+
+function drawBand(o: string[], b: BandCurve, color: string, r: Rect, xs: Scale): void {
+  let peak = 0;
+  for (let i = 0; i < b.response.length; i++) {
+    const v = b.response[i] ?? NaN;
+    if (Number.isFinite(v) && v > peak) peak = v;
+  }
+  if (!(peak > 0)) return;
+  const ys: Scale = { log: false, min: 0, max: 1, ticks: { major: [], minor: [], labels: [] } };
+  const norm01 = Array.from({ length: b.response.length }, (_, i) => {
+    const v = b.response[i] ?? NaN;
+    return Number.isFinite(v) ? Math.max(0, v / peak) : NaN;
+  });
+  const pieces = clippedPieces(b.x, norm01, r, xs, ys);
+  if (pieces.length === 0) return;
+  const base = r.y + r.h;
+  let fill = "";
+  for (const p of pieces) {
+    if (p.length < 4) continue;
+    fill += `M${px(p[0] ?? 0)} ${px(base)}`;
+    for (let k = 0; k < p.length; k += 2) fill += `L${px(p[k] ?? 0)} ${px(p[k + 1] ?? 0)}`;
+    fill += `L${px(p[p.length - 2] ?? 0)} ${px(base)}Z`;
+  }
+  const c = escapeXml(color);
+  o.push(
+    `<path d="${fill}" fill="${c}" fill-opacity="0.12" stroke="${c}" stroke-opacity="0.5" stroke-width="1"><title>${escapeXml(b.name)}</title></path>`,
+  );
+}
+
+function drawLegend(o: string[], r: Rect, series: readonly Series[], bands: readonly BandCurve[]): void {
+  const names = [...series.map((s) => s.name), ...bands.map((b) => b.name)];
+  if (names.length === 0) return;
+  const rowH = 16;
+  const longest = Math.max(...names.map((n) => [...n].length));
+  const w = Math.min(r.w - 8, 34 + longest * 6.5);
+  const h = names.length * rowH + 8;
+  const x0 = r.x + r.w - w - 6;
+  const y0 = r.y + 6;
+  o.push(`<g font-size="11">`);
+  o.push(`<rect x="${px(x0)}" y="${px(y0)}" width="${px(w)}" height="${px(h)}" fill="#ffffff" fill-opacity="0.85" stroke="#bbbbbb"/>`);
+  let row = 0;
+  const entry = (swatch: string, name: string): void => {
+    const y = y0 + 4 + row * rowH + rowH / 2;
+    o.push(swatch.replaceAll("{Y}", px(y)));
+    o.push(`<text x="${px(x0 + 28)}" y="${px(y + 4)}">${escapeXml(name)}</text>`);
+    row++;
+  };
+  series.forEach((s, i) => {
+    const c = escapeXml(s.color ?? PALETTE[i % PALETTE.length] ?? "#000");
+    if (s.type === "line") {
+      const dash = s.dashed === true ? ' stroke-dasharray="6 4"' : "";
+      entry(`<line x1="${px(x0 + 6)}" y1="{Y}" x2="${px(x0 + 22)}" y2="{Y}" stroke="${c}" stroke-width="2"${dash}/>`, s.name);
+    } else {
+      entry(`<circle cx="${px(x0 + 14)}" cy="{Y}" r="3" fill="${c}"/>`, s.name);
+    }
+  });
+  bands.forEach((b, i) => {
+    const c = escapeXml(b.color ?? PALETTE[(series.length + i) % PALETTE.length] ?? "#000");
+    const y = y0 + 4 + row * rowH + rowH / 2;
+    entry(`<rect x="${px(x0 + 6)}" y="${px(y - 5)}" width="16" height="10" fill="${c}" fill-opacity="0.2" stroke="${c}" stroke-opacity="0.5"/>`, b.name);
+  });
+  o.push(`</g>`);
+}
