@@ -83,9 +83,13 @@ describe("CCM89 extinction law (Cardelli, Clayton & Mathis 1989, ApJ 345, 245, e
     expect(f(4.6)).toBeGreaterThan(f(5.3));
   });
 
-  it("is monotone increasing with x through the IR and optical (property)", () => {
+  // For R_V ≳ 5.4 the optical polynomial flattens and turns over slightly
+  // near x ≈ 3 µm⁻¹ (at R_V = 5.5: A/A_V = 1.30507 at x = 2.95, 1.30109 at
+  // x = 3.20), a known feature of the CCM 1989 fit for large R_V, so the
+  // monotonicity property is stated for 2.6 ≤ R_V ≤ 5.3.
+  it("is monotone increasing with x through the IR and optical for 2.6 ≤ R_V ≤ 5.3 (property)", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.3, max: 3.28, noNaN: true }), fc.double({ min: 2.6, max: 5.5, noNaN: true }), (x, rv) => {
+      fc.property(fc.double({ min: 0.3, max: 3.28, noNaN: true }), fc.double({ min: 2.6, max: 5.3, noNaN: true }), (x, rv) => {
         expect(ccm89RatioInverseMicron(x + 0.01, rv)).toBeGreaterThan(ccm89RatioInverseMicron(x, rv));
       }),
     );
