@@ -67,6 +67,7 @@ footer{margin-top:2rem;padding-top:.8rem;border-top:1px solid #ccc;font-size:.88
  *
  * @example
  * ```ts
+ * import { htmlReport } from "starlume";
  * const html = htmlReport({
  *   title: "Fit of HD 140283",
  *   description: "Blackbody fit to 5 photometric points.",

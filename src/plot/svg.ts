@@ -145,6 +145,7 @@ const LIMIT = 1e6;
  *
  * @example
  * ```ts
+ * import { svgChart } from "starlume";
  * const svg = svgChart({
  *   title: "Planck spectrum, 5772 K",
  *   x: { label: "wavelength [nm]", scale: "log" },

@@ -40,6 +40,7 @@ const SUPERSCRIPT: Readonly<Record<string, string>> = {
  *
  * @example
  * ```ts
+ * import { powerOfTenLabel } from "starlume";
  * powerOfTenLabel(-7); // "10⁻⁷"
  * ```
  */
@@ -54,6 +55,7 @@ export function powerOfTenLabel(exponent: number): string {
  *
  * @example
  * ```ts
+ * import { niceStep } from "starlume";
  * niceStep(15.9, 6); // [2, 0]: 15.9 / 6 = 2.65 → step 2
  * ```
  */
@@ -94,6 +96,7 @@ function stepValue(i: number, m: number, p: number): number {
  *
  * @example
  * ```ts
+ * import { linearTicks } from "starlume";
  * linearTicks(0, 1).major; // [0, 0.2, 0.4, 0.6, 0.8, 1]
  * ```
  */
@@ -158,6 +161,7 @@ function linearLabel(v: number, p: number, biggest: number): string {
  *
  * @example
  * ```ts
+ * import { logTicks } from "starlume";
  * logTicks(1e-7, 1e-5).major;  // [1e-7, 1e-6, 1e-5]
  * logTicks(1e-7, 1e-5).labels; // ["10⁻⁷", "10⁻⁶", "10⁻⁵"]
  * ```

@@ -15,6 +15,7 @@
  *
  * @example
  * ```ts
+ * import { escapeXml } from "starlume";
  * escapeXml('H<sub>α</sub> & "Hβ"'); // "H&lt;sub&gt;α&lt;/sub&gt; &amp; &quot;Hβ&quot;"
  * ```
  */
@@ -34,10 +35,11 @@ const ENTITY: Readonly<Record<string, string>> = {
 
 /**
  * Format a pixel coordinate with at most 2 decimals and no `-0`, for compact
- * SVG output. Callers guarantee finiteness.
+ * SVG output. Callers guarantee finiteness. Internal to the plot module.
  *
+ * @internal
  * @example
- * ```ts
+ * ```text
  * px(12.3456); // "12.35"
  * px(-0.001);  // "0"
  * ```
