@@ -1,0 +1,185 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { C } from "../constants/values";
+import { CGS, SI } from "../quantity/system";
+import { times10 } from "../quantity/unit";
+import { units } from "../quantity/units";
+import { assume, assumeArray } from "../quantity/quantity";
+import type { Length, LengthArray, Velocity } from "../quantity/aliases";
+import {
+  classicalDopplerWavelengthSI,
+  classicalVelocityFromWavelengthsSI,
+  dopplerShiftWavelengthsSI,
+  observedWavelengthFromRedshiftSI,
+  radialVelocityFromWavelengthsSI,
+  redshiftFromVelocitySI,
+  redshiftFromWavelengthsSI,
+  relativisticDopplerWavelengthSI,
+  velocityFromRedshiftSI,
+} from "./kernels/doppler";
+import { AIR_WAVELENGTH_MAX_M } from "./kernels/air-vacuum";
+import {
+  dopplerShift,
+  dopplerShiftArray,
+  radialVelocityFromWavelengths,
+  redshiftFromVelocity,
+  redshiftFromWavelengths,
+  redshiftWavelength,
+  velocityFromRedshift,
+  type DopplerModel,
+} from "./doppler";
+import { airToVacuum, airWavelength, vacuumToAir, vacuumWavelength } from "./medium";
+import { ions } from "./levels";
+import { transitionVacuumWavelength } from "./lines";
+
+const rel = (a: number, b: number): number => Math.abs(a / b - 1);
+const lenSI = (x: number) => assume<Length<"SI">>(x);
+const lenCGS = (x: number) => assume<Length<"CGS">>(x);
+const vSI = (x: number) => assume<Velocity<"SI">>(x);
+const vCGS = (x: number) => assume<Velocity<"CGS">>(x);
+const signedLog = (lo: number, hi: number) =>
+  fc.tuple(fc.boolean(), fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true })).map(([s, x]) => (s ? 1 : -1) * Math.exp(x));
+
+describe("typed = kernel (SI)", () => {
+  it("scalar functions", () => {
+    for (const v of [-2.9e8, -3e4, 1e-3, 1.2e5, 0.6 * C]) {
+      expect(redshiftFromVelocity(SI, vSI(v))).toBe(redshiftFromVelocitySI(v));
+      expect(redshiftFromVelocity(SI, vSI(v), "classical")).toBe(v / C);
+      expect(dopplerShift(SI, lenSI(656.28e-9), vSI(v))).toBe(relativisticDopplerWavelengthSI(656.28e-9, v));
+      expect(dopplerShift(SI, lenSI(656.28e-9), vSI(v), "classical")).toBe(classicalDopplerWavelengthSI(656.28e-9, v));
+    }
+    for (const z of [-0.5, 1e-6, 0.1, 3, 1100]) {
+      expect(velocityFromRedshift(SI, z)).toBe(velocityFromRedshiftSI(z));
+      expect(velocityFromRedshift(SI, z, "classical")).toBe(C * z);
+      expect(redshiftWavelength(SI, lenSI(121.567e-9), z)).toBe(observedWavelengthFromRedshiftSI(121.567e-9, z));
+    }
+    expect(redshiftFromWavelengths(SI, lenSI(660e-9), lenSI(600e-9))).toBe(redshiftFromWavelengthsSI(660e-9, 600e-9));
+    expect(radialVelocityFromWavelengths(SI, lenSI(656.3e-9), lenSI(656.28e-9))).toBe(radialVelocityFromWavelengthsSI(656.3e-9, 656.28e-9));
+    expect(radialVelocityFromWavelengths(SI, lenSI(656.3e-9), lenSI(656.28e-9), "classical")).toBe(
+      classicalVelocityFromWavelengthsSI(656.3e-9, 656.28e-9),
+    );
+  });
+  it("line lists", () => {
+    const rest = Float64Array.of(656.28e-9, 486.13e-9, -1, Number.NaN, 2e-6);
+    const ref = new Float64Array(5);
+    const r = dopplerShiftWavelengthsSI(rest, 3e5, ref);
+    const typed = dopplerShiftArray(SI, assumeArray<LengthArray<"SI">>(rest), vSI(3e5));
+    expect(typed.invalid).toEqual(r.invalid);
+    expect(typed.invalid).toEqual([2, 3]);
+    for (const i of [0, 1, 4]) expect(typed.values[i]).toBe(ref[i]);
+    expect(typed.values[2]).toBeNaN();
+    // a new array: the input is untouched
+    expect(rest[0]).toBe(656.28e-9);
+    // classical: each row is the scalar classical shift
+    const cl = dopplerShiftArray(SI, assumeArray<LengthArray<"SI">>(rest), vSI(3e5), "classical");
+    expect(cl.values[1]).toBe(classicalDopplerWavelengthSI(486.13e-9, 3e5));
+  });
+});
+
+describe("CGS = SI × 10^k exactly for the same physical input", () => {
+  it("velocities × 10², redshifts unchanged, wavelengths × 10²", () => {
+    for (const model of ["relativistic", "classical"] as DopplerModel[]) {
+      for (const z of [-0.3, 1e-4, 2]) {
+        expect(velocityFromRedshift(CGS, z, model)).toBe(times10(velocityFromRedshift(SI, z, model), 2));
+      }
+      for (const ms of [-1e5, 42, 2.5e7]) {
+        const cms = times10(ms, 2);
+        const si = times10(cms, -2);
+        expect(redshiftFromVelocity(CGS, vCGS(cms), model)).toBe(redshiftFromVelocity(SI, vSI(si), model));
+        const lamCm = times10(486.27e-9, 2);
+        const lamSi = times10(lamCm, -2);
+        expect(dopplerShift(CGS, lenCGS(lamCm), vCGS(cms), model)).toBe(times10(dopplerShift(SI, lenSI(lamSi), vSI(si), model), 2));
+        const arr = assumeArray<LengthArray<"CGS">>(Float64Array.of(lamCm, 0));
+        const shifted = dopplerShiftArray(CGS, arr, vCGS(cms), model);
+        expect(shifted.values[0]).toBe(times10(dopplerShift(SI, lenSI(lamSi), vSI(si), model), 2));
+        expect(shifted.invalid).toEqual([1]);
+      }
+    }
+  });
+});
+
+describe("physics", () => {
+  it("β = 0.6 → z = 1 exactly as the textbook point (Rybicki & Lightman §4.8): 1 + z = √(1.6/0.4) = 2", () => {
+    // atanh/expm1 of 0.6: a few ulp → 1e-15
+    expect(Math.abs(redshiftFromVelocity(CGS, CGS.of(0.6 * 299792.458, units.km_per_s)) - 1)).toBeLessThan(1e-15);
+  });
+  it("property: velocity → redshift → velocity round trip in CGS (|β| 1e-12 … 0.999)", () => {
+    fc.assert(
+      fc.property(signedLog(1e-12, 0.999), fc.constantFrom<DopplerModel>("relativistic", "classical"), (beta, model) => {
+        const v = vCGS(times10(beta * C, 2));
+        // kernel bound 4e-15 relative (kernels/doppler.test.ts) plus two correctly rounded scalings
+        return rel(velocityFromRedshift(CGS, redshiftFromVelocity(CGS, v, model), model), v) < 5e-15;
+      }),
+      { numRuns: 200 },
+    );
+  });
+  it("property: shift a line, then measure its velocity: the velocity comes back (same medium, any brand)", () => {
+    fc.assert(
+      fc.property(signedLog(1e-7, 0.9), fc.double({ min: 200e-9, max: 20e-6, noNaN: true }), (beta, m) => {
+        const rest = airWavelength(SI, lenSI(m));
+        const v = vSI(beta * C);
+        const obs = dopplerShift(SI, rest, v);
+        // the kernel's bound (kernels/doppler.test.ts): |Δv| ≤ 1e-15|v| + 4e-16 c
+        return Math.abs(radialVelocityFromWavelengths(SI, obs, rest) - v) <= 1e-15 * Math.abs(v) + 4e-16 * C;
+      }),
+      { numRuns: 200 },
+    );
+  });
+  it("classical and relativistic agree to O(β²)", () => {
+    const lam = vacuumWavelength(SI, SI.of(500, units.nm));
+    const v = SI.of(100, units.km_per_s);
+    const beta = 1e5 / C;
+    const d = dopplerShift(SI, lam, v) - dopplerShift(SI, lam, v, "classical");
+    // λ(β²/2 + β³/2 + …): compare with λβ²/2 to O(β) relative (3e-4), plus rounding of λ (1e-16 λ → 2e-9 of d)
+    expect(rel(d, (lam * beta * beta) / 2)).toBeLessThan(1e-3);
+  });
+  it("a redshifted Lyman α at z = 3 is observed at 486.27 nm (vacuum), 486.13 nm in air", () => {
+    const lyA = transitionVacuumWavelength(SI, ions.H, 1, 2, { model: "dirac-centroid" });
+    const obs = redshiftWavelength(SI, lyA, 3);
+    // 4 × 121.5668 nm = 486.267 nm; the Dirac centroid is within 1e-5 of NIST's 121.567 (lines.test.ts)
+    expect(rel(SI.valueIn(obs, units.nm), 4 * 121.567)).toBeLessThan(1e-5);
+    expect(rel(SI.valueIn(vacuumToAir(SI, obs), units.nm), 486.13)).toBeLessThan(2e-5);
+  });
+  it("the air approximation: shifting an air wavelength directly vs through vacuum (module header bound)", () => {
+    // exact: air → vacuum → shift → air. Measured worst cases on a 4000-point log grid, |z| ≤ 1e-2:
+    // ≤ 4.4e-5|z| above 300 nm, ≤ 1.4e-5|z| above 500 nm, ≤ 1.5e-4|z| down to 200 nm.
+    let worst300 = 0;
+    let worst500 = 0;
+    let worst200 = 0;
+    for (const z of [1e-3, -1e-3, 1e-2, -1e-2]) {
+      for (let i = 0; i <= 400; i++) {
+        const m = 200e-9 * Math.pow(AIR_WAVELENGTH_MAX_M / 200e-9, i / 400);
+        const air = airWavelength(SI, lenSI(m));
+        const vac = airToVacuum(SI, air);
+        const vacObs = redshiftWavelength(SI, vac, z);
+        if (!(vacObs >= 200.07e-9 && vacObs <= 20.005e-6)) continue;
+        const exact = vacuumToAir(SI, vacObs);
+        const r = rel(redshiftWavelength(SI, air, z), exact) / Math.abs(z);
+        worst200 = Math.max(worst200, r);
+        if (m >= 300e-9) worst300 = Math.max(worst300, r);
+        if (m >= 500e-9) worst500 = Math.max(worst500, r);
+      }
+    }
+    expect(worst300).toBeLessThan(4.4e-5);
+    expect(worst500).toBeLessThan(1.4e-5);
+    expect(worst200).toBeLessThan(1.5e-4);
+    // and it is a real effect, not rounding: ≥ 1e-6 |z| somewhere
+    expect(worst500).toBeGreaterThan(1e-6);
+  });
+});
+
+describe("bad input: RangeError naming the parameter and the caller's unit", () => {
+  it("|v| ≥ c", () => {
+    expect(() => redshiftFromVelocity(CGS, vCGS(3e10))).toThrow(/^radialVelocity must be a finite number with \|radialVelocity\| < c = 29979245800 cm s\^-1; got 30000000000$/);
+    expect(() => dopplerShift(SI, lenSI(5e-7), vSI(-C))).toThrow(/radialVelocity .* m s\^-1/);
+    expect(() => dopplerShiftArray(SI, assumeArray<LengthArray<"SI">>(new Float64Array(2)), vSI(Number.NaN))).toThrow(/radialVelocity/);
+  });
+  it("redshift ≤ −1, bad wavelengths, bad model", () => {
+    expect(() => velocityFromRedshift(SI, -1)).toThrow(/^redshift must be a finite number > -1/);
+    expect(() => redshiftWavelength(SI, lenSI(5e-7), Number.NaN)).toThrow(/^redshift must/);
+    expect(() => dopplerShift(CGS, lenCGS(-5e-5), vCGS(0))).toThrow(/^restWavelength must be a finite number > 0 cm; got -0.00005$/);
+    expect(() => redshiftFromWavelengths(SI, lenSI(0), lenSI(1))).toThrow(/^observedWavelength must/);
+    expect(() => radialVelocityFromWavelengths(SI, lenSI(1), lenSI(-1))).toThrow(/^restWavelength must/);
+    expect(() => redshiftFromVelocity(SI, vSI(1), "newtonian" as DopplerModel)).toThrow(/^model must be/);
+  });
+});

@@ -1,0 +1,269 @@
+/**
+ * Energy levels of hydrogen-like ions (one electron bound to a nucleus of
+ * charge Z and mass M), typed, in SI (J) or CGS (erg); eV via `units.eV`.
+ *
+ * Two models:
+ * - **Bohr/Rydberg** with the reduced-mass correction:
+ *   E_n = −h c R∞ Z² (μ/m_e) / n²,  μ = m_e M / (m_e + M).
+ *   Omits fine structure (~(Zα)²/n relative: 5 × 10⁻⁵ for H n = 1).
+ * - **Dirac** (point nucleus) with the same reduced-mass scaling
+ *   (H. A. Bethe & E. E. Salpeter, "Quantum Mechanics of One- and Two-Electron
+ *   Atoms", 1957, §14–§16): E(n, j) = μc² [f(n, j) − 1],
+ *   f = [1 + (Zα/(n − δ))²]^(−1/2), δ = j + ½ − √((j + ½)² − (Zα)²).
+ *   Omits the Lamb shift (QED; 2.5 × 10⁻⁶ relative for H 1s), hyperfine
+ *   structure, finite nuclear size and higher-order recoil.
+ *
+ * Energies are measured from the ionisation limit (negative for bound
+ * levels). Constants: CODATA 2018. Accuracy against 50-digit mpmath: ≤ 4e-15
+ * (Bohr) and ≤ 1e-14 (Dirac) relative (kernels/hydrogen-like.test.ts).
+ *
+ * @module
+ */
+import { fromSI, positive, toSI } from "../internal/typed";
+import { kinds } from "../quantity/aliases";
+import { checkedIon, modelOf } from "./checks";
+import type { Energy, Mass } from "../quantity/aliases";
+import type { SystemName } from "../quantity/quantity";
+import type { UnitSystem } from "../quantity/system";
+import {
+  ALPHA_PARTICLE_MASS_KG,
+  DEUTERON_MASS_KG,
+  PROTON_MASS_KG,
+  bohrLevelEnergySI,
+  diracLevelCentroidEnergySI,
+  diracLevelEnergySI,
+  nuclearMassFromMassNumberKg,
+  reducedMassKg,
+  requireNuclearCharge,
+  requireQuantumNumber,
+} from "./kernels/hydrogen-like";
+import { ionizationEnergySI } from "./kernels/transitions";
+
+const E = kinds.energy.dimension;
+const M = kinds.mass.dimension;
+
+/**
+ * A hydrogen-like ion: nuclear charge number Z and nuclear mass. System-free
+ * (use it with `SI` or `CGS`); build one with {@link ion} or
+ * {@link ionFromMassNumber}, or take a preset from {@link ions}.
+ */
+export interface Ion {
+  /** A label for messages and tables, e.g. `"H I"`, `"He II"`. */
+  readonly name: string;
+  /** Nuclear charge number Z (integer, 1–137). */
+  readonly z: number;
+  /**
+   * Nuclear mass in kilograms (the kernels' unit; `Infinity` for the
+   * infinite-mass limit μ = m_e). Read it typed with {@link nuclearMass}.
+   */
+  readonly nuclearMassKg: number;
+}
+
+/**
+ * Presets: ¹H (proton mass), ²H (deuteron mass) and ⁴He⁺ (alpha-particle
+ * mass), masses CODATA 2018; and `hydrogenInfiniteMass` (Z = 1, μ = m_e), whose
+ * levels are exactly −h c R∞ / n².
+ *
+ * @example
+ * ```ts
+ * import { SI, bohrLevelEnergy, ions, units } from "starlume";
+ * SI.valueIn(bohrLevelEnergy(SI, ions.HeII, 1), units.eV); // ≈ −54.4153 (Bohr)
+ * ```
+ */
+export const ions = Object.freeze({
+  /** ¹H: Z = 1, proton mass 1.672 621 923 69 × 10⁻²⁷ kg. */
+  H: Object.freeze({ name: "H I", z: 1, nuclearMassKg: PROTON_MASS_KG }) as Ion,
+  /** ²H (deuterium): Z = 1, deuteron mass 3.343 583 7724 × 10⁻²⁷ kg. */
+  D: Object.freeze({ name: "D I", z: 1, nuclearMassKg: DEUTERON_MASS_KG }) as Ion,
+  /** ⁴He⁺: Z = 2, alpha-particle mass 6.644 657 3357 × 10⁻²⁷ kg. */
+  HeII: Object.freeze({ name: "He II", z: 2, nuclearMassKg: ALPHA_PARTICLE_MASS_KG }) as Ion,
+  /** Z = 1 with an infinitely heavy nucleus (μ = m_e): the R∞ scale. */
+  hydrogenInfiniteMass: Object.freeze({ name: "H (M = ∞)", z: 1, nuclearMassKg: Infinity }) as Ion,
+});
+
+/**
+ * A hydrogen-like ion from its nuclear charge and nuclear mass (a typed
+ * mass, or `"infinite"` for the μ = m_e limit).
+ *
+ * @param sys - `SI` or `CGS` (the system of `nuclearMass`)
+ * @param z - nuclear charge number, integer 1–137
+ * @param nuclearMass - mass of the nucleus (not of the atom), in `sys`, or `"infinite"`
+ * @param name - label (default `"Z = <z>"`)
+ * @throws RangeError for a bad Z or a mass that is not finite and > 0
+ * @example
+ * ```ts
+ * import { CGS, ion, units } from "starlume";
+ * const li = ion(CGS, 3, CGS.of(1.1647e-23, units.g), "Li III"); // ⁷Li³⁺, nuclear mass ≈ 7.0144 u
+ * ```
+ */
+export function ion<S extends SystemName>(
+  sys: UnitSystem<S>,
+  z: number,
+  nuclearMass: Mass<NoInfer<S>> | "infinite",
+  name?: string,
+): Ion {
+  requireNuclearCharge(z);
+  let kg = Infinity;
+  if (nuclearMass !== "infinite") {
+    positive(sys, "nuclearMass", nuclearMass, M);
+    kg = toSI(sys, nuclearMass, M);
+  }
+  return Object.freeze({ name: name ?? `Z = ${z}`, z, nuclearMassKg: kg });
+}
+
+/**
+ * A hydrogen-like ion with nuclear mass approximated from the mass number:
+ * M ≈ A m_u − Z m_e (the atomic mass taken as A m_u; electron binding and
+ * the nuclear mass excess neglected). The excess (≤ ~0.1 u) changes μ/m_e
+ * by about (m_e/M)(ΔM/M): below 5 × 10⁻⁹ for A ≥ 12, but 4 × 10⁻⁶ for ¹H —
+ * use the {@link ions} presets for H, D and ⁴He.
+ *
+ * @param z - nuclear charge number (1–137)
+ * @param massNumber - mass number A (integer ≥ Z)
+ * @param name - label (default `"Z = <z>, A = <A>"`)
+ * @example
+ * ```ts
+ * import { SI, bohrLevelEnergy, ionFromMassNumber, units } from "starlume";
+ * const c6 = ionFromMassNumber(6, 12, "C VI");
+ * SI.valueIn(bohrLevelEnergy(SI, c6, 1), units.eV); // ≈ −489.78
+ * ```
+ */
+export function ionFromMassNumber(z: number, massNumber: number, name?: string): Ion {
+  const kg = nuclearMassFromMassNumberKg(massNumber, z);
+  return Object.freeze({ name: name ?? `Z = ${z}, A = ${massNumber}`, z, nuclearMassKg: kg });
+}
+
+/**
+ * The nuclear mass of an ion, typed (`Infinity` for the infinite-mass limit).
+ *
+ * @example
+ * ```ts
+ * import { CGS, ions, nuclearMass } from "starlume";
+ * nuclearMass(CGS, ions.H); // 1.67262192369e-24 (g)
+ * ```
+ */
+export function nuclearMass<S extends SystemName>(sys: UnitSystem<S>, ionValue: Ion): Mass<S> {
+  return fromSI(sys, checkedIon(ionValue).nuclearMassKg, M) as Mass<S>;
+}
+
+/**
+ * Reduced mass of the electron–nucleus system, μ = m_e M / (m_e + M)
+ * (m_e for an infinitely heavy nucleus).
+ *
+ * @example
+ * ```ts
+ * import { SI, ions, reducedMass } from "starlume";
+ * reducedMass(SI, ions.H); // ≈ 9.1044e-31 kg
+ * ```
+ */
+export function reducedMass<S extends SystemName>(sys: UnitSystem<S>, ionValue: Ion): Mass<S> {
+  return fromSI(sys, reducedMassKg(checkedIon(ionValue).nuclearMassKg), M) as Mass<S>;
+}
+
+/**
+ * Bohr (Rydberg) energy of level n with the reduced-mass correction,
+ * E_n = −h c R∞ Z² (μ/m_e) / n² (negative: from the ionisation limit).
+ *
+ * @param sys - `SI` (J) or `CGS` (erg)
+ * @param ionValue - the ion
+ * @param n - principal quantum number (integer ≥ 1)
+ * @throws RangeError when n is not an integer ≥ 1
+ * @example
+ * ```ts
+ * import { SI, bohrLevelEnergy, ions, units } from "starlume";
+ * SI.valueIn(bohrLevelEnergy(SI, ions.H, 1), units.eV); // ≈ −13.598287
+ * ```
+ */
+export function bohrLevelEnergy<S extends SystemName>(sys: UnitSystem<S>, ionValue: Ion, n: number): Energy<S> {
+  const i = checkedIon(ionValue);
+  return fromSI(sys, bohrLevelEnergySI(n, i.z, i.nuclearMassKg), E) as Energy<S>;
+}
+
+/**
+ * Dirac energy of the fine-structure level (n, j), with reduced-mass
+ * scaling: E(n, j) = μc² [f(n, j) − 1] (module header; no Lamb shift).
+ *
+ * @param sys - `SI` (J) or `CGS` (erg)
+ * @param ionValue - the ion
+ * @param n - principal quantum number (integer ≥ 1)
+ * @param j - total angular momentum, a half-integer with ½ ≤ j ≤ n − ½
+ * @throws RangeError for a bad n or j
+ * @example
+ * ```ts
+ * import { SI, diracLevelEnergy, ions } from "starlume";
+ * const e2p32 = diracLevelEnergy(SI, ions.H, 2, 1.5); // 2p3/2 of hydrogen, J
+ * ```
+ */
+export function diracLevelEnergy<S extends SystemName>(
+  sys: UnitSystem<S>,
+  ionValue: Ion,
+  n: number,
+  j: number,
+): Energy<S> {
+  const i = checkedIon(ionValue);
+  return fromSI(sys, diracLevelEnergySI(n, j, i.z, i.nuclearMassKg), E) as Energy<S>;
+}
+
+/**
+ * Statistical-weight centroid of the Dirac levels of shell n,
+ * Ē_n = Σ_j g_j E(n, j) / (2n²), g_j = 2(2j + 1) for j < n − ½ and 2n for
+ * j = n − ½: the "centre of gravity" of the shell, whose differences
+ * approximate the centroids of unresolved hydrogenic multiplets (Hα, …).
+ *
+ * @example
+ * ```ts
+ * import { CGS, diracLevelCentroidEnergy, ions } from "starlume";
+ * const e3 = diracLevelCentroidEnergy(CGS, ions.H, 3); // erg
+ * ```
+ */
+export function diracLevelCentroidEnergy<S extends SystemName>(sys: UnitSystem<S>, ionValue: Ion, n: number): Energy<S> {
+  const i = checkedIon(ionValue);
+  return fromSI(sys, diracLevelCentroidEnergySI(n, i.z, i.nuclearMassKg), E) as Energy<S>;
+}
+
+/** The level model of the line and ionisation functions. */
+export type LevelModel = "bohr" | "dirac-centroid";
+
+/** Options of the level-model–dependent functions. */
+export interface LevelModelOptions {
+  /**
+   * `"bohr"` (default): Rydberg levels with reduced mass; `"dirac-centroid"`:
+   * statistical-weight centroids of the Dirac fine-structure levels
+   * ({@link diracLevelCentroidEnergy}), about 5 × 10⁻⁵ (H) closer to
+   * measured blends.
+   */
+  readonly model?: LevelModel;
+}
+
+/**
+ * Ionisation energy from level n (positive): I_n = h c R∞ Z² (μ/m_e) / n²
+ * in the Bohr model, or −Ē_n (the Dirac shell centroid, which for n = 1 is
+ * the 1s½ level) with `{ model: "dirac-centroid" }`.
+ *
+ * Against NIST's 13.598 434 eV for ¹H 1s (from memory): Bohr 13.598 287 eV
+ * (−1.1 × 10⁻⁵ relative: the omitted α²/4 binding correction), Dirac
+ * 13.598 468 eV (+2.5 × 10⁻⁶: the omitted 1s Lamb shift).
+ *
+ * @param sys - `SI` (J) or `CGS` (erg)
+ * @param ionValue - the ion
+ * @param n - principal quantum number of the level (default 1)
+ * @param options - level model
+ * @example
+ * ```ts
+ * import { SI, ionizationEnergy, ions, units } from "starlume";
+ * SI.valueIn(ionizationEnergy(SI, ions.H), units.eV); // ≈ 13.598287
+ * SI.valueIn(ionizationEnergy(SI, ions.H, 1, { model: "dirac-centroid" }), units.eV); // ≈ 13.598468
+ * ```
+ */
+export function ionizationEnergy<S extends SystemName>(
+  sys: UnitSystem<S>,
+  ionValue: Ion,
+  n = 1,
+  options?: LevelModelOptions,
+): Energy<S> {
+  const i = checkedIon(ionValue);
+  const model = modelOf(options);
+  requireQuantumNumber("n", n);
+  const si = model === "bohr" ? ionizationEnergySI(n, i.z, i.nuclearMassKg) : -diracLevelCentroidEnergySI(n, i.z, i.nuclearMassKg);
+  return fromSI(sys, si, E) as Energy<S>;
+}

@@ -1,0 +1,249 @@
+/**
+ * Photon conversions, typed: energy E (`Energy<S>`: J or erg; eV through
+ * `units.eV`), vacuum wavelength λ, frequency ν (`Frequency`, Hz in both
+ * systems) and vacuum wavenumber σ = 1/λ (`Wavenumber<S>`: m⁻¹ or cm⁻¹):
+ *
+ *   E = hν = hc/λ = hcσ,  ν = c/λ = cσ.
+ *
+ * h and c are exact in the SI since 2019 (CODATA 2018), so the only error is
+ * floating-point rounding: ≤ 2 ulp in SI, plus one correctly rounded
+ * power-of-ten scaling per CGS conversion.
+ *
+ * Wavelengths here are vacuum wavelengths (the relations above hold only in
+ * vacuum): inputs are {@link NotAirWavelength} — a {@link VacuumWavelength}
+ * or an unbranded `Length<S>`, never an {@link AirWavelength} — and outputs
+ * are {@link VacuumWavelength}. Every input must be finite and > 0
+ * (RangeError naming the parameter and the caller's unit).
+ *
+ * @module
+ */
+import { fromSI, positive, toSI } from "../internal/typed";
+import { kinds } from "../quantity/aliases";
+import type { Energy, Frequency, Wavenumber } from "../quantity/aliases";
+import type { SystemName } from "../quantity/quantity";
+import type { UnitSystem } from "../quantity/system";
+import {
+  frequencyFromPhotonEnergySI,
+  frequencyFromWavelengthSI,
+  frequencyFromWavenumberSI,
+  photonEnergyFromFrequencySI,
+  photonEnergyFromWavelengthSI,
+  photonEnergyFromWavenumberSI,
+  wavelengthFromFrequencySI,
+  wavelengthFromPhotonEnergySI,
+  wavelengthFromWavenumberSI,
+  wavenumberFromFrequencySI,
+  wavenumberFromPhotonEnergySI,
+  wavenumberFromWavelengthSI,
+} from "./kernels/photon";
+import type { NotAirWavelength, VacuumWavelength } from "./medium";
+
+const L = kinds.length.dimension;
+const E = kinds.energy.dimension;
+const K = kinds.wavenumber.dimension;
+const F = kinds.frequency.dimension;
+
+/**
+ * Photon energy from vacuum wavelength, E = hc/λ.
+ *
+ * @param sys - `SI` (J) or `CGS` (erg)
+ * @param wavelength - vacuum wavelength (or unbranded length), in `sys`
+ * @throws RangeError unless λ is finite and > 0
+ * @example
+ * ```ts
+ * import { SI, photonEnergyFromWavelength, units } from "starlume";
+ * SI.valueIn(photonEnergyFromWavelength(SI, SI.of(500, units.nm)), units.eV); // ≈ 2.4797
+ * ```
+ */
+export function photonEnergyFromWavelength<S extends SystemName>(
+  sys: UnitSystem<S>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
+): Energy<S> {
+  positive(sys, "wavelength", wavelength, L);
+  return fromSI(sys, photonEnergyFromWavelengthSI(toSI(sys, wavelength, L)), E) as Energy<S>;
+}
+
+/**
+ * Vacuum wavelength of a photon of energy E, λ = hc/E.
+ *
+ * @param sys - `SI` (m) or `CGS` (cm)
+ * @param energy - photon energy, in `sys`
+ * @throws RangeError unless E is finite and > 0
+ * @example
+ * ```ts
+ * import { CGS, photonWavelengthFromEnergy, units } from "starlume";
+ * const lambda = photonWavelengthFromEnergy(CGS, CGS.of(13.6, units.eV));
+ * CGS.valueIn(lambda, units.nm); // ≈ 91.165
+ * ```
+ */
+export function photonWavelengthFromEnergy<S extends SystemName>(
+  sys: UnitSystem<S>,
+  energy: Energy<NoInfer<S>>,
+): VacuumWavelength<S> {
+  positive(sys, "energy", energy, E);
+  return fromSI(sys, wavelengthFromPhotonEnergySI(toSI(sys, energy, E)), L) as VacuumWavelength<S>;
+}
+
+/**
+ * Photon energy from frequency, E = hν.
+ *
+ * @param sys - `SI` (J) or `CGS` (erg)
+ * @param frequency - frequency ν
+ * @throws RangeError unless ν is finite and > 0
+ * @example
+ * ```ts
+ * import { SI, photonEnergyFromFrequency, units } from "starlume";
+ * photonEnergyFromFrequency(SI, SI.of(1, units.GHz)); // 6.62607015e-25 J
+ * ```
+ */
+export function photonEnergyFromFrequency<S extends SystemName>(sys: UnitSystem<S>, frequency: Frequency): Energy<S> {
+  positive(sys, "frequency", frequency, F);
+  return fromSI(sys, photonEnergyFromFrequencySI(frequency), E) as Energy<S>;
+}
+
+/**
+ * Frequency of a photon of energy E, ν = E/h.
+ *
+ * @example
+ * ```ts
+ * import { SI, photonFrequencyFromEnergy, units } from "starlume";
+ * SI.valueIn(photonFrequencyFromEnergy(SI, SI.of(1, units.eV)), units.THz); // ≈ 241.7989
+ * ```
+ */
+export function photonFrequencyFromEnergy<S extends SystemName>(sys: UnitSystem<S>, energy: Energy<NoInfer<S>>): Frequency {
+  positive(sys, "energy", energy, E);
+  return frequencyFromPhotonEnergySI(toSI(sys, energy, E)) as Frequency;
+}
+
+/**
+ * Photon energy from vacuum wavenumber, E = hcσ.
+ *
+ * @example
+ * ```ts
+ * import { CGS, photonEnergyFromWavenumber, units } from "starlume";
+ * CGS.valueIn(photonEnergyFromWavenumber(CGS, CGS.of(8065.543937, units.per_cm)), units.eV); // ≈ 1
+ * ```
+ */
+export function photonEnergyFromWavenumber<S extends SystemName>(
+  sys: UnitSystem<S>,
+  wavenumber: Wavenumber<NoInfer<S>>,
+): Energy<S> {
+  positive(sys, "wavenumber", wavenumber, K);
+  return fromSI(sys, photonEnergyFromWavenumberSI(toSI(sys, wavenumber, K)), E) as Energy<S>;
+}
+
+/**
+ * Vacuum wavenumber of a photon of energy E, σ = E/(hc).
+ *
+ * @example
+ * ```ts
+ * import { CGS, photonWavenumberFromEnergy, units } from "starlume";
+ * CGS.valueIn(photonWavenumberFromEnergy(CGS, CGS.of(1, units.eV)), units.per_cm); // ≈ 8065.544
+ * ```
+ */
+export function photonWavenumberFromEnergy<S extends SystemName>(
+  sys: UnitSystem<S>,
+  energy: Energy<NoInfer<S>>,
+): Wavenumber<S> {
+  positive(sys, "energy", energy, E);
+  return fromSI(sys, wavenumberFromPhotonEnergySI(toSI(sys, energy, E)), K) as Wavenumber<S>;
+}
+
+/**
+ * Frequency of light of a vacuum wavelength, ν = c/λ.
+ *
+ * @example
+ * ```ts
+ * import { SI, frequencyFromVacuumWavelength, units } from "starlume";
+ * SI.valueIn(frequencyFromVacuumWavelength(SI, SI.of(21.106114054, units.cm)), units.MHz); // ≈ 1420.4058
+ * ```
+ */
+export function frequencyFromVacuumWavelength<S extends SystemName>(
+  sys: UnitSystem<S>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
+): Frequency {
+  positive(sys, "wavelength", wavelength, L);
+  return frequencyFromWavelengthSI(toSI(sys, wavelength, L)) as Frequency;
+}
+
+/**
+ * Vacuum wavelength of light of frequency ν, λ = c/ν.
+ *
+ * @example
+ * ```ts
+ * import { SI, units, vacuumWavelengthFromFrequency } from "starlume";
+ * SI.valueIn(vacuumWavelengthFromFrequency(SI, SI.of(1420.405751768, units.MHz)), units.cm); // ≈ 21.106
+ * ```
+ */
+export function vacuumWavelengthFromFrequency<S extends SystemName>(
+  sys: UnitSystem<S>,
+  frequency: Frequency,
+): VacuumWavelength<S> {
+  positive(sys, "frequency", frequency, F);
+  return fromSI(sys, wavelengthFromFrequencySI(frequency), L) as VacuumWavelength<S>;
+}
+
+/**
+ * Vacuum wavenumber of a vacuum wavelength, σ = 1/λ.
+ *
+ * @example
+ * ```ts
+ * import { CGS, units, wavenumberFromVacuumWavelength } from "starlume";
+ * CGS.valueIn(wavenumberFromVacuumWavelength(CGS, CGS.of(10, units.um)), units.per_cm); // ≈ 1000
+ * ```
+ */
+export function wavenumberFromVacuumWavelength<S extends SystemName>(
+  sys: UnitSystem<S>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
+): Wavenumber<S> {
+  positive(sys, "wavelength", wavelength, L);
+  return fromSI(sys, wavenumberFromWavelengthSI(toSI(sys, wavelength, L)), K) as Wavenumber<S>;
+}
+
+/**
+ * Vacuum wavelength of a vacuum wavenumber, λ = 1/σ.
+ *
+ * @example
+ * ```ts
+ * import { CGS, units, vacuumWavelengthFromWavenumber } from "starlume";
+ * CGS.valueIn(vacuumWavelengthFromWavenumber(CGS, CGS.of(15233, units.per_cm)), units.nm); // ≈ 656.47
+ * ```
+ */
+export function vacuumWavelengthFromWavenumber<S extends SystemName>(
+  sys: UnitSystem<S>,
+  wavenumber: Wavenumber<NoInfer<S>>,
+): VacuumWavelength<S> {
+  positive(sys, "wavenumber", wavenumber, K);
+  return fromSI(sys, wavelengthFromWavenumberSI(toSI(sys, wavenumber, K)), L) as VacuumWavelength<S>;
+}
+
+/**
+ * Frequency of a vacuum wavenumber, ν = cσ.
+ *
+ * @example
+ * ```ts
+ * import { CGS, frequencyFromWavenumber, units } from "starlume";
+ * CGS.valueIn(frequencyFromWavenumber(CGS, CGS.of(1, units.per_cm)), units.GHz); // 29.9792458
+ * ```
+ */
+export function frequencyFromWavenumber<S extends SystemName>(
+  sys: UnitSystem<S>,
+  wavenumber: Wavenumber<NoInfer<S>>,
+): Frequency {
+  positive(sys, "wavenumber", wavenumber, K);
+  return frequencyFromWavenumberSI(toSI(sys, wavenumber, K)) as Frequency;
+}
+
+/**
+ * Vacuum wavenumber of a frequency, σ = ν/c.
+ *
+ * @example
+ * ```ts
+ * import { CGS, units, wavenumberFromFrequency } from "starlume";
+ * CGS.valueIn(wavenumberFromFrequency(CGS, CGS.of(29.9792458, units.GHz)), units.per_cm); // 1
+ * ```
+ */
+export function wavenumberFromFrequency<S extends SystemName>(sys: UnitSystem<S>, frequency: Frequency): Wavenumber<S> {
+  positive(sys, "frequency", frequency, F);
+  return fromSI(sys, wavenumberFromFrequencySI(frequency), K) as Wavenumber<S>;
+}
