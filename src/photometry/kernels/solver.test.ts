@@ -453,3 +453,93 @@ describe("batch solver", () => {
     expect(() => solver.solve(input, { reason: new Uint8Array(2) })).toThrow(/length 3/);
   });
 });
+
+describe("batch solver: specialised {parallax, flux, temperature} loop vs the general loop", () => {
+  const all = () => {
+    const n = 2000;
+    const c = () => new Float64Array(n);
+    return {
+      n,
+      out: {
+        temperatureK: c(), sigmaTemperatureK: c(), luminosityW: c(), sigmaLuminosityW: c(), radiusM: c(), sigmaRadiusM: c(),
+        distanceM: c(), sigmaDistanceM: c(), bolometricFluxWm2: c(), sigmaBolometricFluxWm2: c(),
+        angularDiameterRad: c(), sigmaAngularDiameterRad: c(), reason: new Uint8Array(n),
+      },
+    };
+  };
+
+  it("is chosen for the three kinds in any order, and only for them", () => {
+    expect(createStarBatchSolverSI(["temperatureK", "parallaxRad", "bolometricFluxWm2"]).specialised).toBe(true);
+    expect(createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialise: false }).specialised).toBe(false);
+    expect(createStarBatchSolverSI(["distanceM", "bolometricFluxWm2", "temperatureK"]).specialised).toBe(false);
+  });
+
+  it("gives the general loop's values (≤ 3e-15) and identical reason codes, bad rows included, in any column order", () => {
+    const rand = mulberry32(2024);
+    const { n, out: a } = all();
+    const { out: b } = all();
+    const p = new Float64Array(n), sp = new Float64Array(n), f = new Float64Array(n), sf = new Float64Array(n), t = new Float64Array(n), st = new Float64Array(n);
+    const bad = [NaN, Infinity, -Infinity, 0, -1, -0, 1e-320, 1e300, 1e-300];
+    for (let i = 0; i < n; i++) {
+      p[i] = 10 ** (-2 + 5 * rand()) * MAS;
+      sp[i] = p[i]! * 0.3 * rand();
+      f[i] = 10 ** (-16 + 10 * rand());
+      sf[i] = f[i]! * 0.3 * rand();
+      t[i] = 10 ** (3 + 2 * rand());
+      st[i] = t[i]! * 0.3 * rand();
+      if (i % 7 === 0) {
+        // one input set to an invalid or extreme value
+        const cols = [p, sp, f, sf, t, st];
+        cols[Math.floor(rand() * 6)]![i] = bad[Math.floor(rand() * bad.length)]!;
+      }
+      if (i % 11 === 0) sp[i] = 0; // zero uncertainty is allowed in a batch
+    }
+    // specialised, column order (T, p, f); general, order (p, f, T)
+    const fast = createStarBatchSolverSI(["temperatureK", "parallaxRad", "bolometricFluxWm2"]);
+    const general = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialise: false });
+    const nf = fast.solve({ values: [t, p, f], sigmas: [st, sp, sf] }, a);
+    const ng = general.solve({ values: [p, f, t], sigmas: [sp, sf, st] }, b);
+    expect(nf).toBe(ng);
+    expect(nf).toBeGreaterThan(50); // the bad rows really are exercised
+    expect(Array.from(a.reason)).toEqual(Array.from(b.reason));
+    const codes = new Set(a.reason);
+    for (const c of [0, 1, 2, 3]) expect(codes.has(c)).toBe(true);
+    const keys = Object.keys(a).filter((k) => k !== "reason") as (keyof typeof a & `${string}${"K" | "W" | "M" | "Wm2" | "Rad"}`)[];
+    for (let i = 0; i < n; i++) {
+      for (const k of keys) {
+        const x = (a[k] as Float64Array)[i]!, y = (b[k] as Float64Array)[i]!;
+        if (a.reason[i] !== 0) {
+          expect(x).toBeNaN();
+          expect(y).toBeNaN();
+        } else if (y === 0) {
+          // σ of a zero-uncertainty input; or the general loop's r² underflowed (relative σ < 1.5e-154)
+          // where the specialised one multiplies by r directly: then x/value is below that too
+          const valueKey = k.replace(/^sigma(.)/, (_m, c: string) => c.toLowerCase()) as typeof k;
+          expect(x / (a[valueKey] as Float64Array)[i]!).toBeLessThan(1.5e-154);
+        } else {
+          // general: products of scaled powers (≤ ~8 roundings); specialised: direct formulas (≤ ~6):
+          // together ≲ 14 ε ≈ 3e-15
+          expect(rel(x, y)).toBeLessThan(3e-15);
+        }
+      }
+    }
+  });
+
+  it("writes only the requested columns and flags a row only for a requested output out of range", () => {
+    const fast = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"]);
+    const general = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialise: false });
+    const one = (x: number) => Float64Array.of(x);
+    // L = 4π f d² overflows (f = 1e300 W m^-2 at d = 1e10 m) but θ = 2√(f/σ)/T² does not
+    const input = { values: [one(AU / 1e10), one(1e300), one(1e5)], sigmas: [one(0), one(0), one(0)] } as const;
+    for (const s of [fast, general]) {
+      const onlyTheta = { angularDiameterRad: one(-1), reason: new Uint8Array(1) };
+      expect(s.solve(input, onlyTheta)).toBe(0);
+      expect(rel(onlyTheta.angularDiameterRad[0]!, (2 * Math.sqrt(1e300 / SIGMA)) / 1e10)).toBeLessThan(1e-15);
+      const withL = { luminosityW: one(-1), angularDiameterRad: one(-1), reason: new Uint8Array(1) };
+      expect(s.solve(input, withL)).toBe(1);
+      expect(withL.reason[0]).toBe(PhotometryBatchReason.RESULT_OUT_OF_RANGE);
+      expect(withL.luminosityW[0]).toBeNaN();
+      expect(withL.angularDiameterRad[0]).toBeNaN();
+    }
+  });
+});

@@ -1,0 +1,81 @@
+/**
+ * Photometry, typed: the inverse-square law, parallax, angular size and
+ * surface brightness, magnitudes (Pogson, distance modulus, IAU 2015
+ * bolometric scale, AB), CCM89 extinction, and the stellar-parameter solver.
+ *
+ * @module
+ */
+export { distanceFromLuminosityFlux, fluxFromLuminosity, luminosityFromFlux } from "./inverse-square";
+export {
+  distanceFromParallax,
+  distanceFromParallaxExact,
+  parallaxDistance,
+  parallaxFromDistance,
+  parallaxFromDistanceExact,
+  PARALLAX_BIAS_THRESHOLD,
+  type ParallaxDistance,
+  type ParallaxDistanceOptions,
+} from "./parallax";
+export {
+  angularDiameter,
+  distanceFromAngularDiameter,
+  radiusFromAngularDiameter,
+  solidAngleOfDisk,
+  surfaceBrightness,
+  type AngularGeometry,
+  type SolidAngleGeometry,
+} from "./angular-size";
+export {
+  abMagnitude,
+  absoluteBolometricMagnitude,
+  absoluteMagnitude,
+  apparentBolometricMagnitude,
+  apparentMagnitude,
+  bolometricFluxFromApparentMagnitude,
+  distanceFromDistanceModulus,
+  distanceModulus,
+  fLambdaFromFNu,
+  fluxRatioFromMagnitudeDifference,
+  fNuFromAbMagnitude,
+  fNuFromFLambda,
+  luminosityFromAbsoluteBolometricMagnitude,
+  magnitudeDifference,
+  magnitudeDifferenceFromFluxRatio,
+} from "./magnitudes";
+export {
+  aVFromColorExcess,
+  CCM89_RV_RANGE,
+  ccm89Extinction,
+  ccm89Ratio,
+  colorExcessFromAV,
+  dereddenFlux,
+  dereddenMagnitude,
+  reddenFlux,
+  reddenMagnitude,
+  RV_DIFFUSE,
+  type FluxLike,
+} from "./extinction";
+export {
+  createStarBatchSolver,
+  solveStar,
+  STAR_QUANTITY_NAMES,
+  StarBatchReason,
+  type Estimate,
+  type EstimateJSON,
+  type Measurement,
+  type PureArray,
+  type StarBatchColumn,
+  type StarBatchColumnArray,
+  type StarBatchColumns,
+  type StarBatchInput,
+  type StarBatchOutput,
+  type StarBatchResult,
+  type StarBatchSolver,
+  type StarConsistencyReport,
+  type StarCovariance,
+  type StarObservationName,
+  type StarObservations,
+  type StarQuantityName,
+  type StarSolution,
+  type StarSolutionJSON,
+} from "./solver";

@@ -1,0 +1,635 @@
+/**
+ * The stellar-parameter solver, typed: from any sufficient set of measured
+ * {temperature, luminosity, radius, distance or parallax, bolometric flux or
+ * apparent bolometric magnitude, angular diameter}, each with a standard
+ * uncertainty, derive all the others with first-order uncertainties, their
+ * covariance and (when over-determined) a consistency report.
+ *
+ * The system comes first; luminosity, radius, distance and bolometric flux
+ * are in that system (a CGS radius in an SI solve does not compile),
+ * temperature and angles fit either, and the apparent bolometric magnitude is
+ * a plain number in mag. Results come back typed in the same system.
+ *
+ * Model (see the kernel for the numerics): L = 4πR²σT⁴, f = L/(4πd²),
+ * θ = 2R/d (small angle: the exact 2 asin(R/d) differs by (R/d)²/6 < 1e-15
+ * for any star but the Sun), d = 1 au / p, f = f₀ 10^(−m_bol/2.5) (IAU 2015
+ * B2). Linear in log space, so weighted least squares there is exact to
+ * first order; values are the first-order (log-normal median) estimates.
+ * Three independent inputs determine a star; the triples {L, R, T},
+ * {L, d, f}, {R, d, θ} and {T, f, θ} do not (each satisfies one relation
+ * internally), and the error says what to add.
+ *
+ * Source: Stefan–Boltzmann and inverse-square laws; constants CODATA 2018,
+ * IAU 2015 B2/B3.
+ *
+ * @module
+ */
+import { requireFinite, requirePositive } from "../internal/checks";
+import { arrayFromSIInPlace, arrayToSI, fromSI, toSI } from "../internal/typed";
+import { kinds } from "../quantity/aliases";
+import type {
+  Angle,
+  AngleArray,
+  Flux,
+  FluxArray,
+  Length,
+  LengthArray,
+  Power,
+  PowerArray,
+  Temperature,
+  TemperatureArray,
+} from "../quantity/aliases";
+import type { Dimension } from "../quantity/dimension";
+import type { Pure, SystemName } from "../quantity/quantity";
+import type { UnitSystem } from "../quantity/system";
+import { times10 } from "../quantity/unit";
+import { PhotometryBatchReason } from "./kernels/common";
+import {
+  createStarBatchSolverSI,
+  solveStarSI,
+  starInputSufficiency,
+  type MeasurementSI,
+  type StarBatchOutputSI,
+  type StarInputKind,
+  type StarObservationsSI,
+  type StarQuantity,
+} from "./kernels/solver";
+
+// ---- vocabulary ---------------------------------------------------------------
+
+/** A measured value and its standard uncertainty, both of type `Q`. */
+export interface Measurement<Q> {
+  readonly value: Q;
+  /** Standard uncertainty (> 0 for {@link solveStar}; ≥ 0 in a batch). */
+  readonly sigma: Q;
+}
+
+/**
+ * Measurements for {@link solveStar}: any subset; at least three independent
+ * ones. Lengths, powers and fluxes are in system `S`.
+ */
+export interface StarObservations<S extends SystemName> {
+  /** Effective temperature. */
+  readonly temperature?: Measurement<Temperature>;
+  /** Luminosity (W or erg s⁻¹). */
+  readonly luminosity?: Measurement<Power<S>>;
+  /** Radius. */
+  readonly radius?: Measurement<Length<S>>;
+  /** Distance. */
+  readonly distance?: Measurement<Length<S>>;
+  /** Trigonometric parallax (d = 1 au / p). */
+  readonly parallax?: Measurement<Angle>;
+  /** Bolometric flux (irradiance) at the observer. */
+  readonly bolometricFlux?: Measurement<Flux<S>>;
+  /** Apparent bolometric magnitude on the IAU 2015 B2 scale, mag (a plain number). */
+  readonly apparentBolometricMagnitude?: Measurement<Pure>;
+  /** Angular diameter. */
+  readonly angularDiameter?: Measurement<Angle>;
+}
+
+/** Name of an observation accepted by the solver. */
+export type StarObservationName = keyof StarObservations<SystemName>;
+
+/** The six physical quantities of the solver, in the row/column order of its covariance matrices. */
+export const STAR_QUANTITY_NAMES = ["temperature", "luminosity", "radius", "distance", "bolometricFlux", "angularDiameter"] as const;
+
+/** One of {@link STAR_QUANTITY_NAMES}. */
+export type StarQuantityName = (typeof STAR_QUANTITY_NAMES)[number];
+
+const OBSERVATION_NAMES: readonly StarObservationName[] = [
+  "temperature",
+  "luminosity",
+  "radius",
+  "distance",
+  "parallax",
+  "bolometricFlux",
+  "apparentBolometricMagnitude",
+  "angularDiameter",
+];
+
+const KIND_OF: Readonly<Record<StarObservationName, StarInputKind>> = {
+  temperature: "temperatureK",
+  luminosity: "luminosityW",
+  radius: "radiusM",
+  distance: "distanceM",
+  parallax: "parallaxRad",
+  bolometricFlux: "bolometricFluxWm2",
+  apparentBolometricMagnitude: "apparentBolometricMag",
+  angularDiameter: "angularDiameterRad",
+};
+
+const NAME_OF_KIND = Object.fromEntries(Object.entries(KIND_OF).map(([n, k]) => [k, n])) as Record<StarInputKind, StarObservationName>;
+
+/** What to add when a quantity is undetermined, in the caller's vocabulary. */
+const REQUEST: Readonly<Record<StarQuantity, string>> = {
+  temperatureK: "temperature",
+  luminosityW: "luminosity",
+  radiusM: "radius",
+  distanceM: "distance (or parallax)",
+  bolometricFluxWm2: "bolometricFlux (or apparentBolometricMagnitude)",
+  angularDiameterRad: "angularDiameter",
+};
+
+const DIM: Readonly<Record<StarObservationName, Dimension | undefined>> = {
+  temperature: kinds.temperature.dimension,
+  luminosity: kinds.power.dimension,
+  radius: kinds.length.dimension,
+  distance: kinds.length.dimension,
+  parallax: kinds.angle.dimension,
+  bolometricFlux: kinds.flux.dimension,
+  apparentBolometricMagnitude: undefined,
+  angularDiameter: kinds.angle.dimension,
+};
+
+/** Readable, parseable unit strings of each system's coherent units (for JSON and messages). */
+const UNIT: Readonly<Record<SystemName, Readonly<Record<StarObservationName, string>>>> = {
+  SI: {
+    temperature: "K",
+    luminosity: "W",
+    radius: "m",
+    distance: "m",
+    parallax: "rad",
+    bolometricFlux: "W m^-2",
+    apparentBolometricMagnitude: "mag",
+    angularDiameter: "rad",
+  },
+  CGS: {
+    temperature: "K",
+    luminosity: "erg s^-1",
+    radius: "cm",
+    distance: "cm",
+    parallax: "rad",
+    bolometricFlux: "erg s^-1 cm^-2",
+    apparentBolometricMagnitude: "mag",
+    angularDiameter: "rad",
+  },
+};
+
+/** Throw a RangeError in the caller's vocabulary unless the observation names determine a star. */
+function requireSufficient(names: readonly StarObservationName[]): void {
+  const { rank, undetermined } = starInputSufficiency(names.map((n) => KIND_OF[n]));
+  if (rank === 3) return;
+  const free = undetermined.map((q) => NAME_OF_KIND[q]);
+  const helpful = undetermined.map((q) => REQUEST[q]);
+  const given = names.length === 0 ? "no observations" : names.join(", ");
+  const deficit = 3 - rank;
+  const need =
+    deficit === 1
+      ? `add ${helpful.length === 1 ? helpful[0]! : `one of: ${helpful.join("; ")}`}`
+      : `add ${String(deficit)} more independent observations among: ${helpful.join("; ")}`;
+  throw new RangeError(`under-determined star: cannot determine ${free.join(", ")} from ${given}; ${need}`);
+}
+
+// ---- scalar solve ---------------------------------------------------------------
+
+/** A derived quantity in the caller's system. */
+export interface Estimate<Q> {
+  readonly value: Q;
+  /** First-order standard uncertainty. */
+  readonly sigma: Q;
+  /** σ / value (for the magnitudes: σ in mag). */
+  readonly relativeSigma: number;
+  /** True when this quantity (or its alias: parallax for distance, m_bol for flux, L for M_bol) was measured. */
+  readonly measured: boolean;
+}
+
+/** Covariance of the six quantities, in the caller's system. */
+export interface StarCovariance {
+  /** Row/column order. */
+  readonly order: readonly StarQuantityName[];
+  /** Unit of each row's quantity in the caller's system (entry (i, j) is in units[i] × units[j]). */
+  readonly units: readonly string[];
+  /** 6 × 6 covariance of the quantities. */
+  readonly matrix: number[][];
+  /** 6 × 6 covariance of their natural logarithms (the same in every system). */
+  readonly lnMatrix: number[][];
+}
+
+/** Consistency of an over-determined solve (all zeros and p = 1 when exactly determined). */
+export interface StarConsistencyReport {
+  /** Weighted sum of squared log-residuals. */
+  readonly chi2: number;
+  /** Degrees of freedom: number of observations − 3. */
+  readonly dof: number;
+  /** P(χ²_dof ≥ chi2). */
+  readonly pValue: number;
+  /** ln pValue, finite even when pValue underflows. */
+  readonly lnPValue: number;
+  /** Two-sided Gaussian-equivalent disagreement, in σ. */
+  readonly sigma: number;
+  /** Normalised residual (observed − fitted)/σ of each observation, in log space. */
+  readonly pulls: Readonly<Partial<Record<StarObservationName, number>>>;
+}
+
+/** One estimate in plain JSON: numbers with their unit string. */
+export interface EstimateJSON {
+  readonly value: number;
+  readonly sigma: number;
+  /** Unit of `value` and `sigma`, in the parser's grammar (`"erg s^-1"`, `"rad"`, `"mag"`). */
+  readonly unit: string;
+  readonly relativeSigma: number;
+  readonly measured: boolean;
+}
+
+/** The plain-JSON form of a {@link StarSolution} (what `JSON.stringify` writes). */
+export interface StarSolutionJSON {
+  readonly system: SystemName;
+  readonly temperature: EstimateJSON;
+  readonly luminosity: EstimateJSON;
+  readonly radius: EstimateJSON;
+  readonly distance: EstimateJSON;
+  readonly bolometricFlux: EstimateJSON;
+  readonly angularDiameter: EstimateJSON;
+  readonly parallax: EstimateJSON;
+  readonly apparentBolometricMagnitude: EstimateJSON;
+  readonly absoluteBolometricMagnitude: EstimateJSON;
+  readonly covariance: StarCovariance;
+  readonly consistency: StarConsistencyReport;
+}
+
+/** Result of {@link solveStar}, typed in the caller's system. */
+export interface StarSolution<S extends SystemName> {
+  readonly system: S;
+  readonly temperature: Estimate<Temperature>;
+  readonly luminosity: Estimate<Power<S>>;
+  readonly radius: Estimate<Length<S>>;
+  readonly distance: Estimate<Length<S>>;
+  readonly bolometricFlux: Estimate<Flux<S>>;
+  readonly angularDiameter: Estimate<Angle>;
+  /** Parallax 1 au / d. */
+  readonly parallax: Estimate<Angle>;
+  /** Apparent bolometric magnitude (IAU 2015 B2), mag. */
+  readonly apparentBolometricMagnitude: Estimate<number>;
+  /** Absolute bolometric magnitude (IAU 2015 B2), mag. */
+  readonly absoluteBolometricMagnitude: Estimate<number>;
+  readonly covariance: StarCovariance;
+  readonly consistency: StarConsistencyReport;
+  /** Plain JSON (numbers with unit strings) for tools; `JSON.stringify(solution)` writes this. */
+  toJSON(): StarSolutionJSON;
+}
+
+const plus0 = (x: number): number => x + 0; // JSON cannot keep −0
+
+function validate(sys: UnitSystem<SystemName>, name: StarObservationName, m: Measurement<number>): MeasurementSI {
+  if (typeof m !== "object" || m === null) throw new RangeError(`${name} must be { value, sigma }; got ${String(m)}`);
+  const d = DIM[name];
+  const unit = UNIT[sys.name][name];
+  if (d === undefined) requireFinite(`${name}.value`, m.value, unit);
+  else requirePositive(`${name}.value`, m.value, unit);
+  requirePositive(`${name}.sigma`, m.sigma, unit);
+  if (d !== undefined && !(m.sigma / m.value < Infinity)) {
+    throw new RangeError(`${name}.sigma / ${name}.value is not a finite number (got ${String(m.sigma)} / ${String(m.value)} ${unit})`);
+  }
+  if (d === undefined) return { value: m.value, sigma: m.sigma };
+  const value = toSI(sys, m.value, d);
+  const sigma = toSI(sys, m.sigma, d);
+  if (!(value > 0) || value === Infinity || !(sigma > 0) || sigma === Infinity) {
+    throw new RangeError(`${name} is out of the double-precision range once converted to SI; got value ${String(m.value)} ${unit}, sigma ${String(m.sigma)} ${unit}`);
+  }
+  return { value, sigma };
+}
+
+/**
+ * Solve for every stellar parameter from a sufficient set of typed
+ * measurements, with first-order uncertainties, their covariance and a
+ * consistency report.
+ *
+ * @param sys - `SI` or `CGS`: the system of the inputs and of the results
+ * @param observations - measurements by name, each `{ value, sigma }` with σ > 0
+ * @returns every quantity (value, σ, relative σ, measured flag), parallax and
+ *   bolometric magnitudes, the 6 × 6 covariance, the χ² report, and `toJSON()`
+ * @throws RangeError naming the observation (`bolometricFlux.sigma must be a
+ *   finite number > 0 erg s^-1 cm^-2 …`, in the unit of `sys`); or, when the
+ *   observations do not determine a star, naming what cannot be determined
+ *   and which observations to add
+ * @example
+ * ```ts
+ * import { SI, solveStar, units } from "starlume";
+ * const star = solveStar(SI, {
+ *   parallax: { value: SI.of(100, units.mas), sigma: SI.of(0.1, units.mas) },
+ *   bolometricFlux: { value: SI.of(3.2e-9, units.W_per_m2), sigma: SI.of(0.05e-9, units.W_per_m2) },
+ *   temperature: { value: SI.of(5800, units.K), sigma: SI.of(50, units.K) },
+ * });
+ * SI.valueIn(star.radius.value, units.Rsol); // ≈ 3.13 (L ≈ 10 L☉)
+ * JSON.stringify(star); // plain numbers with unit strings
+ * ```
+ */
+export function solveStar<S extends SystemName>(sys: UnitSystem<S>, observations: StarObservations<NoInfer<S>>): StarSolution<S> {
+  if (typeof observations !== "object" || observations === null) {
+    throw new RangeError(`observations must be an object of measurements; got ${String(observations)}`);
+  }
+  for (const key of Object.keys(observations)) {
+    if (!OBSERVATION_NAMES.includes(key as StarObservationName)) {
+      throw new RangeError(`unknown observation ${JSON.stringify(key)}; expected one of ${OBSERVATION_NAMES.join(", ")}`);
+    }
+  }
+  const names: StarObservationName[] = [];
+  const obsSI: Partial<Record<StarInputKind, MeasurementSI>> = {};
+  for (const name of OBSERVATION_NAMES) {
+    const m = (observations as Partial<Record<StarObservationName, Measurement<number>>>)[name];
+    if (m === undefined) continue;
+    obsSI[KIND_OF[name]] = validate(sys, name, m);
+    names.push(name);
+  }
+  requireSufficient(names);
+  const r = solveStarSI(obsSI as StarObservationsSI);
+
+  const units = UNIT[sys.name];
+  const estimate = (name: StarQuantityName | "parallax", q: { value: number; sigma: number; relativeSigma: number; measured: boolean }) => {
+    const d = DIM[name]!;
+    const value = fromSI(sys, q.value, d);
+    const sigma = fromSI(sys, q.sigma, d);
+    if (!(value > 0) || value === Infinity || !(sigma >= 0) || sigma === Infinity) {
+      throw new RangeError(`derived ${name} is not representable as a finite number > 0 ${units[name]}; inputs are out of the double-precision range`);
+    }
+    return { value, sigma, relativeSigma: q.relativeSigma, measured: q.measured };
+  };
+  const exps = STAR_QUANTITY_NAMES.map((n) => sys.exp10(DIM[n]!));
+  const matrix = r.covariance.map((row, i) => row.map((c, j) => plus0(fromSIBoth(c, exps[i]!, exps[j]!))));
+  for (const row of matrix) {
+    for (const c of row) {
+      if (!Number.isFinite(c)) throw new RangeError(`the covariance is not representable in ${sys.name}; inputs are out of the double-precision range`);
+    }
+  }
+  const pulls: Partial<Record<StarObservationName, number>> = {};
+  for (const [kind, v] of Object.entries(r.consistency.pulls) as [StarInputKind, number][]) pulls[NAME_OF_KIND[kind]] = plus0(v);
+
+  const base = {
+    system: sys.name,
+    temperature: estimate("temperature", r.temperatureK),
+    luminosity: estimate("luminosity", r.luminosityW),
+    radius: estimate("radius", r.radiusM),
+    distance: estimate("distance", r.distanceM),
+    bolometricFlux: estimate("bolometricFlux", r.bolometricFluxWm2),
+    angularDiameter: estimate("angularDiameter", r.angularDiameterRad),
+    parallax: estimate("parallax", r.parallaxRad),
+    apparentBolometricMagnitude: { ...r.apparentBolometricMag },
+    absoluteBolometricMagnitude: { ...r.absoluteBolometricMag },
+    covariance: {
+      order: [...STAR_QUANTITY_NAMES],
+      units: STAR_QUANTITY_NAMES.map((n) => units[n]),
+      matrix,
+      lnMatrix: r.lnCovariance.map((row) => row.map(plus0)),
+    },
+    consistency: {
+      chi2: plus0(r.consistency.chi2),
+      dof: r.consistency.dof,
+      pValue: r.consistency.pValue,
+      lnPValue: plus0(r.consistency.lnPValue),
+      sigma: plus0(r.consistency.sigma),
+      pulls,
+    },
+  };
+  const toJSON = (): StarSolutionJSON => {
+    const e = (name: StarObservationName | "absoluteBolometricMagnitude", q: { value: number; sigma: number; relativeSigma: number; measured: boolean }): EstimateJSON => ({
+      value: plus0(q.value),
+      sigma: plus0(q.sigma),
+      unit: name === "absoluteBolometricMagnitude" ? "mag" : units[name],
+      relativeSigma: plus0(q.relativeSigma),
+      measured: q.measured,
+    });
+    return {
+      system: base.system,
+      temperature: e("temperature", base.temperature),
+      luminosity: e("luminosity", base.luminosity),
+      radius: e("radius", base.radius),
+      distance: e("distance", base.distance),
+      bolometricFlux: e("bolometricFlux", base.bolometricFlux),
+      angularDiameter: e("angularDiameter", base.angularDiameter),
+      parallax: e("parallax", base.parallax),
+      apparentBolometricMagnitude: e("apparentBolometricMagnitude", base.apparentBolometricMagnitude),
+      absoluteBolometricMagnitude: e("absoluteBolometricMagnitude", base.absoluteBolometricMagnitude),
+      covariance: {
+        order: [...base.covariance.order],
+        units: [...base.covariance.units],
+        matrix: base.covariance.matrix.map((row) => [...row]),
+        lnMatrix: base.covariance.lnMatrix.map((row) => [...row]),
+      },
+      consistency: { ...base.consistency, pulls: { ...base.consistency.pulls } },
+    };
+  };
+  return { ...base, toJSON } as unknown as StarSolution<S>;
+}
+
+/** c × 10^(−a) × 10^(−b): a covariance entry from SI into a system whose row and column exponents are a and b. */
+function fromSIBoth(c: number, a: number, b: number): number {
+  return times10(times10(c, -a), -b);
+}
+
+// ---- batch --------------------------------------------------------------------
+
+/**
+ * A `Float64Array` of pure numbers (magnitudes): a plain `Float64Array` or a
+ * `DimensionlessArray`; a typed array of angles, lengths, … is rejected.
+ */
+export type PureArray = Float64Array & { readonly [K in Exclude<keyof Pure, keyof number>]?: Pure[K] };
+
+/** The typed-array type of a batch column for an observation name. */
+export type StarBatchColumnArray<N extends StarObservationName, S extends SystemName> = N extends "temperature"
+  ? TemperatureArray
+  : N extends "luminosity"
+    ? PowerArray<S>
+    : N extends "radius" | "distance"
+      ? LengthArray<S>
+      : N extends "parallax" | "angularDiameter"
+        ? AngleArray
+        : N extends "bolometricFlux"
+          ? FluxArray<S>
+          : N extends "apparentBolometricMagnitude"
+            ? PureArray
+            : never;
+
+/** One input column of a batch: values and standard uncertainties (≥ 0), same length. */
+export interface StarBatchColumn<A> {
+  readonly values: A;
+  readonly sigmas: A;
+}
+
+/** Batch input: one column per observation name the solver was built for. */
+export type StarBatchInput<S extends SystemName, N extends StarObservationName> = {
+  readonly [K in N]: StarBatchColumn<StarBatchColumnArray<K, S>>;
+};
+
+/** Output columns of a batch solve, in system `S` (value and σ of each quantity) plus per-row reason codes. */
+export interface StarBatchColumns<S extends SystemName> {
+  readonly temperature: TemperatureArray;
+  readonly sigmaTemperature: TemperatureArray;
+  readonly luminosity: PowerArray<S>;
+  readonly sigmaLuminosity: PowerArray<S>;
+  readonly radius: LengthArray<S>;
+  readonly sigmaRadius: LengthArray<S>;
+  readonly distance: LengthArray<S>;
+  readonly sigmaDistance: LengthArray<S>;
+  readonly bolometricFlux: FluxArray<S>;
+  readonly sigmaBolometricFlux: FluxArray<S>;
+  readonly angularDiameter: AngleArray;
+  readonly sigmaAngularDiameter: AngleArray;
+  /** One {@link StarBatchReason} code per row (0 = OK). */
+  readonly reason: Uint8Array;
+}
+
+/** Caller-supplied output columns: any subset of {@link StarBatchColumns}; only those are written. */
+export type StarBatchOutput<S extends SystemName> = Partial<StarBatchColumns<S>>;
+
+/** Result of a batch solve. */
+export interface StarBatchResult {
+  /** One {@link StarBatchReason} code per row (0 = OK); invalid rows are NaN in every output column. */
+  readonly reason: Uint8Array;
+  /** Number of rows whose reason is not OK. Nothing is dropped: every input row has an output row. */
+  readonly invalid: number;
+}
+
+/**
+ * Per-row reason codes of batch solves: `OK` 0, `NON_FINITE` 1 (a value or σ
+ * is NaN or ±∞), `NON_POSITIVE` 2 (a value that must be > 0 is not),
+ * `NEGATIVE_UNCERTAINTY` 3, `RESULT_OUT_OF_RANGE` 4 (valid input, but a
+ * result is not a finite positive double in the caller's system).
+ */
+export const StarBatchReason = PhotometryBatchReason;
+
+/** A typed batch solver for a fixed set of three observation names. */
+export interface StarBatchSolver<S extends SystemName, N extends StarObservationName> {
+  readonly system: S;
+  /** The observation names, in the order given. */
+  readonly inputs: readonly N[];
+  /**
+   * Solve every row into newly allocated columns (all six quantities with σ).
+   * Never throws mid-array.
+   * @throws RangeError only for a missing input column or mismatched lengths, before any row is written
+   */
+  solve(input: StarBatchInput<S, N>): StarBatchColumns<S> & StarBatchResult;
+  /**
+   * Solve every row into the caller's output columns (only those given are
+   * written; `reason` is allocated when not given). Never throws mid-array.
+   * @throws RangeError only for a missing input column or mismatched lengths, before any row is written
+   */
+  solve(input: StarBatchInput<S, N>, output: StarBatchOutput<S>): StarBatchResult;
+}
+
+const OUTPUT_KEYS: readonly (readonly [keyof StarBatchColumns<SystemName>, keyof StarBatchOutputSI, StarQuantityName])[] = [
+  ["temperature", "temperatureK", "temperature"],
+  ["sigmaTemperature", "sigmaTemperatureK", "temperature"],
+  ["luminosity", "luminosityW", "luminosity"],
+  ["sigmaLuminosity", "sigmaLuminosityW", "luminosity"],
+  ["radius", "radiusM", "radius"],
+  ["sigmaRadius", "sigmaRadiusM", "radius"],
+  ["distance", "distanceM", "distance"],
+  ["sigmaDistance", "sigmaDistanceM", "distance"],
+  ["bolometricFlux", "bolometricFluxWm2", "bolometricFlux"],
+  ["sigmaBolometricFlux", "sigmaBolometricFluxWm2", "bolometricFlux"],
+  ["angularDiameter", "angularDiameterRad", "angularDiameter"],
+  ["sigmaAngularDiameter", "sigmaAngularDiameterRad", "angularDiameter"],
+];
+
+/**
+ * Build a typed batch solver for catalogues in which every star has the
+ * same three independent observations (e.g. parallax, bolometric flux and
+ * temperature). Columns are `Float64Array`s typed as quantity arrays in
+ * `sys` (magnitudes: plain `Float64Array`s). Each output is a product of
+ * powers of the inputs, evaluated without a log/exp round trip (a few ulp);
+ * σ is first order with independent inputs, and σ = 0 inputs are allowed.
+ * Invalid rows are written as NaN with a reason code; nothing is dropped.
+ * In SI the kernel reads and writes the caller's arrays directly; in CGS the
+ * system-dependent inputs are copied to SI and the outputs converted in place.
+ * The common set {parallax, bolometricFlux, temperature} runs a specialised
+ * loop.
+ *
+ * @param sys - `SI` or `CGS`
+ * @param inputs - three distinct observation names that determine a star
+ * @returns the solver
+ * @throws RangeError for unknown or repeated names, or when the three do not
+ *   determine a star (naming what is missing)
+ * @example
+ * ```ts
+ * import { SI, createStarBatchSolver, units } from "starlume";
+ * const solver = createStarBatchSolver(SI, ["parallax", "bolometricFlux", "temperature"]);
+ * const out = solver.solve({
+ *   parallax: { values: SI.arrayOf([100, 5, -1], units.mas), sigmas: SI.arrayOf([0.1, 0.1, 0.1], units.mas) },
+ *   bolometricFlux: { values: SI.arrayOf([3.2e-9, 1e-11, 1e-11], units.W_per_m2), sigmas: SI.arrayOf([5e-11, 1e-13, 1e-13], units.W_per_m2) },
+ *   temperature: { values: SI.arrayOf([5800, 4500, 4500], units.K), sigmas: SI.arrayOf([50, 80, 80], units.K) },
+ * });
+ * out.invalid; // 1 (row 2: negative parallax; out.reason[2] === 2, its outputs NaN)
+ * SI.arrayIn(out.radius, units.Rsol); // [≈ 3.13, ≈ 5.82, NaN]
+ * ```
+ */
+export function createStarBatchSolver<S extends SystemName, const N extends StarObservationName>(
+  sys: UnitSystem<S>,
+  inputs: readonly [N, N, N],
+): StarBatchSolver<S, N> {
+  if (!Array.isArray(inputs) || inputs.length !== 3) {
+    throw new RangeError(`inputs must list exactly 3 observation names; got ${String(inputs)}`);
+  }
+  for (const n of inputs) {
+    if (!OBSERVATION_NAMES.includes(n)) {
+      throw new RangeError(`unknown observation ${JSON.stringify(n)}; expected one of ${OBSERVATION_NAMES.join(", ")}`);
+    }
+  }
+  if (new Set(inputs).size !== 3) throw new RangeError(`inputs must be 3 distinct observation names; got ${inputs.join(", ")}`);
+  requireSufficient(inputs);
+  const names = [inputs[0], inputs[1], inputs[2]] as const;
+  const kernelSolver = createStarBatchSolverSI([KIND_OF[names[0]], KIND_OF[names[1]], KIND_OF[names[2]]]);
+  const inDims = names.map((n) => DIM[n]);
+  const convertOutputs = sys.name !== "SI";
+
+  function solve(input: StarBatchInput<S, N>): StarBatchColumns<S> & StarBatchResult;
+  function solve(input: StarBatchInput<S, N>, output: StarBatchOutput<S>): StarBatchResult;
+  function solve(input: StarBatchInput<S, N>, output?: StarBatchOutput<S>): StarBatchResult {
+    const cols = names.map((n) => {
+      const c = (input as Partial<Record<StarObservationName, StarBatchColumn<Float64Array>>>)[n];
+      if (c === undefined || !(c.values instanceof Float64Array) || !(c.sigmas instanceof Float64Array)) {
+        throw new RangeError(`input.${n} must be { values: Float64Array, sigmas: Float64Array }`);
+      }
+      return c;
+    });
+    const n = cols[0]!.values.length;
+    const values = cols.map((c, k) => (inDims[k] === undefined ? c.values : arrayToSI(sys, c.values, inDims[k]!)));
+    const sigmas = cols.map((c, k) => (inDims[k] === undefined ? c.sigmas : arrayToSI(sys, c.sigmas, inDims[k]!)));
+    const out: Partial<Record<keyof StarBatchColumns<SystemName>, Float64Array | Uint8Array>> =
+      output === undefined ? Object.fromEntries(OUTPUT_KEYS.map(([k]) => [k, new Float64Array(n)])) : { ...output };
+    const reason = out.reason instanceof Uint8Array ? out.reason : new Uint8Array(n);
+    const outSI: Record<string, Float64Array | Uint8Array> = { reason };
+    for (const [k, kk] of OUTPUT_KEYS) {
+      const a = out[k];
+      if (a !== undefined) outSI[kk] = a;
+    }
+    let invalid = kernelSolver.solve(
+      { values: [values[0]!, values[1]!, values[2]!], sigmas: [sigmas[0]!, sigmas[1]!, sigmas[2]!] },
+      outSI as unknown as StarBatchOutputSI,
+    );
+    if (convertOutputs) invalid = toSystemInPlace(sys, out, reason, invalid);
+    return output === undefined ? ({ ...out, reason, invalid } as StarBatchColumns<S> & StarBatchResult) : { reason, invalid };
+  }
+
+  return { system: sys.name, inputs: names, solve };
+}
+
+/**
+ * Convert SI output columns to `sys` in place; a valid row whose converted
+ * value overflows becomes RESULT_OUT_OF_RANGE with NaN in every column.
+ * Returns the updated count of invalid rows.
+ */
+function toSystemInPlace(
+  sys: UnitSystem<SystemName>,
+  out: Partial<Record<keyof StarBatchColumns<SystemName>, Float64Array | Uint8Array>>,
+  reason: Uint8Array,
+  invalid: number,
+): number {
+  const present: Float64Array[] = [];
+  for (const [k, , q] of OUTPUT_KEYS) {
+    const a = out[k] as Float64Array | undefined;
+    if (a === undefined) continue;
+    present.push(a);
+    arrayFromSIInPlace(sys, a, DIM[q]!);
+    for (let i = 0; i < a.length; i++) {
+      const v = a[i]!;
+      if (reason[i] === PhotometryBatchReason.OK && !(v >= 0 && v !== Infinity)) {
+        reason[i] = PhotometryBatchReason.RESULT_OUT_OF_RANGE;
+        invalid++;
+      }
+    }
+  }
+  for (let i = 0; i < reason.length; i++) {
+    if (reason[i] === PhotometryBatchReason.RESULT_OUT_OF_RANGE) for (const a of present) a[i] = NaN;
+  }
+  return invalid;
+}
