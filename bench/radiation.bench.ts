@@ -1,13 +1,20 @@
 /**
- * Benchmarks of the radiation kernels. Each case returns a checksum so the
- * work cannot be optimised away; `baseline` is the bare formula written by
- * hand, `subject` the kernel doing the same work, so subject/baseline is the
- * cost multiple of the kernel's robustness (double-double exponent, Wien-tail
- * and log-space branches, input checks).
+ * Benchmarks of the radiation kernels and of the typed API over them. Each
+ * case returns a checksum so the work cannot be optimised away; `baseline` is
+ * the bare formula written by hand, `subject` the kernel or the typed
+ * function doing the same work, so subject/baseline is the cost multiple of
+ * the kernel's robustness (double-double exponent, Wien-tail and log-space
+ * branches, input checks) plus, for the typed cases, the wrapper (system
+ * conversion, validation in the caller's unit, overflow check of the
+ * converted result).
  */
 import { C, C2, H } from "../src/constants/values";
 import { planckRadianceWavelengthBatchSI, planckRadianceWavelengthSI } from "../src/radiation/kernels/planck";
 import { blackbodyFractionBelowWavelengthSI } from "../src/radiation/kernels/band-fraction";
+import { planckRadianceWavelength, planckRadianceWavelengthBatch } from "../src/radiation/planck";
+import { CGS, SI } from "../src/quantity/system";
+import { assume, assumeArray } from "../src/quantity/quantity";
+import type { Length, LengthArray, Temperature } from "../src/quantity/aliases";
 
 interface BenchCase {
   name: string;
@@ -29,6 +36,29 @@ function setupLambdas(): void {
   const lo = Math.log(1e-7);
   const hi = Math.log(1e-4);
   for (let i = 0; i < N; i++) lambdas[i] = Math.exp(lo + ((hi - lo) * i) / (N - 1));
+}
+
+/** The same grid as typed SI and CGS arrays (views of `lambdas`, and a CGS copy in cm). */
+let lambdasSI = assumeArray<LengthArray<"SI">>(new Float64Array(0));
+let lambdasCGS = assumeArray<LengthArray<"CGS">>(new Float64Array(0));
+const tempTyped = assume<Temperature>(T);
+function setupTyped(): void {
+  setupLambdas();
+  if (lambdasCGS.length === N) return;
+  lambdasSI = assumeArray<LengthArray<"SI">>(lambdas);
+  lambdasCGS = assumeArray<LengthArray<"CGS">>(Float64Array.from(lambdas, (l) => l * 100));
+}
+
+/** Bare B_λ loop (the hand-written baseline of the typed cases), in W m^-3 sr^-1. */
+function bareLoop(): number {
+  let s = 0;
+  for (let i = 0; i < N; i++) {
+    const l = lambdas[i] as number;
+    const v = (2 * H * C * C) / l ** 5 / (Math.exp(C2 / (l * T)) - 1);
+    out[i] = v;
+    s += v;
+  }
+  return s;
 }
 
 const M = 100_000; // calls per band-fraction case
@@ -71,6 +101,42 @@ export const cases: BenchCase[] = [
     subject: () => {
       let s = 0;
       for (let i = 0; i < M; i++) s += blackbodyFractionBelowWavelengthSI(lambdaT[i] as number, T);
+      return s;
+    },
+  },
+  {
+    name: "typed planckRadianceWavelengthBatch(SI, …) over 1e6 wavelengths vs bare formula loop",
+    setup: setupTyped,
+    baseline: bareLoop,
+    subject: () => {
+      const { values } = planckRadianceWavelengthBatch(SI, lambdasSI, tempTyped);
+      let s = 0;
+      for (let i = 0; i < N; i++) s += values[i] as number;
+      return s;
+    },
+  },
+  {
+    name: "typed planckRadianceWavelengthBatch(CGS, …) over 1e6 wavelengths (copy to m, ×10 back) vs bare formula loop",
+    setup: setupTyped,
+    baseline: bareLoop,
+    subject: () => {
+      const { values } = planckRadianceWavelengthBatch(CGS, lambdasCGS, tempTyped);
+      let s = 0;
+      for (let i = 0; i < N; i++) s += (values[i] as number) / 10; // back to SI for the same checksum
+      return s;
+    },
+  },
+  {
+    name: "typed scalar planckRadianceWavelength(SI, …) in a loop over 1e6 wavelengths vs bare formula loop",
+    setup: setupTyped,
+    baseline: bareLoop,
+    subject: () => {
+      let s = 0;
+      for (let i = 0; i < N; i++) {
+        const v = planckRadianceWavelength(SI, lambdasSI[i] as Length<"SI">, tempTyped);
+        out[i] = v;
+        s += v;
+      }
       return s;
     },
   },

@@ -12,13 +12,17 @@
  * to 1e4 m and T from 1e-2 K to 1e10 K wherever the value is a normal double
  * (measured worst 6.7e-16; see kernels/planck.test.ts). Never NaN or Infinity
  * for finite positive input: deep in the Wien tail the true tiny value, or 0
- * on underflow.
+ * on underflow; a value beyond the double range (in SI, or only after the
+ * ×10ᵏ to CGS) throws a RangeError naming the caller's arguments, or in a
+ * batch becomes a NaN row listed in `invalid`. The temperature derivatives
+ * ∂B_λ/∂T and ∂B_ν/∂T are here too, for fitters.
  *
  * Source: M. Planck, Ann. Phys. 4, 553 (1901); constants CODATA 2018.
  *
  * @module
  */
-import { arrayToSI, arrayFromSIInPlace, fromSI, positive, toSI } from "../internal/typed";
+import { arrayToSI, arrayFromSIInPlace, positive } from "../internal/typed";
+import { eval2, positiveSI } from "./internal";
 import { kinds } from "../quantity/aliases";
 import type {
   Frequency,
@@ -36,7 +40,8 @@ import type {
   Wavenumber,
 } from "../quantity/aliases";
 import type { AnyQuantity, Brand, SystemName, SystemTag } from "../quantity/quantity";
-import type { Dimension } from "../quantity/dimension";
+import { dimension, type Dimension, type L_M_T_K_N_A_Sr } from "../quantity/dimension";
+import type { Quantity } from "../quantity/quantity";
 import type { Product, Quotient } from "../quantity/arithmetic";
 import type { SolidAngle } from "../quantity/aliases";
 import type { UnitSystem } from "../quantity/system";
@@ -44,8 +49,10 @@ import {
   planckPhotonRadianceFrequencySI,
   planckPhotonRadianceWavelengthSI,
   planckPhotonRadianceWavenumberSI,
+  planckRadianceFrequencyDerivativeTSI,
   planckRadianceFrequencySI,
   planckRadianceTemperatureBatchSI,
+  planckRadianceWavelengthDerivativeTSI,
   planckRadianceWavelengthBatchSI,
   planckRadianceWavelengthSI,
   planckRadianceWavenumberSI,
@@ -60,6 +67,26 @@ const NL = kinds.spectralPhotonRadiancePerWavelength.dimension;
 const NN = kinds.spectralPhotonRadiancePerFrequency.dimension;
 const NS = kinds.spectralPhotonRadiancePerWavenumber.dimension;
 const T = kinds.temperature.dimension;
+const F = kinds.frequency.dimension;
+const DBL = dimension({ length: -1, mass: 1, time: -3, temperature: -1, solidAngle: -1 }) as SpectralRadiancePerWavelengthPerTemperatureDimension;
+const DBN = dimension({ mass: 1, time: -2, temperature: -1, solidAngle: -1 }) as SpectralRadiancePerFrequencyPerTemperatureDimension;
+
+/** Dimension of ∂B_λ/∂T: W m⁻² sr⁻¹ m⁻¹ K⁻¹ (SI) or erg s⁻¹ cm⁻² sr⁻¹ cm⁻¹ K⁻¹ (CGS). */
+export type SpectralRadiancePerWavelengthPerTemperatureDimension = L_M_T_K_N_A_Sr<-1, 1, -3, -1, 0, 0, -1>;
+/** ∂B_λ/∂T, the temperature derivative of a spectral radiance per unit wavelength, in system `S`. */
+export type SpectralRadiancePerWavelengthPerTemperature<S extends SystemName> = Quantity<SpectralRadiancePerWavelengthPerTemperatureDimension, S>;
+/** Dimension of ∂B_ν/∂T: W m⁻² sr⁻¹ Hz⁻¹ K⁻¹ (SI) or erg s⁻¹ cm⁻² sr⁻¹ Hz⁻¹ K⁻¹ (CGS). */
+export type SpectralRadiancePerFrequencyPerTemperatureDimension = L_M_T_K_N_A_Sr<0, 1, -2, -1, 0, 0, -1>;
+/** ∂B_ν/∂T, the temperature derivative of a spectral radiance per unit frequency, in system `S`. */
+export type SpectralRadiancePerFrequencyPerTemperature<S extends SystemName> = Quantity<SpectralRadiancePerFrequencyPerTemperatureDimension, S>;
+
+/** Runtime dimensions of the two derivative quantities (for `SI.from` / `CGS.from`). */
+export const derivativeKinds = {
+  /** ∂B_λ/∂T. */
+  spectralRadiancePerWavelengthPerTemperature: { name: "spectral radiance per wavelength per temperature", dimension: DBL },
+  /** ∂B_ν/∂T. */
+  spectralRadiancePerFrequencyPerTemperature: { name: "spectral radiance per frequency per temperature", dimension: DBN },
+} as const;
 
 /**
  * Spectral radiance per unit wavelength, B_λ(λ, T) = (2hc²/λ⁵) / (exp(hc/λkT) − 1).
@@ -81,9 +108,7 @@ export function planckRadianceWavelength<S extends SystemName>(
   wavelength: Length<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralRadiancePerWavelength<S> {
-  positive(sys, "wavelength", wavelength, L);
-  positive(sys, "temperature", temperature, T);
-  return fromSI(sys, planckRadianceWavelengthSI(toSI(sys, wavelength, L), temperature), BL) as SpectralRadiancePerWavelength<S>;
+  return eval2(sys, planckRadianceWavelengthSI, "B_λ", BL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralRadiancePerWavelength<S>;
 }
 
 /**
@@ -104,8 +129,7 @@ export function planckRadianceFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): SpectralRadiancePerFrequency<S> {
-  positive(sys, "temperature", temperature, T);
-  return fromSI(sys, planckRadianceFrequencySI(frequency, temperature), BN) as SpectralRadiancePerFrequency<S>;
+  return eval2(sys, planckRadianceFrequencySI, "B_ν", BN, "frequency", frequency, F, "temperature", temperature, T) as SpectralRadiancePerFrequency<S>;
 }
 
 /**
@@ -127,9 +151,7 @@ export function planckRadianceWavenumber<S extends SystemName>(
   wavenumber: Wavenumber<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralRadiancePerWavenumber<S> {
-  positive(sys, "wavenumber", wavenumber, K);
-  positive(sys, "temperature", temperature, T);
-  return fromSI(sys, planckRadianceWavenumberSI(toSI(sys, wavenumber, K), temperature), BS) as SpectralRadiancePerWavenumber<S>;
+  return eval2(sys, planckRadianceWavenumberSI, "B_σ̃", BS, "wavenumber", wavenumber, K, "temperature", temperature, T) as SpectralRadiancePerWavenumber<S>;
 }
 
 /**
@@ -150,9 +172,7 @@ export function planckPhotonRadianceWavelength<S extends SystemName>(
   wavelength: Length<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralPhotonRadiancePerWavelength<S> {
-  positive(sys, "wavelength", wavelength, L);
-  positive(sys, "temperature", temperature, T);
-  return fromSI(sys, planckPhotonRadianceWavelengthSI(toSI(sys, wavelength, L), temperature), NL) as SpectralPhotonRadiancePerWavelength<S>;
+  return eval2(sys, planckPhotonRadianceWavelengthSI, "photon radiance N_λ", NL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralPhotonRadiancePerWavelength<S>;
 }
 
 /**
@@ -173,8 +193,7 @@ export function planckPhotonRadianceFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): SpectralPhotonRadiancePerFrequency<S> {
-  positive(sys, "temperature", temperature, T);
-  return fromSI(sys, planckPhotonRadianceFrequencySI(frequency, temperature), NN) as SpectralPhotonRadiancePerFrequency<S>;
+  return eval2(sys, planckPhotonRadianceFrequencySI, "photon radiance N_ν", NN, "frequency", frequency, F, "temperature", temperature, T) as SpectralPhotonRadiancePerFrequency<S>;
 }
 
 /**
@@ -195,9 +214,51 @@ export function planckPhotonRadianceWavenumber<S extends SystemName>(
   wavenumber: Wavenumber<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralPhotonRadiancePerWavenumber<S> {
-  positive(sys, "wavenumber", wavenumber, K);
-  positive(sys, "temperature", temperature, T);
-  return fromSI(sys, planckPhotonRadianceWavenumberSI(toSI(sys, wavenumber, K), temperature), NS) as SpectralPhotonRadiancePerWavenumber<S>;
+  return eval2(sys, planckPhotonRadianceWavenumberSI, "photon radiance N_σ̃", NS, "wavenumber", wavenumber, K, "temperature", temperature, T) as SpectralPhotonRadiancePerWavenumber<S>;
+}
+
+/**
+ * Temperature derivative of B_λ, ∂B_λ/∂T = (B_λ/T)·x/(1 − e⁻ˣ), x = hc/(λkT)
+ * (→ B_λ/T in the Rayleigh–Jeans limit, → B_λ·x/T in the Wien limit): the
+ * Jacobian a temperature fitter needs.
+ *
+ * @param sys - `SI` (W m⁻² sr⁻¹ m⁻¹ K⁻¹) or `CGS` (erg s⁻¹ cm⁻² sr⁻¹ cm⁻¹ K⁻¹)
+ * @param wavelength - vacuum wavelength λ, in `sys`
+ * @param temperature - temperature T
+ * @throws RangeError when λ or T is not finite and > 0, or the result overflows
+ * @example
+ * ```ts
+ * import { SI, planckRadianceWavelengthDerivativeT, units } from "starlume";
+ * const d = planckRadianceWavelengthDerivativeT(SI, SI.of(500, units.nm), SI.of(5772, units.K)); // W m^-2 sr^-1 m^-1 K^-1
+ * ```
+ */
+export function planckRadianceWavelengthDerivativeT<S extends SystemName>(
+  sys: UnitSystem<S>,
+  wavelength: Length<NoInfer<S>>,
+  temperature: Temperature,
+): SpectralRadiancePerWavelengthPerTemperature<S> {
+  return eval2(sys, planckRadianceWavelengthDerivativeTSI, "∂B_λ/∂T", DBL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralRadiancePerWavelengthPerTemperature<S>;
+}
+
+/**
+ * Temperature derivative of B_ν, ∂B_ν/∂T = (B_ν/T)·x/(1 − e⁻ˣ), x = hν/(kT).
+ *
+ * @param sys - `SI` (W m⁻² sr⁻¹ Hz⁻¹ K⁻¹) or `CGS` (erg s⁻¹ cm⁻² sr⁻¹ Hz⁻¹ K⁻¹)
+ * @param frequency - frequency ν
+ * @param temperature - temperature T
+ * @throws RangeError when ν or T is not finite and > 0, or the result overflows
+ * @example
+ * ```ts
+ * import { CGS, planckRadianceFrequencyDerivativeT, units } from "starlume";
+ * const d = planckRadianceFrequencyDerivativeT(CGS, CGS.of(100, units.GHz), CGS.of(2.7255, units.K));
+ * ```
+ */
+export function planckRadianceFrequencyDerivativeT<S extends SystemName>(
+  sys: UnitSystem<S>,
+  frequency: Frequency,
+  temperature: Temperature,
+): SpectralRadiancePerFrequencyPerTemperature<S> {
+  return eval2(sys, planckRadianceFrequencyDerivativeTSI, "∂B_ν/∂T", DBN, "frequency", frequency, F, "temperature", temperature, T) as SpectralRadiancePerFrequencyPerTemperature<S>;
 }
 
 /** Result of a typed batch: the values, and the indices of rows written as NaN. */
@@ -231,7 +292,7 @@ export function planckRadianceWavelengthBatch<S extends SystemName>(
 ): BatchResult<SpectralRadiancePerWavelengthArray<S>> {
   positive(sys, "temperature", temperature, T);
   const r = planckRadianceWavelengthBatchSI(arrayToSI(sys, wavelengths, L), temperature);
-  return { values: arrayFromSIInPlace(sys, r.values, BL) as SpectralRadiancePerWavelengthArray<S>, invalid: r.invalid };
+  return batchIn(sys, r.values, r.invalid, BL) as BatchResult<SpectralRadiancePerWavelengthArray<S>>;
 }
 
 /**
@@ -253,9 +314,28 @@ export function planckRadianceTemperatureBatch<S extends SystemName>(
   wavelength: Length<NoInfer<S>>,
   temperatures: TemperatureArray,
 ): BatchResult<SpectralRadiancePerWavelengthArray<S>> {
-  positive(sys, "wavelength", wavelength, L);
-  const r = planckRadianceTemperatureBatchSI(toSI(sys, wavelength, L), temperatures);
-  return { values: arrayFromSIInPlace(sys, r.values, BL) as SpectralRadiancePerWavelengthArray<S>, invalid: r.invalid };
+  const r = planckRadianceTemperatureBatchSI(positiveSI(sys, "wavelength", wavelength, L), temperatures);
+  return batchIn(sys, r.values, r.invalid, BL) as BatchResult<SpectralRadiancePerWavelengthArray<S>>;
+}
+
+/**
+ * An SI batch result in the caller's system, in place. A row whose value is
+ * finite in SI but overflows on conversion (possible in CGS, where B_λ is ten
+ * times its SI number) becomes NaN and joins `invalid`, which stays ascending.
+ */
+function batchIn(sys: UnitSystem<SystemName>, values: Float64Array, invalid: number[], d: Dimension): BatchResult<Float64Array> {
+  arrayFromSIInPlace(sys, values, d);
+  if (sys.exp10(d) >= 0) return { values, invalid };
+  let added = false;
+  for (let i = 0; i < values.length; i++) {
+    if (values[i] === Infinity) {
+      values[i] = NaN;
+      invalid.push(i);
+      added = true;
+    }
+  }
+  if (added) invalid.sort((a, b) => a - b);
+  return { values, invalid };
 }
 
 /** A quantity whose dimension is "per steradian" (solid-angle exponent −1). */

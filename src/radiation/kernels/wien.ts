@@ -8,8 +8,11 @@
  *   the same peak, since ν = cσ̃ is a linear change of variable), x₃ ≈ 2.821439;
  * - n = 4: peak of the photon radiance per unit wavelength, x₄ ≈ 3.920690;
  * - n = 2: peak of the photon radiance per unit frequency / wavenumber, x₂ ≈ 1.593624.
- * The roots are computed here by Newton's method (not typed in), and the
+ * The four roots are computed once, in src/constants/wien-roots.ts (the same
+ * roots behind the typed constants `constants.wienB` and `constants.wienBPrime`),
+ * and imported here so that kernels and constants share one value; the
  * displacement constants follow: b = c₂/x₅ (m K), b′ = x₃k/h (Hz K^-1).
+ * {@link solveWienPeakX} solves the same equation for any other n.
  *
  * **λ_peak · ν_peak ≠ c.** B_λ and B_ν are densities per unit wavelength and
  * per unit frequency; they are related by the Jacobian |dν/dλ| = c/λ²
@@ -22,6 +25,12 @@
  * b′ = 5.878 925 757... × 10^10 Hz K^-1).
  */
 import { C, C2, H, K_B } from "../../constants/values";
+import {
+  WIEN_X_ENERGY_FREQUENCY,
+  WIEN_X_ENERGY_WAVELENGTH,
+  WIEN_X_PHOTON_FREQUENCY as X2,
+  WIEN_X_PHOTON_WAVELENGTH as X4,
+} from "../../constants/wien-roots";
 import { requireInRange, requirePositive } from "../../internal/checks";
 
 /**
@@ -52,14 +61,14 @@ export function solveWienPeakX(n: number): number {
   return x;
 }
 
-/** x₅: peak of B_λ (energy per unit wavelength). */
-export const WIEN_X_WAVELENGTH = solveWienPeakX(5);
-/** x₃: peak of B_ν and of B_σ̃ (energy per unit frequency or wavenumber). */
-export const WIEN_X_FREQUENCY = solveWienPeakX(3);
-/** x₄: peak of the photon radiance per unit wavelength. */
-export const WIEN_X_PHOTON_WAVELENGTH = solveWienPeakX(4);
-/** x₂: peak of the photon radiance per unit frequency or wavenumber. */
-export const WIEN_X_PHOTON_FREQUENCY = solveWienPeakX(2);
+/** x₅: peak of B_λ (energy per unit wavelength); from src/constants/wien-roots.ts. */
+export const WIEN_X_WAVELENGTH = WIEN_X_ENERGY_WAVELENGTH;
+/** x₃: peak of B_ν and of B_σ̃ (energy per unit frequency or wavenumber); from src/constants/wien-roots.ts. */
+export const WIEN_X_FREQUENCY = WIEN_X_ENERGY_FREQUENCY;
+/** x₄: peak of the photon radiance per unit wavelength; from src/constants/wien-roots.ts. */
+export const WIEN_X_PHOTON_WAVELENGTH = X4;
+/** x₂: peak of the photon radiance per unit frequency or wavenumber; from src/constants/wien-roots.ts. */
+export const WIEN_X_PHOTON_FREQUENCY = X2;
 
 /** Wien wavelength displacement constant b = c₂/x₅, m K (CODATA 2018: 2.897 771 955e-3). */
 export const WIEN_B_WAVELENGTH = C2 / WIEN_X_WAVELENGTH;

@@ -1,0 +1,179 @@
+/**
+ * The Stefan–Boltzmann law and its photon-count analogue, typed.
+ *
+ * - Exitance (power leaving a blackbody surface per unit area, into the
+ *   hemisphere): M = σT⁴, σ = 2π⁵k⁴/(15h³c²) = 5.670 374 419… × 10⁻⁸ W m⁻² K⁻⁴
+ *   = 5.670 374 419… × 10⁻⁵ erg s⁻¹ cm⁻² K⁻⁴ (CODATA 2018, exact).
+ *   An exitance is a {@link Flux}; a radiance (per steradian) is not, and
+ *   does not type-check here: put the π back with `lambertianExitance`.
+ * - Luminosity of a spherical blackbody: L = 4πR²σT⁴ (the relation by which
+ *   IAU 2015 Resolution B3 defines the nominal T☉ = 5772 K from L☉ and R☉).
+ * - Photons: M_γ = σ_γT³, σ_γ = 4πζ(3)k³/(h³c²) ≈ 1.5205 × 10¹⁵
+ *   photons s⁻¹ m⁻² K⁻³; a sphere emits Ṅ = 4πR²σ_γT³ photons s⁻¹.
+ *
+ * Accuracy: each result is a product of a constant and powers of the inputs,
+ * formed directly (≤ ~4 ulp) or, when an intermediate would leave the normal
+ * double range, in logarithms; a result that truly exceeds the double range
+ * throws. See kernels/stefan-boltzmann.test.ts.
+ *
+ * Sources: J. Stefan (1879), L. Boltzmann (1884); CODATA 2018; IAU 2015 B3.
+ *
+ * @module
+ */
+import { kinds } from "../quantity/aliases";
+import type { Flux, Length, PhotonFlux, PhotonRate, Power, Temperature } from "../quantity/aliases";
+import type { SystemName } from "../quantity/quantity";
+import type { UnitSystem } from "../quantity/system";
+import {
+  luminosityFromRadiusTemperatureSI,
+  photonEmissionRateSI,
+  photonExitanceSI,
+  radiusFromLuminosityTemperatureSI,
+  stefanBoltzmannExitanceSI,
+  temperatureFromExitanceSI,
+  temperatureFromLuminosityRadiusSI,
+} from "./kernels/stefan-boltzmann";
+import { eval1, eval2 } from "./internal";
+
+const L = kinds.length.dimension;
+const T = kinds.temperature.dimension;
+const P = kinds.power.dimension;
+const M = kinds.flux.dimension;
+const NF = kinds.photonFlux.dimension;
+const NR = kinds.photonRate.dimension;
+
+/**
+ * Blackbody exitance M = σT⁴.
+ *
+ * @param sys - `SI` (W m⁻²) or `CGS` (erg s⁻¹ cm⁻², 1000 times the SI number)
+ * @param temperature - temperature T
+ * @throws RangeError when T is not finite and > 0, or σT⁴ overflows (T ≳ 1e79 K)
+ * @example
+ * ```ts
+ * import { SI, stefanBoltzmannExitance, units } from "starlume";
+ * SI.valueIn(stefanBoltzmannExitance(SI, SI.of(5772, units.K)), units.W_per_m2); // ≈ 6.294e7
+ * ```
+ */
+export function stefanBoltzmannExitance<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Flux<S> {
+  return eval1(sys, stefanBoltzmannExitanceSI, "the exitance σT⁴", M, "temperature", temperature, T) as Flux<S>;
+}
+
+/**
+ * Temperature of a blackbody with the given exitance, T = (M/σ)^¼.
+ *
+ * @param sys - `SI` or `CGS` (the system of `exitance`)
+ * @param exitance - M, in `sys` (W m⁻² or erg s⁻¹ cm⁻²)
+ * @throws RangeError when M is not finite and > 0
+ * @example
+ * ```ts
+ * import { CGS, temperatureFromExitance, units } from "starlume";
+ * temperatureFromExitance(CGS, CGS.of(6.294e10, units.erg_per_s_cm2)); // ≈ 5772 K
+ * ```
+ */
+export function temperatureFromExitance<S extends SystemName>(sys: UnitSystem<S>, exitance: Flux<NoInfer<S>>): Temperature {
+  return eval1(sys, temperatureFromExitanceSI, "the temperature", T, "exitance", exitance, M) as Temperature;
+}
+
+/**
+ * Luminosity of a spherical blackbody, L = 4πR²σT⁴.
+ *
+ * @param sys - `SI` (W) or `CGS` (erg s⁻¹)
+ * @param radius - R, in `sys`
+ * @param temperature - effective temperature T
+ * @throws RangeError when R or T is not finite and > 0, or L overflows
+ * @example
+ * ```ts
+ * import { SI, constants, luminosityFromRadiusTemperature, units } from "starlume";
+ * const l = luminosityFromRadiusTemperature(SI, constants.Rsun.si, constants.Tsun.si);
+ * SI.valueIn(l, units.Lsol); // ≈ 1.0000 (IAU 2015 B3)
+ * ```
+ */
+export function luminosityFromRadiusTemperature<S extends SystemName>(
+  sys: UnitSystem<S>,
+  radius: Length<NoInfer<S>>,
+  temperature: Temperature,
+): Power<S> {
+  return eval2(sys, luminosityFromRadiusTemperatureSI, "the luminosity 4πR²σT⁴", P, "radius", radius, L, "temperature", temperature, T) as Power<S>;
+}
+
+/**
+ * Radius of a spherical blackbody from its luminosity and temperature,
+ * R = √(L/(4πσ))/T².
+ *
+ * @param sys - `SI` (m) or `CGS` (cm)
+ * @param luminosity - L, in `sys`
+ * @param temperature - effective temperature T
+ * @throws RangeError when L or T is not finite and > 0, or R overflows
+ * @example
+ * ```ts
+ * import { CGS, radiusFromLuminosityTemperature, units } from "starlume";
+ * const r = radiusFromLuminosityTemperature(CGS, CGS.of(1, units.Lsol), CGS.of(5772, units.K));
+ * CGS.valueIn(r, units.Rsol); // ≈ 1.0000
+ * ```
+ */
+export function radiusFromLuminosityTemperature<S extends SystemName>(
+  sys: UnitSystem<S>,
+  luminosity: Power<NoInfer<S>>,
+  temperature: Temperature,
+): Length<S> {
+  return eval2(sys, radiusFromLuminosityTemperatureSI, "the radius", L, "luminosity", luminosity, P, "temperature", temperature, T) as Length<S>;
+}
+
+/**
+ * Effective temperature of a spherical blackbody from its luminosity and
+ * radius, T = (L/(4πσR²))^¼.
+ *
+ * @param sys - `SI` or `CGS` (the system of `luminosity` and `radius`)
+ * @param luminosity - L, in `sys`
+ * @param radius - R, in `sys`
+ * @throws RangeError when L or R is not finite and > 0
+ * @example
+ * ```ts
+ * import { SI, temperatureFromLuminosityRadius, units } from "starlume";
+ * temperatureFromLuminosityRadius(SI, SI.of(1, units.Lsol), SI.of(1, units.Rsol)); // ≈ 5772 K
+ * ```
+ */
+export function temperatureFromLuminosityRadius<S extends SystemName>(
+  sys: UnitSystem<S>,
+  luminosity: Power<NoInfer<S>>,
+  radius: Length<NoInfer<S>>,
+): Temperature {
+  return eval2(sys, temperatureFromLuminosityRadiusSI, "the temperature", T, "luminosity", luminosity, P, "radius", radius, L) as Temperature;
+}
+
+/**
+ * Blackbody photon exitance M_γ = σ_γT³ (photons per unit time and area, into the hemisphere).
+ *
+ * @param sys - `SI` (photons s⁻¹ m⁻²) or `CGS` (photons s⁻¹ cm⁻², 10⁻⁴ times the SI number)
+ * @param temperature - temperature T
+ * @throws RangeError when T is not finite and > 0, or the result overflows
+ * @example
+ * ```ts
+ * import { SI, photonExitance, units } from "starlume";
+ * const n = photonExitance(SI, SI.of(2.7255, units.K)); // ≈ 3.08e16 photons s^-1 m^-2
+ * ```
+ */
+export function photonExitance<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): PhotonFlux<S> {
+  return eval1(sys, photonExitanceSI, "the photon exitance", NF, "temperature", temperature, T) as PhotonFlux<S>;
+}
+
+/**
+ * Photon emission rate of a spherical blackbody, Ṅ = 4πR²σ_γT³ (photons s⁻¹, the same in both systems).
+ *
+ * @param sys - `SI` or `CGS` (the system of `radius`)
+ * @param radius - R, in `sys`
+ * @param temperature - temperature T
+ * @throws RangeError when R or T is not finite and > 0, or the result overflows
+ * @example
+ * ```ts
+ * import { CGS, photonEmissionRate, units } from "starlume";
+ * const rate = photonEmissionRate(CGS, CGS.of(1, units.Rsol), CGS.of(5772, units.K)); // photons s^-1
+ * ```
+ */
+export function photonEmissionRate<S extends SystemName>(
+  sys: UnitSystem<S>,
+  radius: Length<NoInfer<S>>,
+  temperature: Temperature,
+): PhotonRate {
+  return eval2(sys, photonEmissionRateSI, "the photon emission rate", NR, "radius", radius, L, "temperature", temperature, T) as PhotonRate;
+}

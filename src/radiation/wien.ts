@@ -1,0 +1,257 @@
+/**
+ * Wien's displacement law, typed: where a blackbody spectrum peaks, and the
+ * temperature whose spectrum peaks at a given place.
+ *
+ * The peak of a spectral density ∝ uⁿ⁻¹/(eᵘ−1)-like solves x = n(1 − e⁻ˣ),
+ * x = hc/(λkT) = hν/(kT):
+ * - energy per unit wavelength (B_λ): n = 5, λ_max = b/T, b = c₂/x₅
+ *   (CODATA 2018: b = 2.897 771 955… × 10⁻³ m K = 0.289 777 1955… cm K);
+ * - energy per unit frequency or wavenumber (B_ν, B_σ̃): n = 3,
+ *   ν_max = b′T, b′ = x₃k/h (CODATA 2018: 5.878 925 757… × 10¹⁰ Hz K⁻¹),
+ *   σ̃_max = ν_max/c;
+ * - photons per unit wavelength: n = 4; per unit frequency or wavenumber: n = 2.
+ *
+ * **λ_max·ν_max ≠ c.** B_λ and B_ν are densities per unit wavelength and per
+ * unit frequency; the Jacobian |dν/dλ| = c/λ² moves the maximum, so
+ * c/ν_max ≈ 1.76 λ_max. Each peak belongs to its own density: pick the
+ * function for the density you plot or measure.
+ *
+ * The roots x₂…x₅ are computed once (src/constants/wien-roots.ts) and shared
+ * with the typed constants `constants.wienB` and `constants.wienBPrime`.
+ * Accuracy: each result is one multiplication or division by a constant, so
+ * ≤ 2 ulp from the exact-constant value (see kernels/wien.test.ts).
+ *
+ * Source: W. Wien, Sitzungsber. Preuss. Akad. Wiss. (1893); CODATA 2018.
+ *
+ * @module
+ */
+import { kinds } from "../quantity/aliases";
+import type { Frequency, Length, Temperature, Wavenumber } from "../quantity/aliases";
+import type { SystemName } from "../quantity/quantity";
+import type { UnitSystem } from "../quantity/system";
+import {
+  temperatureFromPeakFrequencySI,
+  temperatureFromPeakWavelengthSI,
+  temperatureFromPeakWavenumberSI,
+  temperatureFromPhotonPeakFrequencySI,
+  temperatureFromPhotonPeakWavelengthSI,
+  temperatureFromPhotonPeakWavenumberSI,
+  wienPeakFrequencySI,
+  wienPeakWavelengthSI,
+  wienPeakWavenumberSI,
+  wienPhotonPeakFrequencySI,
+  wienPhotonPeakWavelengthSI,
+  wienPhotonPeakWavenumberSI,
+} from "./kernels/wien";
+import { eval1 } from "./internal";
+
+const L = kinds.length.dimension;
+const F = kinds.frequency.dimension;
+const K = kinds.wavenumber.dimension;
+const T = kinds.temperature.dimension;
+
+/**
+ * Wavelength of the maximum of B_λ: λ_max = b/T, b = c₂/x₅ ≈ 2.898e-3 m K.
+ *
+ * @param sys - `SI` (result in m) or `CGS` (cm)
+ * @param temperature - temperature T
+ * @throws RangeError when T is not finite and > 0, or λ_max overflows (subnormal T)
+ * @example
+ * ```ts
+ * import { SI, units, wienPeakWavelength } from "starlume";
+ * SI.valueIn(wienPeakWavelength(SI, SI.of(5772, units.K)), units.nm); // ≈ 502.0
+ * ```
+ */
+export function wienPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
+  return eval1(sys, wienPeakWavelengthSI, "the peak wavelength", L, "temperature", temperature, T) as Length<S>;
+}
+
+/**
+ * Frequency of the maximum of B_ν: ν_max = b′T, b′ = x₃k/h ≈ 5.879e10 Hz K⁻¹.
+ * Note c/ν_max ≈ 1.76 λ_max (a different density).
+ *
+ * @param sys - `SI` or `CGS` (frequency is the same in both)
+ * @param temperature - temperature T
+ * @throws RangeError when T is not finite and > 0, or ν_max overflows
+ * @example
+ * ```ts
+ * import { SI, units, wienPeakFrequency } from "starlume";
+ * SI.valueIn(wienPeakFrequency(SI, SI.of(2.7255, units.K)), units.GHz); // ≈ 160.2 (CMB)
+ * ```
+ */
+export function wienPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
+  return eval1(sys, wienPeakFrequencySI, "the peak frequency", F, "temperature", temperature, T) as Frequency;
+}
+
+/**
+ * Wavenumber of the maximum of B_σ̃: σ̃_max = x₃kT/(hc) = ν_max/c (the
+ * wavenumber peak coincides with the frequency peak).
+ *
+ * @param sys - `SI` (result in m⁻¹) or `CGS` (cm⁻¹)
+ * @param temperature - temperature T
+ * @throws RangeError when T is not finite and > 0, or σ̃_max overflows
+ * @example
+ * ```ts
+ * import { CGS, units, wienPeakWavenumber } from "starlume";
+ * CGS.valueIn(wienPeakWavenumber(CGS, CGS.of(300, units.K)), units.per_cm); // ≈ 588.3
+ * ```
+ */
+export function wienPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
+  return eval1(sys, wienPeakWavenumberSI, "the peak wavenumber", K, "temperature", temperature, T) as Wavenumber<S>;
+}
+
+/**
+ * Wavelength of the maximum of the photon radiance per unit wavelength: c₂/(x₄T).
+ *
+ * @param sys - `SI` (m) or `CGS` (cm)
+ * @param temperature - temperature T
+ * @throws RangeError when T is not finite and > 0, or the result overflows
+ * @example
+ * ```ts
+ * import { SI, units, wienPhotonPeakWavelength } from "starlume";
+ * SI.valueIn(wienPhotonPeakWavelength(SI, SI.of(5772, units.K)), units.nm); // ≈ 635.8
+ * ```
+ */
+export function wienPhotonPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
+  return eval1(sys, wienPhotonPeakWavelengthSI, "the photon peak wavelength", L, "temperature", temperature, T) as Length<S>;
+}
+
+/**
+ * Frequency of the maximum of the photon radiance per unit frequency: x₂kT/h.
+ *
+ * @param sys - `SI` or `CGS`
+ * @param temperature - temperature T
+ * @throws RangeError when T is not finite and > 0, or the result overflows
+ * @example
+ * ```ts
+ * import { SI, units, wienPhotonPeakFrequency } from "starlume";
+ * const nu = wienPhotonPeakFrequency(SI, SI.of(5772, units.K)); // ≈ 1.92e14 Hz
+ * ```
+ */
+export function wienPhotonPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
+  return eval1(sys, wienPhotonPeakFrequencySI, "the photon peak frequency", F, "temperature", temperature, T) as Frequency;
+}
+
+/**
+ * Wavenumber of the maximum of the photon radiance per unit wavenumber: x₂kT/(hc).
+ *
+ * @param sys - `SI` (m⁻¹) or `CGS` (cm⁻¹)
+ * @param temperature - temperature T
+ * @throws RangeError when T is not finite and > 0, or the result overflows
+ * @example
+ * ```ts
+ * import { CGS, units, wienPhotonPeakWavenumber } from "starlume";
+ * const k = wienPhotonPeakWavenumber(CGS, CGS.of(5772, units.K)); // ≈ 6393 cm^-1
+ * ```
+ */
+export function wienPhotonPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
+  return eval1(sys, wienPhotonPeakWavenumberSI, "the photon peak wavenumber", K, "temperature", temperature, T) as Wavenumber<S>;
+}
+
+/**
+ * Temperature whose B_λ peaks at the given wavelength: T = b/λ_max.
+ *
+ * @param sys - `SI` or `CGS` (the system of `peakWavelength`)
+ * @param peakWavelength - λ_max, in `sys`
+ * @throws RangeError when λ_max is not finite and > 0, or T overflows
+ * @example
+ * ```ts
+ * import { CGS, temperatureFromPeakWavelength, units } from "starlume";
+ * temperatureFromPeakWavelength(CGS, CGS.of(502, units.nm)); // ≈ 5772 K
+ * ```
+ */
+export function temperatureFromPeakWavelength<S extends SystemName>(
+  sys: UnitSystem<S>,
+  peakWavelength: Length<NoInfer<S>>,
+): Temperature {
+  return eval1(sys, temperatureFromPeakWavelengthSI, "the temperature", T, "peakWavelength", peakWavelength, L) as Temperature;
+}
+
+/**
+ * Temperature whose B_ν peaks at the given frequency: T = ν_max/b′.
+ *
+ * @param sys - `SI` or `CGS`
+ * @param peakFrequency - ν_max
+ * @throws RangeError when ν_max is not finite and > 0
+ * @example
+ * ```ts
+ * import { SI, temperatureFromPeakFrequency, units } from "starlume";
+ * temperatureFromPeakFrequency(SI, SI.of(160.2, units.GHz)); // ≈ 2.725 K
+ * ```
+ */
+export function temperatureFromPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, peakFrequency: Frequency): Temperature {
+  return eval1(sys, temperatureFromPeakFrequencySI, "the temperature", T, "peakFrequency", peakFrequency, F) as Temperature;
+}
+
+/**
+ * Temperature whose B_σ̃ peaks at the given wavenumber: T = σ̃_max·hc/(x₃k).
+ *
+ * @param sys - `SI` or `CGS` (the system of `peakWavenumber`)
+ * @param peakWavenumber - σ̃_max, in `sys` (m⁻¹ or cm⁻¹)
+ * @throws RangeError when σ̃_max is not finite and > 0, or T overflows
+ * @example
+ * ```ts
+ * import { CGS, temperatureFromPeakWavenumber, units } from "starlume";
+ * temperatureFromPeakWavenumber(CGS, CGS.of(588.3, units.per_cm)); // ≈ 300 K
+ * ```
+ */
+export function temperatureFromPeakWavenumber<S extends SystemName>(
+  sys: UnitSystem<S>,
+  peakWavenumber: Wavenumber<NoInfer<S>>,
+): Temperature {
+  return eval1(sys, temperatureFromPeakWavenumberSI, "the temperature", T, "peakWavenumber", peakWavenumber, K) as Temperature;
+}
+
+/**
+ * Temperature whose photon radiance per unit wavelength peaks at the given wavelength: T = c₂/(x₄λ).
+ *
+ * @param sys - `SI` or `CGS`
+ * @param peakWavelength - photon-count peak wavelength, in `sys`
+ * @throws RangeError when the wavelength is not finite and > 0, or T overflows
+ * @example
+ * ```ts
+ * import { SI, temperatureFromPhotonPeakWavelength, units } from "starlume";
+ * temperatureFromPhotonPeakWavelength(SI, SI.of(635.8, units.nm)); // ≈ 5772 K
+ * ```
+ */
+export function temperatureFromPhotonPeakWavelength<S extends SystemName>(
+  sys: UnitSystem<S>,
+  peakWavelength: Length<NoInfer<S>>,
+): Temperature {
+  return eval1(sys, temperatureFromPhotonPeakWavelengthSI, "the temperature", T, "peakWavelength", peakWavelength, L) as Temperature;
+}
+
+/**
+ * Temperature whose photon radiance per unit frequency peaks at the given frequency: T = hν/(x₂k).
+ *
+ * @param sys - `SI` or `CGS`
+ * @param peakFrequency - photon-count peak frequency
+ * @throws RangeError when the frequency is not finite and > 0
+ * @example
+ * ```ts
+ * import { SI, temperatureFromPhotonPeakFrequency, units } from "starlume";
+ * temperatureFromPhotonPeakFrequency(SI, SI.of(191.66, units.THz)); // ≈ 5772 K
+ * ```
+ */
+export function temperatureFromPhotonPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, peakFrequency: Frequency): Temperature {
+  return eval1(sys, temperatureFromPhotonPeakFrequencySI, "the temperature", T, "peakFrequency", peakFrequency, F) as Temperature;
+}
+
+/**
+ * Temperature whose photon radiance per unit wavenumber peaks at the given wavenumber: T = hcσ̃/(x₂k).
+ *
+ * @param sys - `SI` or `CGS` (the system of `peakWavenumber`)
+ * @param peakWavenumber - photon-count peak wavenumber, in `sys`
+ * @throws RangeError when the wavenumber is not finite and > 0, or T overflows
+ * @example
+ * ```ts
+ * import { CGS, temperatureFromPhotonPeakWavenumber, units } from "starlume";
+ * temperatureFromPhotonPeakWavenumber(CGS, CGS.of(6393, units.per_cm)); // ≈ 5772 K
+ * ```
+ */
+export function temperatureFromPhotonPeakWavenumber<S extends SystemName>(
+  sys: UnitSystem<S>,
+  peakWavenumber: Wavenumber<NoInfer<S>>,
+): Temperature {
+  return eval1(sys, temperatureFromPhotonPeakWavenumberSI, "the temperature", T, "peakWavenumber", peakWavenumber, K) as Temperature;
+}
