@@ -10,5 +10,8 @@
 export * from "./quantity/index";
 export { constants } from "./constants/index";
 export type { Constant } from "./constants/index";
-export * from "./radiation/planck";
+export * from "./radiation/index";
+export * from "./photometry/index";
+export * from "./spectra/index";
+export * from "./fit/index";
 export * from "./plot/index";
