@@ -4,9 +4,9 @@
  * @module
  */
 export { svgChart, PALETTE } from "./svg";
-export type { AxisScale, AxisSpec, BandCurve, ChartSpec, LineSeries, MarkerLine, ScatterSeries, Series } from "./svg";
+export type { AxisScale, AxisSpec, BandCurve, ChartSpec, LineSeries, MarkerLine, MarkerShape, ResidualPanel, ScatterSeries, Series } from "./svg";
 export { linearTicks, logTicks, niceStep, powerOfTenLabel } from "./ticks";
 export type { Ticks } from "./ticks";
 export { htmlReport } from "./report";
 export type { ReportFigure, ReportSpec, ReportTable } from "./report";
-export { escapeXml } from "./xml";
+export { escapeXml, htmlMarkup, markupPlain } from "./xml";

@@ -58,4 +58,25 @@ describe("htmlReport", () => {
     const s = svgChart({ title: "position one = 3, javascript: none" });
     expect(() => htmlReport({ title: "t", figures: [{ svg: s, caption: "" }] })).not.toThrow();
   });
+
+  it("wraps the table for sideways scrolling, keeps cells on one line, and draws header/caption markup", () => {
+    const page = htmlReport({
+      title: "t",
+      table: { header: ["T_{eff} [K]", "R [R_{☉}] <x>"], rows: [["5772 ± 1", "1.00"]], caption: "Fitted T_{eff} & R" },
+    });
+    expect(page).toContain('<div class="table-wrap">\n<table>\n<caption>Fitted T<sub>eff</sub> &amp; R</caption>');
+    expect(page).toContain('<th scope="col" class="num">T<sub>eff</sub> [K]</th><th scope="col" class="num">R [R<sub>☉</sub>] &lt;x&gt;</th>');
+    expect(page).toMatch(/th,td\{[^}]*white-space:nowrap/);
+    expect(page).toMatch(/\.table-wrap\{[^}]*overflow-x:auto/);
+    const body = /<body>([\s\S]*)<\/body>/.exec(page)?.[1] ?? "";
+    expect(xmlProblems(`<body>${body}</body>`)).toEqual([]);
+  });
+
+  it("sizes each figure to its SVG's width (caption no wider), centred, with caption markup", () => {
+    const s = svgChart({ title: "w", width: 640 });
+    const page = htmlReport({ title: "t", figures: [{ svg: s, caption: "B_{λ} <i>" }] });
+    expect(page).toContain('<figure style="max-width:640px">');
+    expect(page).toContain("<figcaption>B<sub>λ</sub> &lt;i&gt;</figcaption>");
+    expect(page).toMatch(/figure\{margin:[\d.]+rem auto\}/);
+  });
 });

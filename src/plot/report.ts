@@ -7,15 +7,15 @@
  * @module
  */
 
-import { escapeXml } from "./xml";
+import { escapeXml, htmlMarkup } from "./xml";
 
-/** A figure: SVG markup (as produced by `svgChart`) and its caption. */
+/** A figure: SVG markup (as produced by `svgChart`) and its caption (`_{…}`/`^{…}` markup allowed). */
 export interface ReportFigure {
   readonly svg: string;
   readonly caption: string;
 }
 
-/** A table of text cells. */
+/** A table of text cells; header texts and the caption may carry `_{…}`/`^{…}` markup. */
 export interface ReportTable {
   readonly header: readonly string[];
   readonly rows: readonly (readonly string[])[];
@@ -41,21 +41,26 @@ const NUMERIC = /^\s*[+\-−]?(?:\d+\.?\d*|\.\d+)(?:[eE][+\-]?\d+)?(?:\s*±\s*(?
 const CSS = `
 body{font-family:Helvetica,Arial,sans-serif;max-width:60rem;margin:2rem auto;padding:0 1rem;color:#222;line-height:1.45}
 h1{font-size:1.6rem;margin-bottom:.4rem}
-table{border-collapse:collapse;margin:1rem 0;font-size:.92rem}
-caption{text-align:left;font-style:italic;padding-bottom:.3rem}
-th,td{border-bottom:1px solid #ddd;padding:.25rem .6rem;text-align:left;vertical-align:top}
+.table-wrap{overflow-x:auto;margin:1rem 0;position:relative;left:50%;transform:translateX(-50%);width:max-content;max-width:calc(100vw - 2rem)}
+table{border-collapse:collapse;font-size:.88rem}
+caption{text-align:left;font-style:italic;padding-bottom:.3rem;caption-side:top}
+th,td{border-bottom:1px solid #ddd;padding:.25rem .5rem;text-align:left;vertical-align:top;white-space:nowrap}
 th{border-bottom:2px solid #555}
-td.num{text-align:right;font-variant-numeric:tabular-nums}
-figure{margin:1.5rem 0}
-figure svg{max-width:100%;height:auto}
-figcaption{font-size:.9rem;color:#444}
+td.num,th.num{text-align:right;font-variant-numeric:tabular-nums}
+figure{margin:2rem auto}
+figure svg{display:block;max-width:100%;height:auto;margin:0 auto}
+figcaption{font-size:.9rem;color:#444;margin-top:.4rem}
 footer{margin-top:2rem;padding-top:.8rem;border-top:1px solid #ccc;font-size:.88rem;color:#555}
 `.trim();
 
 /**
  * Build a standalone HTML5 page. Every piece of text (title, description,
  * table cells, captions, caution) is HTML-escaped; multi-line text keeps its
- * paragraphs (blank-line separated). Figure markup is inserted as is, so it
+ * paragraphs (blank-line separated). Table headers, the table caption and
+ * figure captions may carry `_{…}` (subscript) and `^{…}` (superscript)
+ * markup, drawn with `<sub>`/`<sup>`. Table cells do not wrap (the table
+ * scrolls sideways in a narrow window); each figure is centred and its
+ * caption is no wider than the figure. Figure markup is inserted as is, so it
  * must come from a trusted builder such as `svgChart`; as a safeguard, markup
  * that does not start with `<svg` or that contains `<script`, `<foreignObject`
  * or an `on…=` event attribute is refused.
@@ -95,9 +100,11 @@ export function htmlReport(spec: ReportSpec): string {
   if (spec.table !== undefined) o.push(table(spec.table));
   (spec.figures ?? []).forEach((f, i) => {
     checkSvg(f.svg, i);
-    o.push("<figure>");
+    // The figure is as wide as its SVG (so the caption is no wider) and centred.
+    const w = /^<svg\b[^>]*?\swidth="(\d+(?:\.\d+)?)"/.exec(f.svg.trim())?.[1];
+    o.push(w !== undefined ? `<figure style="max-width:${w}px">` : "<figure>");
     o.push(f.svg.trim());
-    o.push(`<figcaption>${escapeXml(f.caption)}</figcaption>`);
+    o.push(`<figcaption>${htmlMarkup(f.caption)}</figcaption>`);
     o.push("</figure>");
   });
   o.push("</main>");
@@ -128,15 +135,16 @@ function table(t: ReportTable): string {
   const numeric = t.header.map(
     (_, k) => (t.alignNumbers ?? true) && t.rows.length > 0 && t.rows.every((r) => (r[k] ?? "") === "" || NUMERIC.test(r[k] ?? "")),
   );
-  const o: string[] = ["<table>"];
-  if (t.caption !== undefined) o.push(`<caption>${escapeXml(t.caption)}</caption>`);
-  o.push(`<thead><tr>${t.header.map((h) => `<th scope="col">${escapeXml(h)}</th>`).join("")}</tr></thead>`);
+  const o: string[] = ['<div class="table-wrap">', "<table>"];
+  if (t.caption !== undefined) o.push(`<caption>${htmlMarkup(t.caption)}</caption>`);
+  o.push(`<thead><tr>${t.header.map((h, k) => `<th scope="col"${numeric[k] === true ? ' class="num"' : ""}>${htmlMarkup(h)}</th>`).join("")}</tr></thead>`);
   o.push("<tbody>");
   for (const r of t.rows) {
     o.push(`<tr>${r.map((c, k) => `<td${numeric[k] === true ? ' class="num"' : ""}>${escapeXml(c)}</td>`).join("")}</tr>`);
   }
   o.push("</tbody>");
   o.push("</table>");
+  o.push("</div>");
   return o.join("\n");
 }
 

@@ -8,13 +8,24 @@
  *   axis labels and a title;
  * - line series (one `<path>` each, broken at invalid points and clipped to
  *   the plot area geometrically, so coordinates are always finite and bounded);
- * - scatter series with optional vertical error bars, symmetric or asymmetric;
- *   points outside the axis ranges are omitted, bars are clipped;
- * - band response curves, normalised to a peak of 1 and drawn faintly, either
- *   against a secondary 0–1 axis on the right (`bandPlacement: "axis"`) or in
- *   a lower panel sharing the x axis (`"panel"`);
+ * - scatter series (circles, squares, diamonds or short dashes, filled or
+ *   hollow) with optional vertical and horizontal error bars, symmetric or
+ *   asymmetric; points outside the axis ranges are omitted, bars are clipped;
+ * - reversed axes (`reverse: true`, e.g. temperature decreasing to the right)
+ *   and explicit tick values and labels;
+ * - an optional residual panel under the main one (its own linear y axis,
+ *   a zero line, the same x axis), e.g. (measured − model)/σ;
+ * - band response curves, normalised to a peak of 1, either against a
+ *   secondary 0–1 axis on the right (`bandPlacement: "axis"`) or in a lower
+ *   panel sharing the x axis (`"panel"`, range 0–1.1), named in the legend or
+ *   by a label above each curve (`bandLabels: "inline"`);
  * - vertical marker lines with labels (e.g. spectral lines);
- * - a legend, and `<title>`/`<desc>` for accessibility.
+ * - a legend, placed in the corner of the main panel that covers the fewest
+ *   drawn points (or where asked), and `<title>`/`<desc>` for accessibility.
+ *
+ * Titles, axis labels, legend names and band names may carry `_{…}`
+ * (subscript) and `^{…}` (superscript) markup, e.g. `T_{eff} [K]`; it is
+ * drawn with shifted `<tspan>`s and shown as `T_eff` in `<title>` text.
  *
  * Invalid data points (NaN, ±Infinity, or ≤ 0 on a log axis) are skipped
  * silently; invalid chart settings (sizes, ranges, mismatched array lengths)
@@ -27,8 +38,8 @@
  * @module
  */
 
-import { escapeXml, px } from "./xml";
-import { MIN_LINEAR_SPAN, linearTicks, logTicks } from "./ticks";
+import { escapeXml, markupPlain, px, svgMarkup } from "./xml";
+import { MIN_LINEAR_SPAN, linearTicks, logTicks, niceStep } from "./ticks";
 import type { Ticks } from "./ticks";
 
 /** Axis scale. */
@@ -36,11 +47,21 @@ export type AxisScale = "linear" | "log";
 
 /** One axis. Unset `min`/`max` are taken from the data (rounded out to nice values). */
 export interface AxisSpec {
+  /** Axis title; may contain `_{…}`/`^{…}` markup and, on a y axis, line breaks (`\n`). */
   readonly label?: string;
   readonly scale?: AxisScale;
   readonly min?: number;
   readonly max?: number;
+  /** Draw the axis with values decreasing along it (right to left on x, top to bottom on y). */
+  readonly reverse?: boolean;
+  /** Labelled tick values (those inside the range are drawn); replaces the automatic major ticks. */
+  readonly ticks?: readonly number[];
+  /** Labels of `ticks`, one per value (default: the shortest decimal form). */
+  readonly tickLabels?: readonly string[];
 }
+
+/** Marker shape of a scatter series. */
+export type MarkerShape = "circle" | "square" | "diamond" | "dash";
 
 /** A line series (a polyline through the points in the given order). */
 export interface LineSeries {
@@ -55,7 +76,7 @@ export interface LineSeries {
   readonly dashed?: boolean;
 }
 
-/** Scatter points with optional vertical error bars. */
+/** Scatter points with optional vertical and horizontal error bars. */
 export interface ScatterSeries {
   readonly type: "scatter";
   readonly name: string;
@@ -67,9 +88,19 @@ export interface ScatterSeries {
   readonly yErrLow?: ArrayLike<number>;
   /** Error towards larger y (≥ 0). */
   readonly yErrHigh?: ArrayLike<number>;
+  /** Symmetric horizontal 1σ error (≥ 0), used for both sides unless `xErrLow`/`xErrHigh` are given. */
+  readonly xErr?: ArrayLike<number>;
+  /** Horizontal error towards smaller x (≥ 0). */
+  readonly xErrLow?: ArrayLike<number>;
+  /** Horizontal error towards larger x (≥ 0). */
+  readonly xErrHigh?: ArrayLike<number>;
   readonly color?: string;
-  /** Point radius in px (default 3). */
+  /** Point radius in px (default 3): half the width of the marker. */
   readonly radius?: number;
+  /** Marker shape (default `"circle"`); `"dash"` is a short horizontal line. */
+  readonly marker?: MarkerShape;
+  /** Draw the marker as an outline with a transparent inside instead of filled (default false). */
+  readonly hollow?: boolean;
 }
 
 /** Any plotted series. */
@@ -77,6 +108,7 @@ export type Series = LineSeries | ScatterSeries;
 
 /** A band (filter) response curve; it is divided by its own maximum before drawing. */
 export interface BandCurve {
+  /** Band name; may contain `_{…}`/`^{…}` markup. */
   readonly name: string;
   readonly x: ArrayLike<number>;
   readonly response: ArrayLike<number>;
@@ -108,9 +140,26 @@ export interface ChartSpec {
   readonly bandPlacement?: "axis" | "panel";
   /** Label of the band axis (default `"band response"`). */
   readonly bandLabel?: string;
+  /** Name the bands in the legend (`"legend"`, default) or by a label above each curve (`"inline"`). */
+  readonly bandLabels?: "legend" | "inline";
   readonly markers?: readonly MarkerLine[];
-  /** Show the legend (default: when there are two or more series/bands). */
+  /** A residual panel between the main panel and the band panel, sharing the x axis. */
+  readonly residual?: ResidualPanel;
+  /** Show the legend (default: when there are two or more entries). */
   readonly legend?: boolean;
+  /** Legend corner in the main panel; `"auto"` (default) picks the corner covering the fewest drawn points, preferring top right. */
+  readonly legendPosition?: "auto" | "top-right" | "top-left" | "bottom-right" | "bottom-left";
+}
+
+/** A panel under the main one with its own linear y axis, e.g. normalised residuals. */
+export interface ResidualPanel {
+  /** Linear y axis; unset `min`/`max` give a symmetric range ±max(3, largest |value| rounded up). */
+  readonly y?: AxisSpec;
+  readonly series: readonly Series[];
+  /** Draw a line at y = 0 (default true). */
+  readonly zeroLine?: boolean;
+  /** Height as a fraction of the plotting height (default 0.2). */
+  readonly height?: number;
 }
 
 /** The default colour cycle (Okabe–Ito, without yellow). */
@@ -118,6 +167,7 @@ export const PALETTE: readonly string[] = ["#0072B2", "#D55E00", "#009E73", "#CC
 
 interface Scale {
   readonly log: boolean;
+  readonly reverse: boolean;
   readonly min: number;
   readonly max: number;
   readonly ticks: Ticks;
@@ -163,7 +213,10 @@ export function svgChart(spec: ChartSpec): string {
   const series = spec.series ?? [];
   const bands = spec.bands ?? [];
   const markers = spec.markers ?? [];
-  series.forEach((s, i) => checkSeries(s, i));
+  const resid = spec.residual;
+  const residSeries = resid?.series ?? [];
+  series.forEach((s, i) => checkSeries(s, `series[${i}]`));
+  residSeries.forEach((s, i) => checkSeries(s, `residual.series[${i}]`));
   bands.forEach((b, i) => {
     if (b.x.length !== b.response.length) {
       throw new RangeError(`bands[${i}] (${b.name}): x and response must have the same length; got ${b.x.length} and ${b.response.length}`);
@@ -174,9 +227,15 @@ export function svgChart(spec: ChartSpec): string {
   const yLog = spec.y?.scale === "log";
   checkAxis("x", spec.x);
   checkAxis("y", spec.y);
+  if (resid !== undefined) {
+    if (resid.y?.scale === "log") throw new RangeError(`residual.y.scale must be "linear"; got "log"`);
+    checkAxis("residual.y", resid.y);
+    const hf = resid.height ?? 0.2;
+    if (!(hf >= 0.05 && hf <= 0.6)) throw new RangeError(`residual.height must be a fraction in [0.05, 0.6]; got ${String(resid.height)}`);
+  }
 
   // ---- ranges
-  const xs = collectX(series, bands, xLog, yLog);
+  const xs = collectX([...series, ...residSeries], bands, xLog, yLog);
   const xRange = autoRange(spec.x?.min, spec.x?.max, xs.lo, xs.hi, xLog);
   const ys = collectY(series, yLog, xRange, xLog);
   const yRange = autoRange(spec.y?.min, spec.y?.max, ys.lo, ys.hi, yLog);
@@ -192,32 +251,54 @@ export function svgChart(spec: ChartSpec): string {
   const bottom = 50;
   const plotW = Math.max(10, width - left - right);
   const totalH = Math.max(20, height - top - bottom);
-  const panelH = panel ? Math.round(totalH * 0.24) : 0;
-  const gapH = panel ? 12 : 0;
-  const main: Rect = { x: left, y: top, w: plotW, h: totalH - panelH - gapH };
-  const lower: Rect = { x: left, y: top + main.h + gapH, w: plotW, h: panelH };
+  const gap = 10;
+  const bandH = panel ? Math.round(totalH * 0.24) : 0;
+  const residH = resid !== undefined ? Math.round(totalH * (resid.height ?? 0.2)) : 0;
+  const mainH = Math.max(10, totalH - bandH - residH - (panel ? gap : 0) - (resid !== undefined ? gap : 0));
+  const main: Rect = { x: left, y: top, w: plotW, h: mainH };
+  const residRect: Rect = { x: left, y: top + mainH + gap, w: plotW, h: residH };
+  const lower: Rect = { x: left, y: top + mainH + (resid !== undefined ? gap + residH : 0) + gap, w: plotW, h: bandH };
+  const lowest = panel ? lower : resid !== undefined ? residRect : main;
 
-  const xScale = makeScale(xRange, xLog, Math.max(2, Math.round(plotW / 90)));
-  const yScale = makeScale(yRange, yLog, Math.max(2, Math.round(main.h / 55)));
-  const bandScale: Scale = { log: false, min: 0, max: 1, ticks: { major: [0, 0.5, 1], minor: [], labels: ["0", "0.5", "1"] } };
+  const xScale = makeScale(xRange, xLog, Math.max(2, Math.round(plotW / 90)), spec.x);
+  const yScale = makeScale(yRange, yLog, Math.max(2, Math.round(main.h / 55)), spec.y);
+  const bandScale: Scale = panel
+    ? { log: false, reverse: false, min: 0, max: 1.1, ticks: { major: [0, 0.5, 1], minor: [0.25, 0.75], labels: ["0", "0.5", "1"] } }
+    : { log: false, reverse: false, min: 0, max: 1, ticks: { major: [0, 0.5, 1], minor: [], labels: ["0", "0.5", "1"] } };
+  let residScale: Scale | null = null;
+  if (resid !== undefined) {
+    let big = 3;
+    for (const s of residSeries) {
+      for (let i = 0; i < s.y.length; i++) {
+        const v = s.y[i] ?? NaN;
+        if (Number.isFinite(v) && Math.abs(v) > big && Math.abs(v) < 1e300) big = Math.abs(v);
+      }
+    }
+    const lim = Math.ceil(big);
+    const rRange = autoRange(resid.y?.min ?? -lim, resid.y?.max ?? lim, -lim, lim, false);
+    residScale = makeScale(rRange, false, Math.max(2, Math.round(residH / 30)), resid.y);
+  }
 
   const o: string[] = [];
   o.push(
     `<svg xmlns="http://www.w3.org/2000/svg" width="${px(width)}" height="${px(height)}" viewBox="0 0 ${px(width)} ${px(height)}" role="img" font-family="Helvetica, Arial, sans-serif" font-size="12">`,
   );
-  o.push(`<title>${escapeXml(spec.title)}</title>`);
-  if (spec.description !== undefined) o.push(`<desc>${escapeXml(spec.description)}</desc>`);
+  o.push(`<title>${escapeXml(markupPlain(spec.title))}</title>`);
+  if (spec.description !== undefined) o.push(`<desc>${escapeXml(markupPlain(spec.description))}</desc>`);
   o.push(`<rect x="0" y="0" width="${px(width)}" height="${px(height)}" fill="#ffffff"/>`);
 
   // ---- grid and frame
   drawGrid(o, main, xScale, yScale);
+  if (residScale !== null) drawGrid(o, residRect, xScale, residScale);
   if (panel) drawGrid(o, lower, xScale, bandScale);
 
-  // ---- bands (faint, behind the data)
+  // ---- bands (behind the data)
   const bandRect = panel ? lower : main;
+  const bandYScale: Scale = { ...bandScale, ticks: { major: [], minor: [], labels: [] } };
+  const inline = spec.bandLabels === "inline";
   bands.forEach((b, i) => {
     const color = b.color ?? PALETTE[(series.length + i) % PALETTE.length] ?? "#000";
-    drawBand(o, b, color, bandRect, xScale);
+    drawBand(o, b, color, bandRect, xScale, bandYScale, inline);
   });
 
   // ---- markers
@@ -227,7 +308,7 @@ export function svgChart(spec: ChartSpec): string {
     if (!(u >= 0 && u <= 1)) continue;
     const x = main.x + u * main.w;
     const color = escapeXml(m.color ?? "#555555");
-    const y1 = panel ? lower.y + lower.h : main.y + main.h;
+    const y1 = lowest.y + lowest.h;
     o.push(`<line x1="${px(x)}" y1="${px(main.y)}" x2="${px(x)}" y2="${px(y1)}" stroke="${color}" stroke-width="1" stroke-dasharray="4 3"/>`);
     if (m.label !== undefined && m.label !== "") {
       o.push(
@@ -236,36 +317,53 @@ export function svgChart(spec: ChartSpec): string {
     }
   }
 
-  // ---- series
+  // ---- series (the pixel points they cover are collected for the legend placement)
+  const covered: number[] = [];
   series.forEach((s, i) => {
     const color = s.color ?? PALETTE[i % PALETTE.length] ?? "#000";
-    if (s.type === "line") drawLine(o, s, color, main, xScale, yScale);
-    else drawScatter(o, s, color, main, xScale, yScale);
+    if (s.type === "line") drawLine(o, s, color, main, xScale, yScale, covered);
+    else drawScatter(o, s, color, main, xScale, yScale, covered);
   });
+  if (residScale !== null) {
+    if (resid?.zeroLine ?? true) {
+      const u = norm(0, residScale);
+      if (u >= 0 && u <= 1) {
+        const y = residRect.y + (1 - u) * residRect.h;
+        o.push(`<path d="M${px(residRect.x)} ${px(y)}H${px(residRect.x + residRect.w)}" stroke="#555555" stroke-width="1"/>`);
+      }
+    }
+    residSeries.forEach((s, i) => {
+      const color = s.color ?? PALETTE[i % PALETTE.length] ?? "#000";
+      if (s.type === "line") drawLine(o, s, color, residRect, xScale, residScale, []);
+      else drawScatter(o, s, color, residRect, xScale, residScale, []);
+    });
+  }
 
   if (!hasData) {
     o.push(`<text x="${px(main.x + main.w / 2)}" y="${px(main.y + main.h / 2)}" text-anchor="middle" fill="#777777">no data</text>`);
   }
 
   // ---- axes
-  drawXAxis(o, main, xScale, !panel, panel ? undefined : spec.x?.label);
+  drawXAxis(o, main, xScale, lowest === main, lowest === main ? spec.x?.label : undefined);
   drawYAxis(o, main, yScale, "left", spec.y?.label);
+  if (residScale !== null) {
+    drawXAxis(o, residRect, xScale, lowest === residRect, lowest === residRect ? spec.x?.label : undefined);
+    drawYAxis(o, residRect, residScale, "left", resid?.y?.label);
+  }
   if (panel) {
     drawXAxis(o, lower, xScale, true, spec.x?.label);
-    drawYAxis(o, lower, bandScale, "left", undefined);
-    o.push(
-      `<text x="${px(lower.x + 6)}" y="${px(lower.y + 12)}" font-size="10" fill="#555555">${escapeXml(spec.bandLabel ?? "band response")}</text>`,
-    );
+    drawYAxis(o, lower, bandScale, "left", spec.bandLabel ?? "band response");
   }
   if (bandAxis) drawYAxis(o, main, bandScale, "right", spec.bandLabel ?? "band response");
 
   if (spec.title !== "") {
-    o.push(`<text x="${px(width / 2)}" y="24" text-anchor="middle" font-size="15" font-weight="bold">${escapeXml(spec.title)}</text>`);
+    o.push(`<text x="${px(width / 2)}" y="24" text-anchor="middle" font-size="15" font-weight="bold">${svgMarkup(spec.title, 15)}</text>`);
   }
 
   // ---- legend
-  const entries = series.length + bands.length;
-  if (spec.legend ?? entries >= 2) drawLegend(o, main, series, bands);
+  const legendBands = inline ? [] : bands;
+  const entries = series.length + legendBands.length;
+  if (spec.legend ?? entries >= 2) drawLegend(o, main, series, legendBands, series.length, spec.legendPosition ?? "auto", covered);
 
   o.push("</svg>");
   return o.join("\n") + "\n";
@@ -278,8 +376,18 @@ function checkSize(name: string, v: number): void {
   if (!(v >= 50 && v <= 20000)) throw new RangeError(`${name} must be a number in [50, 20000] px; got ${String(v)}`);
 }
 
-function checkAxis(name: "x" | "y", a: AxisSpec | undefined): void {
+function checkAxis(name: string, a: AxisSpec | undefined): void {
   if (a === undefined) return;
+  if (a.ticks !== undefined) {
+    for (const v of Array.from(a.ticks)) {
+      if (!Number.isFinite(v) || (a.scale === "log" && !(v > 0))) throw new RangeError(`${name}.ticks must hold finite numbers${a.scale === "log" ? " > 0 (log axis)" : ""}; got ${String(v)}`);
+    }
+    if (a.tickLabels !== undefined && a.tickLabels.length !== a.ticks.length) {
+      throw new RangeError(`${name}.tickLabels must have one label per tick (${a.ticks.length}); got ${a.tickLabels.length}`);
+    }
+  } else if (a.tickLabels !== undefined) {
+    throw new RangeError(`${name}.tickLabels needs ${name}.ticks`);
+  }
   const log = a.scale === "log";
   for (const key of ["min", "max"] as const) {
     const v = a[key];
@@ -296,17 +404,23 @@ function checkAxis(name: "x" | "y", a: AxisSpec | undefined): void {
   }
 }
 
-function checkSeries(s: Series, i: number): void {
+function checkSeries(s: Series, where: string): void {
   const n = s.x.length;
   const bad = (what: string, len: number): RangeError =>
-    new RangeError(`series[${i}] (${s.name}): ${what} must have the same length as x (${n}); got ${len}`);
+    new RangeError(`${where} (${s.name}): ${what} must have the same length as x (${n}); got ${len}`);
   if (s.y.length !== n) throw bad("y", s.y.length);
   if (s.type === "scatter") {
-    if (s.yErr !== undefined && s.yErr.length !== n) throw bad("yErr", s.yErr.length);
-    if (s.yErrLow !== undefined && s.yErrLow.length !== n) throw bad("yErrLow", s.yErrLow.length);
-    if (s.yErrHigh !== undefined && s.yErrHigh.length !== n) throw bad("yErrHigh", s.yErrHigh.length);
+    for (const key of ["yErr", "yErrLow", "yErrHigh", "xErr", "xErrLow", "xErrHigh"] as const) {
+      const a = s[key];
+      if (a !== undefined && a.length !== n) throw bad(key, a.length);
+    }
+    if (s.marker !== undefined && !MARKERS.includes(s.marker)) {
+      throw new RangeError(`${where} (${s.name}): marker must be one of ${MARKERS.join(", ")}; got ${String(s.marker)}`);
+    }
   }
 }
+
+const MARKERS: readonly MarkerShape[] = ["circle", "square", "diamond", "dash"];
 
 const valid = (v: number | undefined, log: boolean): v is number =>
   v !== undefined && Number.isFinite(v) && (!log || v > 0);
@@ -320,13 +434,23 @@ function collectX(
   let lo = Infinity;
   let hi = -Infinity;
   let count = 0;
+  const take = (v: number): void => {
+    if (!valid(v, log)) return;
+    if (v < lo) lo = v;
+    if (v > hi) hi = v;
+  };
   for (const s of series) {
     for (let i = 0; i < s.x.length; i++) {
       const x = s.x[i];
       if (!valid(x, log) || !valid(s.y[i], yLog)) continue;
-      if (x < lo) lo = x;
-      if (x > hi) hi = x;
+      take(x);
       count++;
+      if (s.type === "scatter") {
+        const eLo = s.xErrLow?.[i] ?? s.xErr?.[i];
+        const eHi = s.xErrHigh?.[i] ?? s.xErr?.[i];
+        if (eLo !== undefined && eLo >= 0 && Number.isFinite(eLo)) take(x - eLo);
+        if (eHi !== undefined && eHi >= 0 && Number.isFinite(eHi)) take(x + eHi);
+      }
     }
   }
   if (count === 0) {
@@ -417,16 +541,36 @@ function autoRange(
     if (max === undefined) hi += pad;
     if (!(hi - lo >= MIN_LINEAR_SPAN)) return [lo, lo + Math.max(1, Math.abs(lo) * 0.1)];
   }
-  const t = linearTicks(lo, hi, 6);
-  const step = t.major.length >= 2 ? (t.major[1] ?? 0) - (t.major[0] ?? 0) : hi - lo;
-  const nlo = min ?? Math.floor(lo / step + 1e-9) * step;
-  const nhi = max ?? Math.ceil(hi / step - 1e-9) * step;
+  // Round out to multiples of the 1-2-5 step, computed as decimal literals so that they are exact
+  // (a step taken as a difference of ticks, 1.2 − 1 = 0.19999999999999996, could end the range
+  // just short of the data); never cut off data.
+  const [m, p] = niceStep(hi - lo, 6);
+  const step = Number(`${m}e${p}`);
+  let nlo = min ?? Number(`${Math.floor(lo / step + 1e-9) * m}e${p}`);
+  let nhi = max ?? Number(`${Math.ceil(hi / step - 1e-9) * m}e${p}`);
+  if (min === undefined && nlo > lo) nlo = lo;
+  if (max === undefined && nhi < hi) nhi = hi;
   return Number.isFinite(nlo) && Number.isFinite(nhi) && nlo < nhi ? [nlo, nhi] : [lo, hi];
 }
 
-function makeScale(range: readonly [number, number], log: boolean, target: number): Scale {
+function makeScale(range: readonly [number, number], log: boolean, target: number, axis: AxisSpec | undefined): Scale {
   const [min, max] = range;
-  return { log, min, max, ticks: log ? logTicks(min, max) : linearTicks(min, max, target) };
+  const auto = log ? logTicks(min, max) : linearTicks(min, max, target);
+  const reverse = axis?.reverse === true;
+  if (axis?.ticks === undefined) return { log, reverse, min, max, ticks: auto };
+  // Explicit ticks: those inside the range are the labelled majors; the automatic ticks become minors.
+  const eps = 1e-9 * (log ? 1 : max - min);
+  const inside = (v: number): boolean => (log ? v >= min * (1 - 1e-9) && v <= max * (1 + 1e-9) : v >= min - eps && v <= max + eps);
+  const major: number[] = [];
+  const labels: string[] = [];
+  Array.from(axis.ticks).forEach((v, i) => {
+    if (!inside(v)) return;
+    major.push(v);
+    labels.push(axis.tickLabels?.[i] ?? String(Number(v.toPrecision(12))).replace("-", "−"));
+  });
+  const same = (a: number, b: number): boolean => Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
+  const minor = [...auto.major, ...auto.minor].filter((v) => !major.some((m) => same(m, v))).sort((a, b) => a - b);
+  return { log, reverse, min, max, ticks: { major, minor, labels } };
 }
 
 /** Position of `v` on the axis as a fraction of its length (0 at min, 1 at max), or NaN if not drawable. */
@@ -440,6 +584,7 @@ function norm(v: number, s: Scale): number {
     u = v / (s.max - s.min) - s.min / (s.max - s.min);
   }
   if (!Number.isFinite(u)) return NaN;
+  if (s.reverse) u = 1 - u;
   return u < -LIMIT ? -LIMIT : u > LIMIT ? LIMIT : u;
 }
 
@@ -506,7 +651,7 @@ function drawXAxis(o: string[], r: Rect, s: Scale, labels: boolean, title: strin
     });
   }
   if (title !== undefined && title !== "") {
-    o.push(`<text x="${px(r.x + r.w / 2)}" y="${px(base + 40)}" text-anchor="middle" font-size="13">${escapeXml(title)}</text>`);
+    o.push(`<text x="${px(r.x + r.w / 2)}" y="${px(base + 40)}" text-anchor="middle" font-size="13">${svgMarkup(title, 13)}</text>`);
   }
 }
 
@@ -525,11 +670,19 @@ function drawYAxis(o: string[], r: Rect, s: Scale, side: "left" | "right", title
     );
   });
   if (title !== undefined && title !== "") {
-    const x = side === "left" ? r.x - 60 : r.x + r.w + 46;
+    // One rotated line per "\n"-separated part; a title that would not fit the panel's height is drawn smaller.
+    const lines = title.split("\n");
+    const longest = Math.max(...lines.map((l) => [...markupPlain(l)].length));
+    const size = Math.max(9, Math.min(13, Math.floor(r.h / (0.56 * Math.max(1, longest)))));
+    const step = size + 2;
     const y = r.y + r.h / 2;
-    o.push(
-      `<text x="${px(x)}" y="${px(y)}" transform="rotate(-90 ${px(x)} ${px(y)})" text-anchor="middle" font-size="13"${faint}>${escapeXml(title)}</text>`,
-    );
+    lines.forEach((line, k) => {
+      const offset = (k - (lines.length - 1) / 2) * step;
+      const x = side === "left" ? r.x - 60 + offset : r.x + r.w + 46 + offset;
+      o.push(
+        `<text x="${px(x)}" y="${px(y)}" transform="rotate(-90 ${px(x)} ${px(y)})" text-anchor="middle" font-size="${size}"${faint}>${svgMarkup(line, size)}</text>`,
+      );
+    });
   }
 }
 
@@ -586,64 +739,116 @@ function pathData(pieces: readonly number[][]): string {
   return d;
 }
 
-function drawLine(o: string[], s: LineSeries, color: string, r: Rect, xs: Scale, ys: Scale): void {
-  const d = pathData(clippedPieces(s.x, s.y, r, xs, ys));
+/** Add points every ~6 px along each piece to `covered` (pixel x, y pairs), for the legend placement. */
+function coverPieces(pieces: readonly number[][], covered: number[]): void {
+  for (const p of pieces) {
+    for (let k = 0; k + 3 < p.length; k += 2) {
+      const x0 = p[k] ?? 0;
+      const y0 = p[k + 1] ?? 0;
+      const x1 = p[k + 2] ?? 0;
+      const y1 = p[k + 3] ?? 0;
+      const n = Math.min(200, Math.max(1, Math.ceil(Math.hypot(x1 - x0, y1 - y0) / 6)));
+      for (let j = 0; j <= n; j++) covered.push(x0 + ((x1 - x0) * j) / n, y0 + ((y1 - y0) * j) / n);
+    }
+  }
+}
+
+function drawLine(o: string[], s: LineSeries, color: string, r: Rect, xs: Scale, ys: Scale, covered: number[]): void {
+  const pieces = clippedPieces(s.x, s.y, r, xs, ys);
+  const d = pathData(pieces);
   if (d === "") return;
+  coverPieces(pieces, covered);
   const w = s.width !== undefined && s.width > 0 && Number.isFinite(s.width) ? s.width : 1.5;
   const dash = s.dashed === true ? ' stroke-dasharray="6 4"' : "";
   o.push(
-    `<path d="${d}" fill="none" stroke="${escapeXml(color)}" stroke-width="${px(w)}" stroke-linejoin="round"${dash}><title>${escapeXml(s.name)}</title></path>`,
+    `<path d="${d}" fill="none" stroke="${escapeXml(color)}" stroke-width="${px(w)}" stroke-linejoin="round"${dash}><title>${escapeXml(markupPlain(s.name))}</title></path>`,
   );
 }
 
-function drawScatter(o: string[], s: ScatterSeries, color: string, r: Rect, xs: Scale, ys: Scale): void {
+/**
+ * SVG markup of one marker centred at (cx, cy); `fill` and `stroke` come from
+ * the enclosing group. A hollow marker is an outline with a transparent
+ * inside, so a point drawn under it stays visible.
+ */
+function markerShape(shape: MarkerShape, cx: number, cy: number, rad: number, hollow: boolean): string {
+  const h = hollow ? ' fill="none" stroke-width="1.5"' : "";
+  switch (shape) {
+    case "square":
+      return `<rect x="${px(cx - rad)}" y="${px(cy - rad)}" width="${px(2 * rad)}" height="${px(2 * rad)}"${h}/>`;
+    case "diamond": {
+      const q = rad * 1.3;
+      return `<path d="M${px(cx)} ${px(cy - q)}L${px(cx + q)} ${px(cy)}L${px(cx)} ${px(cy + q)}L${px(cx - q)} ${px(cy)}Z"${h}/>`;
+    }
+    case "dash":
+      return `<path d="M${px(cx - 1.6 * rad)} ${px(cy)}H${px(cx + 1.6 * rad)}" fill="none" stroke-width="2"/>`;
+    default:
+      return `<circle cx="${px(cx)}" cy="${px(cy)}" r="${px(rad)}"${h}/>`;
+  }
+}
+
+function drawScatter(o: string[], s: ScatterSeries, color: string, r: Rect, xs: Scale, ys: Scale, covered: number[]): void {
   const rad = s.radius !== undefined && s.radius > 0 && Number.isFinite(s.radius) ? s.radius : 3;
+  const shape = s.marker ?? "circle";
+  const hollow = s.hollow === true;
   const bars: string[] = [];
   const dots: string[] = [];
+  const okErr = (e: number | undefined): e is number => e !== undefined && e >= 0 && Number.isFinite(e);
+  /** Normalised ends of an error bar along one axis; off-axis ends are clipped (and lose their cap). */
+  const ends = (value: number, u: number, eLo: number | undefined, eHi: number | undefined, sc: Scale): { a: number; b: number; capA: boolean; capB: boolean } | null => {
+    if (!okErr(eLo) && !okErr(eHi)) return null;
+    // "a" is the end at value − eLo, "b" at value + eHi; on a reversed axis a lies above b in u.
+    let a = okErr(eLo) ? norm(value - eLo, sc) : u;
+    if (Number.isNaN(a)) a = sc.reverse ? 1 : 0; // ≤ 0 on a log axis: off the low end
+    let b = okErr(eHi) ? norm(value + eHi, sc) : u;
+    if (Number.isNaN(b)) b = sc.reverse ? 0 : 1;
+    const capA = okErr(eLo) && a >= 0 && a <= 1;
+    const capB = okErr(eHi) && b >= 0 && b <= 1;
+    return { a: Math.min(1, Math.max(0, a)), b: Math.min(1, Math.max(0, b)), capA, capB };
+  };
+  const cap = rad + 1;
   for (let i = 0; i < s.x.length; i++) {
-    const u = norm(s.x[i] ?? NaN, xs);
-    const v = norm(s.y[i] ?? NaN, ys);
+    const x = s.x[i] ?? NaN;
+    const y = s.y[i] ?? NaN;
+    const u = norm(x, xs);
+    const v = norm(y, ys);
     if (!(u >= 0 && u <= 1 && v >= 0 && v <= 1)) continue; // invalid or outside the ranges: omitted
     const cx = r.x + u * r.w;
     const cy = r.y + (1 - v) * r.h;
-    dots.push(`<circle cx="${px(cx)}" cy="${px(cy)}" r="${px(rad)}"/>`);
-    const y = s.y[i] ?? NaN;
-    const eLo = s.yErrLow?.[i] ?? s.yErr?.[i];
-    const eHi = s.yErrHigh?.[i] ?? s.yErr?.[i];
-    const okErr = (e: number | undefined): e is number => e !== undefined && e >= 0 && Number.isFinite(e);
-    if (!okErr(eLo) && !okErr(eHi)) continue;
-    // Lower end: a value ≤ 0 on a log axis is off the bottom → clipped to the axis.
-    let vLo = okErr(eLo) ? norm(y - eLo, ys) : v;
-    if (Number.isNaN(vLo)) vLo = 0;
-    let vHi = okErr(eHi) ? norm(y + eHi, ys) : v;
-    if (Number.isNaN(vHi)) vHi = 1;
-    const capLo = vLo >= 0;
-    const capHi = vHi <= 1;
-    vLo = Math.max(0, vLo);
-    vHi = Math.min(1, vHi);
-    const yLo = r.y + (1 - vLo) * r.h;
-    const yHi = r.y + (1 - vHi) * r.h;
-    let d = `M${px(cx)} ${px(yLo)}V${px(yHi)}`;
-    const cap = rad + 1;
-    if (capLo && okErr(eLo)) d += `M${px(cx - cap)} ${px(yLo)}h${px(2 * cap)}`;
-    if (capHi && okErr(eHi)) d += `M${px(cx - cap)} ${px(yHi)}h${px(2 * cap)}`;
-    bars.push(d);
+    dots.push(markerShape(shape, cx, cy, rad, hollow));
+    covered.push(cx, cy);
+    const ey = ends(y, v, s.yErrLow?.[i] ?? s.yErr?.[i], s.yErrHigh?.[i] ?? s.yErr?.[i], ys);
+    if (ey !== null) {
+      const ya = r.y + (1 - ey.a) * r.h;
+      const yb = r.y + (1 - ey.b) * r.h;
+      let d = `M${px(cx)} ${px(ya)}V${px(yb)}`;
+      if (ey.capA) d += `M${px(cx - cap)} ${px(ya)}h${px(2 * cap)}`;
+      if (ey.capB) d += `M${px(cx - cap)} ${px(yb)}h${px(2 * cap)}`;
+      bars.push(d);
+    }
+    const ex = ends(x, u, s.xErrLow?.[i] ?? s.xErr?.[i], s.xErrHigh?.[i] ?? s.xErr?.[i], xs);
+    if (ex !== null) {
+      const xa = r.x + ex.a * r.w;
+      const xb = r.x + ex.b * r.w;
+      let d = `M${px(xa)} ${px(cy)}H${px(xb)}`;
+      if (ex.capA) d += `M${px(xa)} ${px(cy - cap)}v${px(2 * cap)}`;
+      if (ex.capB) d += `M${px(xb)} ${px(cy - cap)}v${px(2 * cap)}`;
+      bars.push(d);
+    }
   }
   const c = escapeXml(color);
-  o.push(`<g fill="${c}" stroke="${c}"><title>${escapeXml(s.name)}</title>`);
+  o.push(`<g fill="${c}" stroke="${c}"><title>${escapeXml(markupPlain(s.name))}</title>`);
   if (bars.length > 0) o.push(`<path d="${bars.join("")}" fill="none" stroke-width="1"/>`);
   o.push(...dots);
   o.push("</g>");
 }
 
-function drawBand(o: string[], b: BandCurve, color: string, r: Rect, xs: Scale): void {
+function drawBand(o: string[], b: BandCurve, color: string, r: Rect, xs: Scale, ys: Scale, inlineLabel: boolean): void {
   let peak = 0;
   for (let i = 0; i < b.response.length; i++) {
     const v = b.response[i] ?? NaN;
     if (Number.isFinite(v) && v > peak) peak = v;
   }
   if (!(peak > 0)) return;
-  const ys: Scale = { log: false, min: 0, max: 1, ticks: { major: [], minor: [], labels: [] } };
   const norm01 = Array.from({ length: b.response.length }, (_, i) => {
     const v = b.response[i] ?? NaN;
     return Number.isFinite(v) ? Math.max(0, v / peak) : NaN;
@@ -660,26 +865,72 @@ function drawBand(o: string[], b: BandCurve, color: string, r: Rect, xs: Scale):
   }
   const c = escapeXml(color);
   o.push(
-    `<path d="${fill}" fill="${c}" fill-opacity="0.12" stroke="${c}" stroke-opacity="0.5" stroke-width="1"><title>${escapeXml(b.name)}</title></path>`,
+    `<path d="${fill}" fill="${c}" fill-opacity="0.25" stroke="${c}" stroke-width="1.2"><title>${escapeXml(markupPlain(b.name))}</title></path>`,
   );
+  if (inlineLabel) {
+    // Centre of the part at or above half maximum, just above the curve's peak (y = 1).
+    let lo = NaN;
+    let hi = NaN;
+    for (let i = 0; i < norm01.length; i++) {
+      const u = norm(b.x[i] ?? NaN, xs);
+      if (!((norm01[i] ?? 0) >= 0.5) || !(u >= 0 && u <= 1)) continue;
+      lo = Number.isNaN(lo) ? u : Math.min(lo, u);
+      hi = Number.isNaN(hi) ? u : Math.max(hi, u);
+    }
+    if (Number.isNaN(lo)) return;
+    const x = r.x + ((lo + hi) / 2) * r.w;
+    const y = r.y + (1 - norm(1, ys)) * r.h - 2;
+    o.push(`<text x="${px(x)}" y="${px(y)}" text-anchor="middle" font-size="10" fill="#333333">${svgMarkup(b.name, 10)}</text>`);
+  }
 }
 
-function drawLegend(o: string[], r: Rect, series: readonly Series[], bands: readonly BandCurve[]): void {
+function drawLegend(
+  o: string[],
+  r: Rect,
+  series: readonly Series[],
+  bands: readonly BandCurve[],
+  bandColorOffset: number,
+  position: NonNullable<ChartSpec["legendPosition"]>,
+  covered: readonly number[],
+): void {
   const names = [...series.map((s) => s.name), ...bands.map((b) => b.name)];
   if (names.length === 0) return;
   const rowH = 16;
-  const longest = Math.max(...names.map((n) => [...n].length));
+  const longest = Math.max(...names.map((n) => [...markupPlain(n)].length));
   const w = Math.min(r.w - 8, 34 + longest * 6.5);
   const h = names.length * rowH + 8;
-  const x0 = r.x + r.w - w - 6;
-  const y0 = r.y + 6;
+  const corners = {
+    "top-right": [r.x + r.w - w - 6, r.y + 6],
+    "top-left": [r.x + 6, r.y + 6],
+    "bottom-right": [r.x + r.w - w - 6, r.y + r.h - h - 6],
+    "bottom-left": [r.x + 6, r.y + r.h - h - 6],
+  } as const;
+  let pick: keyof typeof corners = position === "auto" ? "top-right" : position;
+  if (position === "auto") {
+    // The corner whose box (with a 4 px margin) covers the fewest drawn points; ties keep the first in this order.
+    let best = Infinity;
+    for (const k of ["top-right", "top-left", "bottom-right", "bottom-left"] as const) {
+      const [bx, by] = corners[k];
+      let n = 0;
+      for (let i = 0; i + 1 < covered.length; i += 2) {
+        const px0 = covered[i] ?? 0;
+        const py0 = covered[i + 1] ?? 0;
+        if (px0 >= bx - 4 && px0 <= bx + w + 4 && py0 >= by - 4 && py0 <= by + h + 4) n++;
+      }
+      if (n < best) {
+        best = n;
+        pick = k;
+      }
+    }
+  }
+  const [x0, y0] = corners[pick];
   o.push(`<g font-size="11">`);
   o.push(`<rect x="${px(x0)}" y="${px(y0)}" width="${px(w)}" height="${px(h)}" fill="#ffffff" fill-opacity="0.85" stroke="#bbbbbb"/>`);
   let row = 0;
   const entry = (swatch: string, name: string): void => {
     const y = y0 + 4 + row * rowH + rowH / 2;
     o.push(swatch.replaceAll("{Y}", px(y)));
-    o.push(`<text x="${px(x0 + 28)}" y="${px(y + 4)}">${escapeXml(name)}</text>`);
+    o.push(`<text x="${px(x0 + 28)}" y="${px(y + 4)}">${svgMarkup(name, 11)}</text>`);
     row++;
   };
   series.forEach((s, i) => {
@@ -688,13 +939,22 @@ function drawLegend(o: string[], r: Rect, series: readonly Series[], bands: read
       const dash = s.dashed === true ? ' stroke-dasharray="6 4"' : "";
       entry(`<line x1="${px(x0 + 6)}" y1="{Y}" x2="${px(x0 + 22)}" y2="{Y}" stroke="${c}" stroke-width="2"${dash}/>`, s.name);
     } else {
-      entry(`<circle cx="${px(x0 + 14)}" cy="{Y}" r="3" fill="${c}"/>`, s.name);
+      // The same marker as plotted (shape, size up to 5 px, filled or hollow), with a bar when the series has error bars.
+      const rad = Math.min(5, s.radius !== undefined && s.radius > 0 && Number.isFinite(s.radius) ? s.radius : 3);
+      const y = y0 + 4 + row * rowH + rowH / 2;
+      const hasY = s.yErr !== undefined || s.yErrLow !== undefined || s.yErrHigh !== undefined;
+      const hasX = s.xErr !== undefined || s.xErrLow !== undefined || s.xErrHigh !== undefined;
+      let bar = "";
+      if (hasY) bar += `M${px(x0 + 14)} ${px(y - 6)}V${px(y + 6)}`;
+      if (hasX) bar += `M${px(x0 + 6)} ${px(y)}H${px(x0 + 22)}`;
+      const barPath = bar !== "" ? `<path d="${bar}" fill="none" stroke-width="1"/>` : "";
+      entry(`<g fill="${c}" stroke="${c}">${barPath}${markerShape(s.marker ?? "circle", x0 + 14, y, rad, s.hollow === true)}</g>`, s.name);
     }
   });
   bands.forEach((b, i) => {
-    const c = escapeXml(b.color ?? PALETTE[(series.length + i) % PALETTE.length] ?? "#000");
+    const c = escapeXml(b.color ?? PALETTE[(bandColorOffset + i) % PALETTE.length] ?? "#000");
     const y = y0 + 4 + row * rowH + rowH / 2;
-    entry(`<rect x="${px(x0 + 6)}" y="${px(y - 5)}" width="16" height="10" fill="${c}" fill-opacity="0.2" stroke="${c}" stroke-opacity="0.5"/>`, b.name);
+    entry(`<rect x="${px(x0 + 6)}" y="${px(y - 5)}" width="16" height="10" fill="${c}" fill-opacity="0.25" stroke="${c}"/>`, b.name);
   });
   o.push(`</g>`);
 }

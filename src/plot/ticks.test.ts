@@ -31,6 +31,18 @@ describe("log10 ticks", () => {
     expect(t.minor).toEqual([3, 4, 6, 7, 8]);
   });
 
+  it("labels 1, 2 and 5 × each decade over less than two decades (0.2–5 µm, 2500–40 000 K)", () => {
+    const w = logTicks(0.2, 5);
+    expect(w.major).toEqual([0.2, 0.5, 1, 2, 5]);
+    expect(w.labels).toEqual(["0.2", "0.5", "1", "2", "5"]);
+    expect(w.minor).toEqual([0.3, 0.4, 0.6, 0.7, 0.8, 0.9, 3, 4]);
+    const t = logTicks(2500, 40000);
+    expect(t.major).toEqual([5000, 10000, 20000]);
+    expect(t.labels).toEqual(["5000", "10000", "20000"]);
+    // Exactly two decades keeps decade labels only.
+    expect(logTicks(0.1, 10).major).toEqual([0.1, 1, 10]);
+  });
+
   it("falls back to linear ticks in a very narrow range", () => {
     const t = logTicks(3, 4);
     expect(t.major).toEqual([3, 3.2, 3.4, 3.6, 3.8, 4]);
@@ -63,8 +75,19 @@ describe("log10 ticks", () => {
           expect(v).toBeLessThanOrEqual(max * (1 + 1e-9));
         }
         for (let i = 1; i < t.major.length; i++) expect(t.major[i]).toBeGreaterThan(t.major[i - 1] ?? -Infinity);
-        if (span >= 1.0001) {
-          // At least one full decade: every major is 10^n (to printing precision).
+        if (span < 1.9999) {
+          // Less than two decades: the majors are the 1, 2, 5 × 10^n inside the range (when there are two or more).
+          const expected: number[] = [];
+          for (let e = Math.floor(lg) - 1; e <= Math.ceil(lg + span) + 1; e++) {
+            for (const m of [1, 2, 5]) {
+              const v = Number(`${m}e${e}`);
+              if (v >= min * (1 - 1e-9) && v <= max * (1 + 1e-9)) expected.push(v);
+            }
+          }
+          if (expected.length >= 2) expect(t.major).toEqual(expected);
+        }
+        if (span >= 2.0001) {
+          // Two decades or more: every major is 10^n (to printing precision).
           for (const v of t.major) {
             const e = Math.log10(v);
             expect(Math.abs(e - Math.round(e))).toBeLessThan(1e-12);

@@ -148,9 +148,10 @@ function linearLabel(v: number, p: number, biggest: number): string {
 /**
  * Log10 ticks on [min, max] (both > 0): majors at the decades inside the
  * range, minors at 2…9 × each decade. Over more than 10 decades the majors
- * are thinned to every k-th decade (minors at the skipped decades); over less
- * than about a decade, 2× and 5× are labelled too, and if that still gives
- * fewer than two labels, linear 1-2-5 ticks are used instead.
+ * are thinned to every k-th decade (minors at the skipped decades); over
+ * less than two decades, 2× and 5× are labelled too (a short log axis has too
+ * few decades to read values from), and if that still gives fewer than two
+ * labels, linear 1-2-5 ticks are used instead.
  *
  * Decade labels are plain numbers (`0.001` … `10000`) when every labelled
  * decade lies in 10⁻³…10⁴, otherwise `10ⁿ` with a superscript exponent.
@@ -182,8 +183,8 @@ export function logTicks(min: number, max: number): Ticks {
   const majorExp: number[] = [];
   for (let e = d0; e <= d1; e++) if (((e % k) + k) % k === 0) majorExp.push(e);
 
-  if (k === 1 && majorExp.length < 2) {
-    // Less than a decade: label 1, 2 and 5 × 10^e too.
+  if (k === 1 && (majorExp.length < 2 || span < 2 - 1e-9)) {
+    // Less than two decades: label 1, 2 and 5 × 10^e.
     const major: number[] = [];
     const labels: string[] = [];
     const minor: number[] = [];

@@ -48,3 +48,102 @@ export function px(v: number): string {
   const r = Math.round(v * 100) / 100;
   return r === 0 ? "0" : String(r);
 }
+
+// ---------------------------------------------------------------------------
+// Sub- and superscript markup
+
+/** One run of marked-up text: normal, subscript or superscript. */
+interface Run {
+  readonly text: string;
+  readonly kind: "normal" | "sub" | "sup";
+}
+
+/**
+ * Split text with `_{…}` (subscript) and `^{…}` (superscript) markup into
+ * runs. Only the braced forms are markup: a lone `_` or `^`, or one without
+ * a closing brace, is kept as a literal character. Braces do not nest.
+ */
+function markupRuns(text: string): Run[] {
+  const runs: Run[] = [];
+  let normal = "";
+  let i = 0;
+  while (i < text.length) {
+    const c = text[i];
+    if ((c === "_" || c === "^") && text[i + 1] === "{") {
+      const close = text.indexOf("}", i + 2);
+      if (close !== -1) {
+        if (normal !== "") runs.push({ text: normal, kind: "normal" });
+        normal = "";
+        const inner = text.slice(i + 2, close);
+        if (inner !== "") runs.push({ text: inner, kind: c === "_" ? "sub" : "sup" });
+        i = close + 1;
+        continue;
+      }
+    }
+    normal += c;
+    i++;
+  }
+  if (normal !== "") runs.push({ text: normal, kind: "normal" });
+  return runs;
+}
+
+/**
+ * Text with `_{…}`/`^{…}` markup as plain text for places that cannot show
+ * sub/superscripts (`<title>`, `<desc>`, tooltips): the braces are dropped
+ * and the `_`/`^` kept, so `T_{eff}` reads `T_eff`.
+ *
+ * @example
+ * ```ts
+ * import { markupPlain } from "starlume";
+ * markupPlain("T_{eff} [K]"); // "T_eff [K]"
+ * ```
+ */
+export function markupPlain(text: string): string {
+  return markupRuns(text)
+    .map((r) => (r.kind === "sub" ? `_${r.text}` : r.kind === "sup" ? `^${r.text}` : r.text))
+    .join("");
+}
+
+/**
+ * Text with `_{…}`/`^{…}` markup as escaped SVG character data, the
+ * sub/superscripts as `<tspan>`s shifted with `dy` (supported by every SVG
+ * renderer, unlike `baseline-shift`) at 75 % size. Everything is escaped with
+ * {@link escapeXml}; the result goes inside a `<text>` element whose font
+ * size is `fontSize` px.
+ *
+ * @internal
+ * @example
+ * ```text
+ * svgMarkup("f_{λ}", 12); // 'f<tspan dy="3.6" font-size="9">λ</tspan>'
+ * ```
+ */
+export function svgMarkup(text: string, fontSize: number): string {
+  const runs = markupRuns(text);
+  const shift = { normal: 0, sub: 0.3 * fontSize, sup: -0.4 * fontSize };
+  let at = 0;
+  let out = "";
+  for (const r of runs) {
+    const want = shift[r.kind];
+    const dy = want - at;
+    at = want;
+    const size = r.kind === "normal" ? "" : ` font-size="${px(0.75 * fontSize)}"`;
+    if (dy === 0 && size === "") out += escapeXml(r.text);
+    else out += `<tspan${dy !== 0 ? ` dy="${px(dy)}"` : ""}${size}>${escapeXml(r.text)}</tspan>`;
+  }
+  return out;
+}
+
+/**
+ * Text with `_{…}`/`^{…}` markup as escaped HTML with `<sub>`/`<sup>`.
+ *
+ * @example
+ * ```ts
+ * import { htmlMarkup } from "starlume";
+ * htmlMarkup("T_{eff} [K] <b>"); // "T<sub>eff</sub> [K] &lt;b&gt;"
+ * ```
+ */
+export function htmlMarkup(text: string): string {
+  return markupRuns(text)
+    .map((r) => (r.kind === "normal" ? escapeXml(r.text) : `<${r.kind}>${escapeXml(r.text)}</${r.kind}>`))
+    .join("");
+}

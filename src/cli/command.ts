@@ -1,0 +1,64 @@
+/**
+ * The shape of a command and its help text.
+ *
+ * @module
+ */
+import { formatOptions, type OptionSpec, type ParsedArgs } from "./args";
+import type { CliIO } from "./context";
+
+/** One example in a command's help: the arguments after `starlume` and what it does. */
+export interface Example {
+  readonly args: readonly string[];
+  readonly note: string;
+}
+
+/** A command of the tool. */
+export interface Command {
+  readonly name: string;
+  /** One line for the tool's overview. */
+  readonly summary: string;
+  /** Usage line after `starlume <name>`, e.g. `[options] FILE`. */
+  readonly usage: string;
+  /** Paragraphs after the usage line. */
+  readonly description: string;
+  readonly options: readonly OptionSpec[];
+  /** Examples shown in `--help`; the test suite runs each of them. */
+  readonly examples: readonly Example[];
+  run(args: ParsedArgs, io: CliIO): Promise<number>;
+}
+
+/** Shell-quote an argument for display. */
+export function shellQuote(arg: string): string {
+  return /^[A-Za-z0-9_./:=,+@%^-]+$/.test(arg) ? arg : `'${arg.replace(/'/g, `'\\''`)}'`;
+}
+
+/** The exit-code paragraph shared by all help texts. */
+export const EXIT_CODES_HELP = `Exit codes:
+  0  success: every row processed
+  1  some rows were rejected (each is kept in the output with status and reason,
+     and reported on stderr with its line number)
+  2  usage error: unknown command or option, bad option value, unreadable file or
+     header, incompatible units
+  3  internal error (a bug; please report it with the command line)`;
+
+/** Full help text of a command. */
+export function commandHelp(c: Command): string {
+  const examples = c.examples.map((e) => `  # ${e.note}\n  starlume ${c.name} ${e.args.map(shellQuote).join(" ")}`).join("\n\n");
+  const help = { name: "help", short: "h", kind: "flag", help: "show this help" } as const;
+  return [
+    `starlume ${c.name} — ${c.summary}`,
+    "",
+    `Usage: starlume ${c.name} ${c.usage}`,
+    "",
+    c.description.trim(),
+    "",
+    "Options:",
+    formatOptions([...c.options, help]),
+    "",
+    "Examples:",
+    examples,
+    "",
+    EXIT_CODES_HELP,
+    "",
+  ].join("\n");
+}

@@ -1,0 +1,55 @@
+/**
+ * What every command receives: the streams it may use (injected, so commands
+ * run in tests without spawning a process), the working directory, the exit
+ * codes and the error type for usage mistakes.
+ *
+ * @module
+ */
+import type { ProgressStream } from "./io/progress";
+import type { TextSink } from "./io/write";
+
+/** An output stream: what `process.stdout` / `process.stderr` and the test doubles provide. */
+export interface OutStream extends TextSink {
+  readonly isTTY?: boolean;
+}
+
+// An OutStream is also what the progress line writes to.
+const _progressCompatible = (s: OutStream): ProgressStream => s;
+void _progressCompatible;
+
+/** The process surroundings of one run of the tool. */
+export interface CliIO {
+  /** Results (tables, converted values). */
+  readonly stdout: OutStream;
+  /** Messages: rejected rows with their line numbers, notes, the progress line (TTY only). */
+  readonly stderr: OutStream;
+  /** Standard input, read when the input file is `-`. */
+  readonly stdin?: AsyncIterable<string | Uint8Array>;
+  /** Directory that relative paths are resolved against (default `process.cwd()`). */
+  readonly cwd?: string;
+}
+
+/** Exit codes of the tool (documented in `--help` and docs/guides/command-line.md). */
+export const EXIT = {
+  /** Every row was processed. */
+  OK: 0,
+  /** The run finished, but some rows were rejected (each kept in the output with its reason). */
+  ROWS_REJECTED: 1,
+  /** The command could not run: unknown command or option, bad option value, unreadable file or header. */
+  USAGE: 2,
+  /** A bug: an unexpected exception (reported on stderr with its stack). */
+  INTERNAL: 3,
+} as const;
+
+/** A mistake in how the tool was called; reported on stderr with exit code 2. */
+export class UsageError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = "UsageError";
+  }
+}
+
+/** Write one line to a stream (without waiting: messages are small). */
+export function say(stream: OutStream, text: string): void {
+  stream.write(text.endsWith("\n") ? text : `${text}\n`);
+}

@@ -1,0 +1,90 @@
+/**
+ * The one place where the command-line tool calls the SED fitter
+ * (src/fit): one star's photometry in, the fit and (with a distance or
+ * parallax) radius and luminosity out, all in SI. Keeping the calls here
+ * means a change of the fitter's API touches one file.
+ *
+ * @module
+ */
+import {
+  fitBlackbody,
+  stellarParametersFromFit,
+  type BandObservation,
+  type BlackbodyFit,
+  type BlackbodyFitOptions,
+  type StellarParameters,
+} from "../fit/index";
+import type { Angle, Length, SpectralFluxPerFrequency, SpectralFluxPerWavelength } from "../quantity/aliases";
+import { SI } from "../quantity/system";
+import type { CliBand } from "./bands";
+
+/** One band's measurement for {@link fitStar}, in SI (W m⁻³, W m⁻² Hz⁻¹) or AB mag. */
+export interface StarMeasurement {
+  readonly band: CliBand;
+  readonly kind: "flambda" | "fnu" | "abmag";
+  readonly value: number;
+  readonly sigma: number;
+}
+
+/** A distance or parallax in SI (m or rad) with its σ. */
+export type StarDistance = { readonly kind: "distance" | "parallax"; readonly value: number; readonly sigma: number };
+
+/** Settings of the fit (passed through to the fitter). */
+export interface StarFitSettings {
+  /** Fit CCM89 extinction A_V with this R_V; omit for no extinction. */
+  readonly extinctionRV?: number;
+}
+
+/** What {@link fitStar} returns. */
+export interface StarFitResult {
+  readonly fit: BlackbodyFit<"SI">;
+  /** Radius and luminosity, when a distance or parallax was given. */
+  readonly stellar: StellarParameters<"SI"> | null;
+}
+
+/**
+ * Fit a blackbody to one star's bands with the typed fitter, then derive R
+ * and L when a distance or parallax is given.
+ *
+ * @throws RangeError from the fitter (naming the observation) for invalid input
+ */
+export function fitStar(measurements: readonly StarMeasurement[], distance: StarDistance | null, settings: StarFitSettings): StarFitResult {
+  const observations: BandObservation<"SI">[] = measurements.map((m) => {
+    switch (m.kind) {
+      case "flambda":
+        return {
+          band: m.band.band,
+          fluxPerWavelength: m.value as SpectralFluxPerWavelength<"SI">,
+          sigma: m.sigma as SpectralFluxPerWavelength<"SI">,
+        };
+      case "fnu":
+        return {
+          band: m.band.band,
+          fluxPerFrequency: m.value as SpectralFluxPerFrequency<"SI">,
+          sigma: m.sigma as SpectralFluxPerFrequency<"SI">,
+        };
+      case "abmag":
+        return { band: m.band.band, abMagnitude: m.value, sigma: m.sigma };
+    }
+  });
+  const options: BlackbodyFitOptions = settings.extinctionRV !== undefined ? { extinction: { rV: settings.extinctionRV } } : {};
+  const fit = fitBlackbody(SI, observations, options);
+  let stellar: StellarParameters<"SI"> | null = null;
+  if (distance !== null) {
+    stellar = stellarParametersFromFit(
+      SI,
+      fit,
+      distance.kind === "distance"
+        ? { distance: distance.value as Length<"SI">, sigma: distance.sigma as Length<"SI"> }
+        : { parallax: distance.value as Angle, sigma: distance.sigma as Angle },
+    );
+  }
+  return { fit, stellar };
+}
+
+/** The names of the fit's raised flags, e.g. `["poorFit"]`. */
+export function raisedFlags(fit: BlackbodyFit<"SI">): string[] {
+  return Object.entries(fit.flags)
+    .filter(([, v]) => v === true)
+    .map(([k]) => k);
+}

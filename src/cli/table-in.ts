@@ -1,0 +1,203 @@
+/**
+ * Reading a table for a command: open the file (or stdin), pick CSV or JSON
+ * Lines (by `--input-format` or the file extension), parse the header with
+ * the `name [unit]` convention, and yield the data rows one at a time with
+ * their line numbers. Malformed rows are yielded too (as `bad` items with
+ * the reason), so that a command can keep every input row in its output.
+ *
+ * @module
+ */
+import { createReadStream } from "node:fs";
+import { stat } from "node:fs/promises";
+import { extname, resolve } from "node:path";
+import { UsageError, type CliIO } from "./context";
+import { readCsv } from "./io/csv-read";
+import { parseColumnHeader, parseHeader, type ColumnSpec } from "./io/header";
+import { readJsonl } from "./io/jsonl-read";
+
+/** Input table formats. */
+export type InputFormat = "csv" | "jsonl";
+
+/** A table cell as read: CSV gives text, JSON Lines numbers, text or null. */
+export type InCell = string | number | null;
+
+/** One data row, or a row that could not be read. */
+export type TableItem =
+  | { readonly kind: "row"; readonly line: number; readonly cells: readonly InCell[] }
+  | { readonly kind: "bad"; readonly line: number; readonly message: string };
+
+/** An open table: its columns and an iterator over its rows. */
+export interface OpenTable {
+  readonly columns: readonly ColumnSpec[];
+  readonly items: AsyncIterator<TableItem>;
+  /** Where the rows come from, for messages (`stars.csv`, `stdin`). */
+  readonly source: string;
+}
+
+/** Choose the format from an explicit option or the file name. */
+export function inputFormatFor(path: string, explicit: string | undefined): InputFormat {
+  if (explicit !== undefined) {
+    if (explicit !== "csv" && explicit !== "jsonl") throw new UsageError(`--input-format must be csv or jsonl; got '${explicit}'`);
+    return explicit;
+  }
+  const ext = extname(path).toLowerCase();
+  if (ext === ".jsonl" || ext === ".ndjson") return "jsonl";
+  if (ext === ".csv" || ext === ".txt" || path === "-") return "csv";
+  throw new UsageError(`cannot tell the format of '${path}' from its extension; use --input-format csv or --input-format jsonl`);
+}
+
+/** Open an input file (or stdin for `-`) as a byte/text source. */
+export async function openSource(path: string, io: CliIO): Promise<AsyncIterable<string | Uint8Array>> {
+  if (path === "-") {
+    if (io.stdin === undefined) throw new UsageError("no standard input available for '-'");
+    return io.stdin;
+  }
+  const full = resolve(io.cwd ?? process.cwd(), path);
+  try {
+    const s = await stat(full);
+    if (!s.isFile()) throw new UsageError(`input '${path}' is not a file`);
+  } catch (e) {
+    if (e instanceof UsageError) throw e;
+    const code = (e as NodeJS.ErrnoException).code ?? "";
+    throw new UsageError(`cannot read input file '${path}'${code !== "" ? ` (${code})` : ""}`);
+  }
+  return createReadStream(full, { encoding: "utf8", highWaterMark: 1 << 16 });
+}
+
+/**
+ * Open a table and read its header.
+ *
+ * @throws UsageError when the file cannot be read, is empty, or its header
+ *   breaks the `name [unit]` rules (the message names the column)
+ */
+export async function openTable(path: string, format: InputFormat, io: CliIO): Promise<OpenTable> {
+  const source = await openSource(path, io);
+  const label = path === "-" ? "stdin" : path;
+  return format === "csv" ? openCsv(source, label) : openJsonl(source, label);
+}
+
+async function openCsv(source: AsyncIterable<string | Uint8Array>, label: string): Promise<OpenTable> {
+  const it = readCsv(source);
+  const first = await it.next();
+  if (first.done === true) throw new UsageError(`${label}: empty table (no header line)`);
+  if (first.value.kind === "error") throw new UsageError(`${label}: header ${first.value.message}`);
+  let columns: ColumnSpec[];
+  try {
+    columns = parseHeader(first.value.fields);
+  } catch (e) {
+    throw new UsageError(`${label}: ${(e as Error).message}`);
+  }
+  const n = columns.length;
+  async function* rows(): AsyncGenerator<TableItem> {
+    for (;;) {
+      const r = await it.next();
+      if (r.done === true) return;
+      const item = r.value;
+      if (item.kind === "error") {
+        yield { kind: "bad", line: item.line, message: item.message };
+      } else if (item.fields.length !== n) {
+        yield { kind: "bad", line: item.line, message: `line ${item.line}: expected ${n} fields (as in the header), got ${item.fields.length}` };
+      } else {
+        yield { kind: "row", line: item.line, cells: item.fields };
+      }
+    }
+  }
+  return { columns, items: rows(), source: label };
+}
+
+async function openJsonl(source: AsyncIterable<string | Uint8Array>, label: string): Promise<OpenTable> {
+  const it = readJsonl(source);
+  // The first readable object fixes the columns (its keys, in order); bad lines before it are kept.
+  const early: TableItem[] = [];
+  let first: { line: number; value: Record<string, unknown> } | undefined;
+  for (;;) {
+    const r = await it.next();
+    if (r.done === true) break;
+    if (r.value.kind === "error") {
+      early.push({ kind: "bad", line: r.value.line, message: r.value.message });
+      continue;
+    }
+    first = { line: r.value.line, value: r.value.value };
+    break;
+  }
+  if (first === undefined) throw new UsageError(`${label}: no JSON object found (JSON Lines needs one object per line)`);
+  const keys = Object.keys(first.value);
+  let columns: ColumnSpec[];
+  try {
+    columns = parseHeader(keys);
+  } catch (e) {
+    throw new UsageError(`${label}: keys of the object on line ${first.line}: ${(e as Error).message.replace(/^header /, "")}`);
+  }
+  const index = new Map<string, number>();
+  keys.forEach((k, i) => index.set(k, i));
+  const toRow = (line: number, value: Record<string, unknown>): TableItem => {
+    const cells: InCell[] = new Array<InCell>(keys.length).fill(null);
+    for (const [k, v] of Object.entries(value)) {
+      const i = index.get(k);
+      if (i === undefined) {
+        let name = k;
+        try {
+          name = parseColumnHeader(k).name;
+        } catch {
+          /* keep the raw key */
+        }
+        return { kind: "bad", line, message: `line ${line}: key '${name}' is not a column (the columns are the keys of the first object, line ${first.line})` };
+      }
+      if (v === null || typeof v === "number" || typeof v === "string") cells[i] = v;
+      else return { kind: "bad", line, message: `line ${line}: value of '${k}' must be a number, a string or null; got ${Array.isArray(v) ? "an array" : typeof v}` };
+    }
+    return { kind: "row", line, cells };
+  };
+  const firstRow = toRow(first.line, first.value);
+  async function* rows(): AsyncGenerator<TableItem> {
+    yield* early;
+    yield firstRow;
+    for (;;) {
+      const r = await it.next();
+      if (r.done === true) return;
+      if (r.value.kind === "error") yield { kind: "bad", line: r.value.line, message: r.value.message };
+      else yield toRow(r.value.line, r.value.value);
+    }
+  }
+  return { columns, items: rows(), source: label };
+}
+
+const DECIMAL = /^\s*[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+-]?[0-9]+)?\s*$/;
+
+/**
+ * A cell as a number: `null` for an empty cell (a missing value), the
+ * number for decimal text or a JSON number; a RangeError naming the column
+ * for anything else (text, NaN, infinities).
+ */
+export function numberCell(cell: InCell | undefined, column: ColumnSpec): number | null {
+  if (cell === null || cell === undefined) return null;
+  if (typeof cell === "number") {
+    if (!Number.isFinite(cell)) throw new RangeError(`column '${column.name}': ${String(cell)} is not a finite number`);
+    return cell;
+  }
+  if (cell.trim() === "") return null;
+  if (!DECIMAL.test(cell)) throw new RangeError(`column '${column.name}': ${JSON.stringify(cell)} is not a number`);
+  const x = Number(cell);
+  if (!Number.isFinite(x)) throw new RangeError(`column '${column.name}': ${cell.trim()} is out of the double-precision range`);
+  return x;
+}
+
+/** A cell as text (numbers by their shortest form; null as ""). */
+export function textCell(cell: InCell | undefined): string {
+  if (cell === null || cell === undefined) return "";
+  return typeof cell === "number" ? String(cell) : cell;
+}
+
+/** Index of the column that names each star: `--id NAME`, else the first of name/star/id/designation, else none. */
+export function idColumn(columns: readonly ColumnSpec[], explicit: string | undefined): number {
+  if (explicit !== undefined) {
+    const i = columns.findIndex((c) => c.name === explicit);
+    if (i === -1) throw new UsageError(`--id '${explicit}': no such column (columns: ${columns.map((c) => c.name).join(", ")})`);
+    return i;
+  }
+  for (const name of ["name", "star", "id", "designation", "object"]) {
+    const i = columns.findIndex((c) => c.name.toLowerCase() === name && c.unit === null);
+    if (i !== -1) return i;
+  }
+  return -1;
+}
