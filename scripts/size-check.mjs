@@ -6,8 +6,8 @@ import { build } from "esbuild";
 import { gzipSync } from "node:zlib";
 
 const cases = [
-  { name: "whole library (import *)", contents: 'export * from "./dist/index.js";', budget: 40_000 },
-  { name: "one law alone, tree-shaken (SI + units + Planck B_λ)", contents: 'import { SI, units, planckRadianceWavelength } from "./dist/index.js"; console.log(planckRadianceWavelength(SI, SI.of(500, units.nm), SI.of(5772, units.K)));', budget: 12_000 },
+  { name: "whole library (import *)", contents: 'export * from "./dist/index.js";', budget: 56_000 },
+  { name: "one law alone, tree-shaken (SI + units + Planck B_λ)", contents: 'import { SI, units, planckRadianceWavelength } from "./dist/index.js"; console.log(planckRadianceWavelength(SI, SI.of(500, units.nm), SI.of(5772, units.K)));', budget: 13_000 },
 ];
 
 let failed = false;

@@ -3,8 +3,10 @@
  * in): x = n (1 − e⁻ˣ) for n = 5 (peak of B_λ), 3 (peak of B_ν), 4 (peak of the
  * photon spectrum per wavelength) and 2 (per frequency).
  *
- * Newton's iteration on g(x) = x − n(1 − e⁻ˣ) from x = n converges in a few
- * steps (g is convex, g(n) > 0 and g′ > 0 on [n − 1, n]).
+ * Newton's iteration on g(x) = x − n + n e⁻ˣ from x = n converges in a few
+ * steps (g is convex, g(n) > 0 and g′ > 0 on [n − 1, n]). Written this way
+ * (rather than x − n(1 − e⁻ˣ)) the residual keeps its last bits, and the
+ * roots come out correctly rounded (checked against mpmath).
  *
  * @internal
  */
@@ -12,7 +14,7 @@ export function wienRoot(n: number): number {
   let x = n;
   for (let i = 0; i < 50; i++) {
     const e = Math.exp(-x);
-    const g = x - n * (1 - e);
+    const g = x - n + n * e;
     const dg = 1 - n * e;
     const next = x - g / dg;
     if (next === x) break;

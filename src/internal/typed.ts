@@ -40,15 +40,16 @@ export function arrayFromSIInPlace(sys: UnitSystem<SystemName>, values: Float64A
 
 /** Throw a RangeError unless finite and > 0, naming the caller's unit. */
 export function positive(sys: UnitSystem<SystemName>, name: string, value: number, d: Dimension): number {
-  return requirePositive(name, value, sys.coherentUnit(d));
+  // the unit text is built only when the check fails (valid input stays cheap)
+  return value > 0 && value !== Infinity ? value : requirePositive(name, value, sys.coherentUnit(d));
 }
 
 /** Throw a RangeError unless finite and ≥ 0, naming the caller's unit. */
 export function nonNegative(sys: UnitSystem<SystemName>, name: string, value: number, d: Dimension): number {
-  return requireNonNegative(name, value, sys.coherentUnit(d));
+  return value >= 0 && value !== Infinity ? value : requireNonNegative(name, value, sys.coherentUnit(d));
 }
 
 /** Throw a RangeError unless finite, naming the caller's unit. */
 export function finite(sys: UnitSystem<SystemName>, name: string, value: number, d: Dimension): number {
-  return requireFinite(name, value, sys.coherentUnit(d));
+  return Number.isFinite(value) ? value : requireFinite(name, value, sys.coherentUnit(d));
 }

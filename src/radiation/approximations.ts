@@ -19,6 +19,7 @@
  *
  * @module
  */
+import type { NotAirWavelength } from "../spectra/medium";
 import { kinds } from "../quantity/aliases";
 import type {
   Dimensionless,
@@ -64,7 +65,7 @@ const BN = kinds.spectralRadiancePerFrequency.dimension;
  */
 export function rayleighJeansRadianceWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralRadiancePerWavelength<S> {
   return eval2(sys, rayleighJeansRadianceWavelengthSI, "Rayleigh–Jeans B_λ", BL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralRadiancePerWavelength<S>;
@@ -107,7 +108,7 @@ export function rayleighJeansRadianceFrequency<S extends SystemName>(
  */
 export function wienRadianceWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralRadiancePerWavelength<S> {
   return eval2(sys, wienRadianceWavelengthSI, "Wien B_λ", BL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralRadiancePerWavelength<S>;
@@ -152,7 +153,7 @@ export function wienRadianceFrequency<S extends SystemName>(
  */
 export function rayleighJeansRelativeErrorWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
   return eval2(sys, rayleighJeansRelativeErrorWavelengthSI, "the Rayleigh–Jeans relative error", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;
@@ -197,7 +198,7 @@ export function rayleighJeansRelativeErrorFrequency<S extends SystemName>(
  */
 export function wienRelativeErrorWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
   return eval2(sys, wienRelativeErrorWavelengthSI, "the Wien relative error", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;

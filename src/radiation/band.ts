@@ -26,6 +26,7 @@
  *
  * @module
  */
+import type { NotAirWavelength } from "../spectra/medium";
 import { C } from "../constants/values";
 import { kinds } from "../quantity/aliases";
 import type { Dimensionless, Frequency, Length, PhotonRadiance, Radiance, Temperature } from "../quantity/aliases";
@@ -72,7 +73,7 @@ const NR = kinds.photonRadiance.dimension;
  */
 export function blackbodyFractionBelowWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
   return eval2(sys, blackbodyFractionBelowWavelengthSI, "the band fraction", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;
@@ -95,7 +96,7 @@ export function blackbodyFractionBelowWavelength<S extends SystemName>(
  */
 export function blackbodyFractionAboveWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
   return eval2(sys, blackbodyFractionAboveWavelengthSI, "the band fraction", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;
@@ -119,8 +120,8 @@ export function blackbodyFractionAboveWavelength<S extends SystemName>(
  */
 export function blackbodyFractionBetweenWavelengths<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength1: Length<NoInfer<S>>,
-  wavelength2: Length<NoInfer<S>>,
+  wavelength1: NotAirWavelength<NoInfer<S>>,
+  wavelength2: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
   return between(sys, blackbodyFractionBetweenWavelengthsSI, "the band fraction", ONE, wavelength1, wavelength2, temperature) as Dimensionless;
@@ -189,7 +190,7 @@ export function blackbodyFractionBelowFrequency<S extends SystemName>(
  */
 export function blackbodyPhotonFractionBelowWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
   return eval2(sys, blackbodyPhotonFractionBelowWavelengthSI, "the photon band fraction", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;
@@ -211,7 +212,7 @@ export function blackbodyPhotonFractionBelowWavelength<S extends SystemName>(
  */
 export function blackbodyPhotonFractionAboveWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
   return eval2(sys, blackbodyPhotonFractionAboveWavelengthSI, "the photon band fraction", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;
@@ -234,8 +235,8 @@ export function blackbodyPhotonFractionAboveWavelength<S extends SystemName>(
  */
 export function blackbodyPhotonFractionBetweenWavelengths<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength1: Length<NoInfer<S>>,
-  wavelength2: Length<NoInfer<S>>,
+  wavelength1: NotAirWavelength<NoInfer<S>>,
+  wavelength2: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
   return between(sys, blackbodyPhotonFractionBetweenWavelengthsSI, "the photon band fraction", ONE, wavelength1, wavelength2, temperature) as Dimensionless;
@@ -316,8 +317,8 @@ export function blackbodyPhotonFractionBelowFrequency<S extends SystemName>(
  */
 export function bandRadianceWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength1: Length<NoInfer<S>>,
-  wavelength2: Length<NoInfer<S>>,
+  wavelength1: NotAirWavelength<NoInfer<S>>,
+  wavelength2: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Radiance<S> {
   return between(sys, bandRadianceWavelengthSI, "the band radiance", R, wavelength1, wavelength2, temperature) as Radiance<S>;
@@ -340,8 +341,8 @@ export function bandRadianceWavelength<S extends SystemName>(
  */
 export function bandPhotonRadianceWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength1: Length<NoInfer<S>>,
-  wavelength2: Length<NoInfer<S>>,
+  wavelength1: NotAirWavelength<NoInfer<S>>,
+  wavelength2: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): PhotonRadiance<S> {
   return between(sys, bandPhotonRadianceWavelengthSI, "the band photon radiance", NR, wavelength1, wavelength2, temperature) as PhotonRadiance<S>;

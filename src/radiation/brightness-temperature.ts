@@ -25,6 +25,7 @@
  *
  * @module
  */
+import type { NotAirWavelength } from "../spectra/medium";
 import { kinds } from "../quantity/aliases";
 import type {
   Frequency,
@@ -67,7 +68,7 @@ const BN = kinds.spectralRadiancePerFrequency.dimension;
  */
 export function brightnessTemperatureWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   radiance: SpectralRadiancePerWavelength<NoInfer<S>>,
 ): Temperature {
   return eval2(sys, brightnessTemperatureWavelengthSI, "the brightness temperature", T, "wavelength", wavelength, L, "radiance", radiance, BL) as Temperature;
@@ -114,7 +115,7 @@ export function brightnessTemperatureFrequency<S extends SystemName>(
  */
 export function rayleighJeansBrightnessTemperatureWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   radiance: SpectralRadiancePerWavelength<NoInfer<S>>,
 ): Temperature {
   return eval2(sys, rayleighJeansBrightnessTemperatureWavelengthSI, "the Rayleigh–Jeans brightness temperature", T, "wavelength", wavelength, L, "radiance", radiance, BL) as Temperature;

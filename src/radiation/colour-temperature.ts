@@ -28,6 +28,7 @@
  *
  * @module
  */
+import type { NotAirWavelength } from "../spectra/medium";
 import { kinds } from "../quantity/aliases";
 import type {
   Length,
@@ -61,7 +62,12 @@ const L = kinds.length.dimension;
  * SI.valueIn(colourTemperatureRange.max, units.K); // 1e10
  * ```
  */
-export const colourTemperatureRange: { readonly min: Temperature; readonly max: Temperature } = Object.freeze({
+export const colourTemperatureRange: {
+  /** Lower end of the search, 1e-2 K. */
+  readonly min: Temperature;
+  /** Upper end of the search, 1e10 K. */
+  readonly max: Temperature;
+} = Object.freeze({
   min: COLOUR_TEMPERATURE_MIN_K as Temperature,
   max: COLOUR_TEMPERATURE_MAX_K as Temperature,
 });
@@ -105,8 +111,8 @@ function requireReachable(lnRatioAt: (T: number) => number, lnTarget: number, ra
  */
 export function colourTemperatureFromRatio<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength1: Length<NoInfer<S>>,
-  wavelength2: Length<NoInfer<S>>,
+  wavelength1: NotAirWavelength<NoInfer<S>>,
+  wavelength2: NotAirWavelength<NoInfer<S>>,
   ratio: Pure,
 ): Temperature {
   const l1 = positiveSI(sys, "wavelength1", wavelength1, L);
@@ -153,9 +159,9 @@ export function colourTemperatureFromSpectralDensities<
   Q extends SpectralRadiancePerWavelength<S> | SpectralFluxPerWavelength<S>,
 >(
   sys: UnitSystem<S>,
-  wavelength1: Length<NoInfer<S>>,
+  wavelength1: NotAirWavelength<NoInfer<S>>,
   density1: Q,
-  wavelength2: Length<NoInfer<S>>,
+  wavelength2: NotAirWavelength<NoInfer<S>>,
   density2: NoInfer<Q>,
 ): Temperature {
   // F_λ or B_λ (= F_λ per sr): the message names both units of the caller's system.

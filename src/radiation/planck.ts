@@ -21,6 +21,7 @@
  *
  * @module
  */
+import type { NotAirWavelength, NotAirWavelengthArray } from "../spectra/medium";
 import { arrayToSI, arrayFromSIInPlace, positive } from "../internal/typed";
 import { eval2, positiveSI } from "./internal";
 import { kinds } from "../quantity/aliases";
@@ -82,10 +83,20 @@ export type SpectralRadiancePerFrequencyPerTemperature<S extends SystemName> = Q
 
 /** Runtime dimensions of the two derivative quantities (for `SI.from` / `CGS.from`). */
 export const derivativeKinds = {
-  /** ∂B_λ/∂T. */
-  spectralRadiancePerWavelengthPerTemperature: { name: "spectral radiance per wavelength per temperature", dimension: DBL },
-  /** ∂B_ν/∂T. */
-  spectralRadiancePerFrequencyPerTemperature: { name: "spectral radiance per frequency per temperature", dimension: DBN },
+  /** ∂B_λ/∂T: W m⁻² sr⁻¹ m⁻¹ K⁻¹ (SI) or erg s⁻¹ cm⁻² sr⁻¹ cm⁻¹ K⁻¹ (CGS). */
+  spectralRadiancePerWavelengthPerTemperature: {
+    /** Readable name, used in error messages. */
+    name: "spectral radiance per wavelength per temperature",
+    /** Runtime dimension L⁻¹ M T⁻³ Θ⁻¹ Ω⁻¹. */
+    dimension: DBL,
+  },
+  /** ∂B_ν/∂T: W m⁻² sr⁻¹ Hz⁻¹ K⁻¹ (SI) or erg s⁻¹ cm⁻² sr⁻¹ Hz⁻¹ K⁻¹ (CGS). */
+  spectralRadiancePerFrequencyPerTemperature: {
+    /** Readable name, used in error messages. */
+    name: "spectral radiance per frequency per temperature",
+    /** Runtime dimension M T⁻² Θ⁻¹ Ω⁻¹. */
+    dimension: DBN,
+  },
 } as const;
 
 /**
@@ -105,7 +116,7 @@ export const derivativeKinds = {
  */
 export function planckRadianceWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralRadiancePerWavelength<S> {
   return eval2(sys, planckRadianceWavelengthSI, "B_λ", BL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralRadiancePerWavelength<S>;
@@ -169,7 +180,7 @@ export function planckRadianceWavenumber<S extends SystemName>(
  */
 export function planckPhotonRadianceWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralPhotonRadiancePerWavelength<S> {
   return eval2(sys, planckPhotonRadianceWavelengthSI, "photon radiance N_λ", NL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralPhotonRadiancePerWavelength<S>;
@@ -234,7 +245,7 @@ export function planckPhotonRadianceWavenumber<S extends SystemName>(
  */
 export function planckRadianceWavelengthDerivativeT<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralRadiancePerWavelengthPerTemperature<S> {
   return eval2(sys, planckRadianceWavelengthDerivativeTSI, "∂B_λ/∂T", DBL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralRadiancePerWavelengthPerTemperature<S>;
@@ -287,7 +298,7 @@ export interface BatchResult<A> {
  */
 export function planckRadianceWavelengthBatch<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelengths: LengthArray<NoInfer<S>>,
+  wavelengths: NotAirWavelengthArray<NoInfer<S>>,
   temperature: Temperature,
 ): BatchResult<SpectralRadiancePerWavelengthArray<S>> {
   positive(sys, "temperature", temperature, T);
@@ -311,7 +322,7 @@ export function planckRadianceWavelengthBatch<S extends SystemName>(
  */
 export function planckRadianceTemperatureBatch<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   temperatures: TemperatureArray,
 ): BatchResult<SpectralRadiancePerWavelengthArray<S>> {
   const r = planckRadianceTemperatureBatchSI(positiveSI(sys, "wavelength", wavelength, L), temperatures);
@@ -339,7 +350,14 @@ function batchIn(sys: UnitSystem<SystemName>, values: Float64Array, invalid: num
 }
 
 /** A quantity whose dimension is "per steradian" (solid-angle exponent −1). */
-export type PerSteradian = AnyQuantity & Brand<Dimension & { readonly solidAngle: -1 }, SystemTag>;
+export type PerSteradian = AnyQuantity &
+  Brand<
+    Dimension & {
+      /** Solid-angle exponent −1 (sr⁻¹); the other exponents are free. */
+      readonly solidAngle: -1;
+    },
+    SystemTag
+  >;
 
 /**
  * The exitance (flux leaving the surface, per unit area) of a Lambertian

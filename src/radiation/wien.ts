@@ -25,6 +25,7 @@
  *
  * @module
  */
+import type { NotAirWavelength } from "../spectra/medium";
 import { kinds } from "../quantity/aliases";
 import type { Frequency, Length, Temperature, Wavenumber } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
@@ -162,7 +163,7 @@ export function wienPhotonPeakWavenumber<S extends SystemName>(sys: UnitSystem<S
  */
 export function temperatureFromPeakWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  peakWavelength: Length<NoInfer<S>>,
+  peakWavelength: NotAirWavelength<NoInfer<S>>,
 ): Temperature {
   return eval1(sys, temperatureFromPeakWavelengthSI, "the temperature", T, "peakWavelength", peakWavelength, L) as Temperature;
 }
@@ -216,7 +217,7 @@ export function temperatureFromPeakWavenumber<S extends SystemName>(
  */
 export function temperatureFromPhotonPeakWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
-  peakWavelength: Length<NoInfer<S>>,
+  peakWavelength: NotAirWavelength<NoInfer<S>>,
 ): Temperature {
   return eval1(sys, temperatureFromPhotonPeakWavelengthSI, "the temperature", T, "peakWavelength", peakWavelength, L) as Temperature;
 }

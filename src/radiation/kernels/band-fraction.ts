@@ -252,7 +252,7 @@ export function blackbodyFractionBelowWavelengthSI(wavelengthM: number, temperat
  * @throws RangeError for bad input
  * @example
  * ```ts
- * blackbodyFractionAboveWavelengthSI(1e-3, 5772); // ≈ 1e-8 (far-IR tail of the Sun)
+ * blackbodyFractionAboveWavelengthSI(1e-3, 5772); // ≈ 7.9e-10 (far-IR tail of the Sun)
  * ```
  */
 export function blackbodyFractionAboveWavelengthSI(wavelengthM: number, temperatureK: number): number {
