@@ -21,6 +21,7 @@ import { prepareBandSI, type PreparedBandSI } from "../src/fit/kernels/bands";
 import { createBlackbodyFitterSI, type BlackbodyFitterSI } from "../src/fit/kernels/blackbody-fit";
 import { bandMeanRadianceWavelengthSI, type ResponseCurveSI } from "../src/radiation/kernels/band-response";
 import type { BenchCase } from "./case";
+import { mulberry32 } from "../test/support/random";
 
 const M = 2000; // stars per call
 const NB = 5;
@@ -36,17 +37,6 @@ let evalsPerStar = 0;
 const kinds = new Uint8Array(NB);
 /** Keeps the baseline's model sums observable. */
 export let sink = 0;
-
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 function curve(center: number): ResponseCurveSI {
   const hw = 0.09 * center;

@@ -6,36 +6,7 @@
  */
 import { bandMeanRadianceWavelengthSI, responseWeights, type ResponseConvention, type ResponseCurveSI } from "../../radiation/kernels/band-response";
 import { ccm89RatioSI } from "../../photometry/kernels/extinction";
-
-/** mulberry32: a 32-bit seeded PRNG (common practice), uniform in [0, 1). */
-export function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-/** Standard normal deviates by the Box–Muller transform (Box & Muller 1958). */
-export function gaussian(rand: () => number): () => number {
-  let spare: number | null = null;
-  return () => {
-    if (spare !== null) {
-      const s = spare;
-      spare = null;
-      return s;
-    }
-    let u = 0;
-    while (u === 0) u = rand();
-    const v = rand();
-    const r = Math.sqrt(-2 * Math.log(u));
-    spare = r * Math.sin(2 * Math.PI * v);
-    return r * Math.cos(2 * Math.PI * v);
-  };
-}
+export { gaussian, mulberry32 } from "../../../test/support/random";
 
 /**
  * A smooth, slightly asymmetric filter-like response on `n` points over

@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import fixture from "../../../test/fixtures/photometry.json";
 import { AU, L_SUN, PARSEC, R_SUN, S_SUN, SIGMA } from "../../constants/values";
 import { PhotometryBatchReason } from "./common";
+import { gaussian, mulberry32 } from "../../../test/support/random";
 import {
   createStarBatchSolverSI,
   solveStarSI,
@@ -16,34 +17,6 @@ import {
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
 const MAS = Math.PI / 648000 / 1000;
 
-/** mulberry32: small seeded 32-bit PRNG (public-domain algorithm by Tommy Ettinger). */
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-/** Standard normal deviates by the Box–Muller transform. */
-function gaussian(rand: () => number): () => number {
-  let spare: number | undefined;
-  return () => {
-    if (spare !== undefined) {
-      const s = spare;
-      spare = undefined;
-      return s;
-    }
-    let u = 0;
-    while (u === 0) u = rand();
-    const v = rand();
-    const r = Math.sqrt(-2 * Math.log(u));
-    spare = r * Math.sin(2 * Math.PI * v);
-    return r * Math.cos(2 * Math.PI * v);
-  };
-}
 function meanStd(xs: Float64Array): { mean: number; std: number } {
   let m = 0;
   for (const x of xs) m += x;
