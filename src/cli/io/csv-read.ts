@@ -28,6 +28,7 @@
  *
  * @module
  */
+import { parseChunks } from "./chunks";
 
 /** Why a record was rejected. */
 export type CsvErrorCode =
@@ -433,23 +434,5 @@ export async function* readCsv(
   source: AsyncIterable<string | Uint8Array>,
   options: CsvOptions = {},
 ): AsyncGenerator<CsvItem, void, undefined> {
-  let batch: CsvItem[] = [];
-  const parser = new CsvParser((item) => batch.push(item), options);
-  let decoder: TextDecoder | null = null;
-  for await (const chunk of source) {
-    if (typeof chunk === "string") {
-      parser.push(chunk);
-    } else {
-      decoder ??= new TextDecoder("utf-8");
-      parser.push(decoder.decode(chunk, { stream: true }));
-    }
-    if (batch.length > 0) {
-      const b = batch;
-      batch = [];
-      yield* b;
-    }
-  }
-  if (decoder !== null) parser.push(decoder.decode());
-  parser.end();
-  yield* batch;
+  yield* parseChunks<CsvItem>(source, (sink) => new CsvParser(sink, options));
 }

@@ -10,6 +10,7 @@
  *
  * @module
  */
+import { parseChunks } from "./chunks";
 
 /** A parsed line: its 1-based number and the object it holds. */
 export interface JsonlRecord {
@@ -179,22 +180,5 @@ export async function* readJsonl(
   source: AsyncIterable<string | Uint8Array>,
   options: JsonlOptions = {},
 ): AsyncGenerator<JsonlItem, void, undefined> {
-  let batch: JsonlItem[] = [];
-  const parser = new JsonlParser((it) => batch.push(it), options);
-  let decoder: TextDecoder | null = null;
-  for await (const chunk of source) {
-    if (typeof chunk === "string") parser.push(chunk);
-    else {
-      decoder ??= new TextDecoder("utf-8");
-      parser.push(decoder.decode(chunk, { stream: true }));
-    }
-    if (batch.length > 0) {
-      const b = batch;
-      batch = [];
-      yield* b;
-    }
-  }
-  if (decoder !== null) parser.push(decoder.decode());
-  parser.end();
-  yield* batch;
+  yield* parseChunks<JsonlItem>(source, (sink) => new JsonlParser(sink, options));
 }
