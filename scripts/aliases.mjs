@@ -86,7 +86,9 @@ for (const [name, doc, exps] of defs) {
 }
 out.push("/** A named kind of quantity: a name and its runtime dimension. Used to check parsed text and to convert between systems. */");
 out.push("export interface Kind<D extends Dimension = Dimension> {");
+out.push("  /** Readable name in lower-case words (e.g. `\"spectral flux per wavelength\"`), used in error messages. */");
 out.push("  readonly name: string;");
+out.push("  /** The runtime dimension object (exponents of the seven base dimensions). */");
 out.push("  readonly dimension: D;");
 out.push("}");
 out.push("");

@@ -18,7 +18,10 @@ lines.push(`/** An exponent of one base dimension: an integer from ${MIN} to ${M
 lines.push(`export type Exponent = ${range.join(" | ")};`);
 lines.push("");
 lines.push("/** Marker produced when a computed exponent leaves the supported range. */");
-lines.push('export type ExponentOutOfRange = { readonly "dimension exponent out of range -12..12": never };');
+lines.push("export type ExponentOutOfRange = {");
+lines.push("  /** The key is the message a compile error shows; the property never exists at run time. */");
+lines.push('  readonly "dimension exponent out of range -12..12": never;');
+lines.push("};");
 lines.push("");
 lines.push("/** `AddTable[a][b]` is a + b (never outside the range; see `QuantityWithTag`). @internal */");
 lines.push("export interface AddTable {");

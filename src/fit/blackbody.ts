@@ -205,6 +205,7 @@ export function gaussianBand<S extends SystemName>(
 
 /** A band-mean flux density per unit wavelength with its standard uncertainty. */
 export interface FluxPerWavelengthObservation<S extends SystemName> {
+  /** The band, built in system `S` by {@link responseBand}, {@link topHatBand} or {@link gaussianBand}. */
   readonly band: FitBand<S>;
   /** ⟨f_λ⟩ (finite; may be ≤ 0 for faint sources). */
   readonly fluxPerWavelength: SpectralFluxPerWavelength<S>;
@@ -214,6 +215,7 @@ export interface FluxPerWavelengthObservation<S extends SystemName> {
 
 /** A band-mean flux density per unit frequency (e.g. in Jy) with its standard uncertainty. */
 export interface FluxPerFrequencyObservation<S extends SystemName> {
+  /** The band, built in system `S` by {@link responseBand}, {@link topHatBand} or {@link gaussianBand}. */
   readonly band: FitBand<S>;
   /** ⟨f_ν⟩ (finite; may be ≤ 0). Converted to ⟨f_λ⟩ = ⟨f_ν⟩ c/λ_p² (exact for the band means used). */
   readonly fluxPerFrequency: SpectralFluxPerFrequency<S>;
@@ -223,6 +225,7 @@ export interface FluxPerFrequencyObservation<S extends SystemName> {
 
 /** An AB magnitude with its standard uncertainty (fitted in magnitude space). */
 export interface AbMagnitudeObservation<S extends SystemName> {
+  /** The band, built in system `S` by {@link responseBand}, {@link topHatBand} or {@link gaussianBand}. */
   readonly band: FitBand<S>;
   /** m_AB = −2.5 log10(⟨f_ν⟩ / 3631 Jy), mag (finite). */
   readonly abMagnitude: Pure;
@@ -244,7 +247,14 @@ export interface BlackbodyFitOptions {
    * `fitAV` is false), default 0; `fitAV` default true. A_V is kept ≥ 0.
    * Every band node with non-zero response must lie in 0.1–3.33 µm.
    */
-  readonly extinction?: { readonly rV?: Pure; readonly aV?: Pure; readonly fitAV?: boolean };
+  readonly extinction?: {
+    /** R_V = A_V / E(B−V) of the CCM89 law (> 0; default 3.1). */
+    readonly rV?: Pure;
+    /** Starting A_V, mag (≥ 0; default 0); the held value when `fitAV` is false. */
+    readonly aV?: Pure;
+    /** Fit A_V (default true); false holds it at `aV`. */
+    readonly fitAV?: boolean;
+  };
   /** Allowed temperature range (default 300 K … 1e6 K). */
   readonly temperatureRange?: readonly [Temperature, Temperature];
   /** Maximum Levenberg–Marquardt trial steps (default 200). */
@@ -259,9 +269,13 @@ export interface BlackbodyFitOptions {
 
 /** A typed blackbody fit. Temperature, angle and A_V are the same in SI and CGS. */
 export interface BlackbodyFit<S extends SystemName> {
+  /** Fitted effective (blackbody) temperature T (K in both systems). */
   readonly temperature: Temperature;
+  /** Standard uncertainty of T (not rescaled by χ²/dof). */
   readonly sigmaTemperature: Temperature;
+  /** Fitted angular diameter θ = 2R/d (rad in both systems). */
   readonly angularDiameter: Angle;
+  /** Standard uncertainty of θ (not rescaled by χ²/dof). */
   readonly sigmaAngularDiameter: Angle;
   /** A_V, mag (0 without extinction). */
   readonly extinctionAV: Dimensionless;
@@ -271,17 +285,25 @@ export interface BlackbodyFit<S extends SystemName> {
   readonly modelFluxPerWavelength: SpectralFluxPerWavelengthArray<S>;
   /** (data − model)/σ per fitted channel (in magnitudes for magnitude data). */
   readonly pulls: readonly number[];
+  /** χ² = Σ pulls² at the solution. */
   readonly chi2: number;
+  /** Degrees of freedom: number of channels − number of fitted parameters. */
   readonly dof: number;
+  /** χ²/dof (null when dof < 1). */
   readonly reducedChi2: number | null;
+  /** P(χ²_dof ≥ χ²) (null when dof < 1). */
   readonly pValue: number | null;
+  /** Quality flags (notConverged, atLimit, tooFewBands, poorFit): check them before trusting the result. */
   readonly flags: BlackbodyFitFlags;
   /** Fitted parameters, the order of `covariance` and `correlation`. */
   readonly parameters: readonly FitParameterName[];
   /** Covariance of the fitted parameters in K, rad and mag (products thereof). */
   readonly covariance: readonly (readonly number[])[];
+  /** Correlation matrix of the fitted parameters (order of `parameters`). */
   readonly correlation: readonly (readonly number[])[];
+  /** Levenberg–Marquardt trial steps taken. */
   readonly iterations: number;
+  /** Why the iteration stopped (`"maxIterations"` and `"stalled"` also set `flags.notConverged`). */
   readonly stopReason: FitStopReason;
   /** The plain-JSON form (SI units; names carry their unit). */
   readonly json: BlackbodyFitSI;
@@ -496,6 +518,7 @@ export interface SpectrumObservation<S extends SystemName> {
 
 /** A spectrum fit: the fit plus the indices of the pixels used (the order of its per-channel arrays). */
 export interface BlackbodySpectrumFit<S extends SystemName> extends BlackbodyFit<S> {
+  /** Ascending indices (into the input spectrum) of the pixels fitted: those not excluded. */
   readonly usedPixels: readonly number[];
 }
 
@@ -571,18 +594,36 @@ export function fitBlackbodySpectrum<S extends SystemName>(
 
 /** A distance or a parallax with its standard uncertainty. */
 export type DistanceMeasurement<S extends SystemName> =
-  | { readonly distance: Length<S>; readonly sigma: Length<S> }
-  | { readonly parallax: Angle; readonly sigma: Angle };
+  | {
+      /** Distance (> 0), a length in `S`. */
+      readonly distance: Length<S>;
+      /** Standard uncertainty of the distance (> 0), a length in `S`. */
+      readonly sigma: Length<S>;
+    }
+  | {
+      /** Trigonometric parallax (> 0); d = 1 au / p. */
+      readonly parallax: Angle;
+      /** Standard uncertainty of the parallax (> 0). */
+      readonly sigma: Angle;
+    };
 
 /** Radius, luminosity and bolometric flux from a fit and a distance. */
 export interface StellarParameters<S extends SystemName> {
+  /** Radius R = θd/2, in `S` (m or cm). */
   readonly radius: Length<S>;
+  /** First-order standard uncertainty of R (includes the fit's T–θ covariance and the distance's σ). */
   readonly sigmaRadius: Length<S>;
+  /** Luminosity L = 4πR²σT⁴, in `S` (W or erg s⁻¹). */
   readonly luminosity: Power<S>;
+  /** First-order standard uncertainty of L. */
   readonly sigmaLuminosity: Power<S>;
+  /** Bolometric flux at the observer (θ/2)²σT⁴, in `S` (W m⁻² or erg s⁻¹ cm⁻²). */
   readonly bolometricFlux: Flux<S>;
+  /** First-order standard uncertainty of the bolometric flux. */
   readonly sigmaBolometricFlux: Flux<S>;
+  /** Distance used (1 au / p when a parallax was given), in `S`. */
   readonly distance: Length<S>;
+  /** First-order standard uncertainty of the distance. */
   readonly sigmaDistance: Length<S>;
   /** Correlation of R and L (both depend on θ and d). */
   readonly radiusLuminosityCorrelation: number;

@@ -35,3 +35,4 @@ export type {
   StellarFromFitSI,
   StellarParameters,
 } from "./blackbody";
+export type { DerivedQuantitySI, StarConsistency, StarInputKind, StarQuantity } from "../photometry/kernels/solver";

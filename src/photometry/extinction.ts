@@ -60,8 +60,28 @@ export const CCM89_RV_RANGE: readonly [number, number] = [CCM89_RV_FIT_MIN, CCM8
  * time⁻³ or time⁻²), or photon fluxes and radiances (time⁻¹, per area).
  */
 export type FluxLike =
-  | (AnyQuantity & Brand<Dimension & { readonly mass: 1; readonly time: -3 | -2 }, SystemTag>)
-  | (AnyQuantity & Brand<Dimension & { readonly mass: 0; readonly time: -1; readonly length: -1 | -2 | -3 }, SystemTag>);
+  | (AnyQuantity &
+      Brand<
+        Dimension & {
+          /** Mass exponent 1: an energy quantity (W = kg m² s⁻³). */
+          readonly mass: 1;
+          /** Time exponent −3 (flux, radiance and their per-wavelength or per-wavenumber forms) or −2 (their per-frequency forms). */
+          readonly time: -3 | -2;
+        },
+        SystemTag
+      >)
+  | (AnyQuantity &
+      Brand<
+        Dimension & {
+          /** Mass exponent 0: a photon (count) quantity. */
+          readonly mass: 0;
+          /** Time exponent −1: photons per second. */
+          readonly time: -1;
+          /** Length exponent −2 (photons per area), −3 (per area per wavelength) or −1 (per area per wavenumber). */
+          readonly length: -1 | -2 | -3;
+        },
+        SystemTag
+      >);
 
 function xChecked(sys: UnitSystem<SystemName>, wavelength: number): number {
   positive(sys, "wavelength", wavelength, L);

@@ -59,6 +59,7 @@ import {
 
 /** A measured value and its standard uncertainty, both of type `Q`. */
 export interface Measurement<Q> {
+  /** The measured value (> 0 for physical quantities; any finite number for a magnitude). */
   readonly value: Q;
   /** Standard uncertainty (> 0 for {@link solveStar}; ≥ 0 in a batch). */
   readonly sigma: Q;
@@ -184,6 +185,7 @@ function requireSufficient(names: readonly StarObservationName[]): void {
 
 /** A derived quantity in the caller's system. */
 export interface Estimate<Q> {
+  /** Best estimate: the weighted least-squares solution in log space (first order; the log-normal median). */
   readonly value: Q;
   /** First-order standard uncertainty. */
   readonly sigma: Q;
@@ -223,38 +225,61 @@ export interface StarConsistencyReport {
 
 /** One estimate in plain JSON: numbers with their unit string. */
 export interface EstimateJSON {
+  /** Best estimate, in `unit`. */
   readonly value: number;
+  /** First-order standard uncertainty, in `unit`. */
   readonly sigma: number;
   /** Unit of `value` and `sigma`, in the parser's grammar (`"erg s^-1"`, `"rad"`, `"mag"`). */
   readonly unit: string;
+  /** σ / value (for the magnitudes: σ in mag). */
   readonly relativeSigma: number;
+  /** True when this quantity (or its alias: parallax for distance, m_bol for flux, L for M_bol) was measured. */
   readonly measured: boolean;
 }
 
 /** The plain-JSON form of a {@link StarSolution} (what `JSON.stringify` writes). */
 export interface StarSolutionJSON {
+  /** The system of every unit string below: `"SI"` or `"CGS"`. */
   readonly system: SystemName;
+  /** Effective temperature, K. */
   readonly temperature: EstimateJSON;
+  /** Luminosity, `"W"` (SI) or `"erg s^-1"` (CGS). */
   readonly luminosity: EstimateJSON;
+  /** Radius, `"m"` or `"cm"`. */
   readonly radius: EstimateJSON;
+  /** Distance, `"m"` or `"cm"`. */
   readonly distance: EstimateJSON;
+  /** Bolometric flux at the observer, `"W m^-2"` or `"erg s^-1 cm^-2"`. */
   readonly bolometricFlux: EstimateJSON;
+  /** Angular diameter θ = 2R/d, rad. */
   readonly angularDiameter: EstimateJSON;
+  /** Parallax 1 au / d, rad. */
   readonly parallax: EstimateJSON;
+  /** Apparent bolometric magnitude (IAU 2015 B2), mag. */
   readonly apparentBolometricMagnitude: EstimateJSON;
+  /** Absolute bolometric magnitude (IAU 2015 B2), mag. */
   readonly absoluteBolometricMagnitude: EstimateJSON;
+  /** Covariance of the six quantities, in the units of `system`, and of their logarithms. */
   readonly covariance: StarCovariance;
+  /** χ² consistency of the observations (chi2 = 0, dof = 0, p = 1 when exactly determined). */
   readonly consistency: StarConsistencyReport;
 }
 
 /** Result of {@link solveStar}, typed in the caller's system. */
 export interface StarSolution<S extends SystemName> {
+  /** The system of the solve: luminosity, radius, distance and bolometric flux are in it. */
   readonly system: S;
+  /** Effective temperature (K in both systems). */
   readonly temperature: Estimate<Temperature>;
+  /** Luminosity L = 4πR²σT⁴, in `S` (W or erg s⁻¹). */
   readonly luminosity: Estimate<Power<S>>;
+  /** Radius, in `S` (m or cm). */
   readonly radius: Estimate<Length<S>>;
+  /** Distance, in `S` (m or cm). */
   readonly distance: Estimate<Length<S>>;
+  /** Bolometric flux at the observer f = L/(4πd²), in `S` (W m⁻² or erg s⁻¹ cm⁻²). */
   readonly bolometricFlux: Estimate<Flux<S>>;
+  /** Angular diameter θ = 2R/d (rad in both systems). */
   readonly angularDiameter: Estimate<Angle>;
   /** Parallax 1 au / d. */
   readonly parallax: Estimate<Angle>;
@@ -262,7 +287,9 @@ export interface StarSolution<S extends SystemName> {
   readonly apparentBolometricMagnitude: Estimate<number>;
   /** Absolute bolometric magnitude (IAU 2015 B2), mag. */
   readonly absoluteBolometricMagnitude: Estimate<number>;
+  /** Covariance of the six quantities, in `S`, and of their logarithms. */
   readonly covariance: StarCovariance;
+  /** χ² consistency of the observations (chi2 = 0, dof = 0, p = 1 when exactly determined). */
   readonly consistency: StarConsistencyReport;
   /** Plain JSON (numbers with unit strings) for tools; `JSON.stringify(solution)` writes this. */
   toJSON(): StarSolutionJSON;
@@ -441,7 +468,9 @@ export type StarBatchColumnArray<N extends StarObservationName, S extends System
 
 /** One input column of a batch: values and standard uncertainties (≥ 0), same length. */
 export interface StarBatchColumn<A> {
+  /** One measured value per row (a row whose value is invalid is written as NaN with a reason code). */
   readonly values: A;
+  /** One standard uncertainty per row (≥ 0; 0 is allowed and contributes no uncertainty). */
   readonly sigmas: A;
 }
 
@@ -452,17 +481,29 @@ export type StarBatchInput<S extends SystemName, N extends StarObservationName> 
 
 /** Output columns of a batch solve, in system `S` (value and σ of each quantity) plus per-row reason codes. */
 export interface StarBatchColumns<S extends SystemName> {
+  /** Effective temperature per row (K in both systems). */
   readonly temperature: TemperatureArray;
+  /** First-order standard uncertainty of `temperature`. */
   readonly sigmaTemperature: TemperatureArray;
+  /** Luminosity per row, in `S` (W or erg s⁻¹). */
   readonly luminosity: PowerArray<S>;
+  /** First-order standard uncertainty of `luminosity`. */
   readonly sigmaLuminosity: PowerArray<S>;
+  /** Radius per row, in `S` (m or cm). */
   readonly radius: LengthArray<S>;
+  /** First-order standard uncertainty of `radius`. */
   readonly sigmaRadius: LengthArray<S>;
+  /** Distance per row, in `S` (m or cm). */
   readonly distance: LengthArray<S>;
+  /** First-order standard uncertainty of `distance`. */
   readonly sigmaDistance: LengthArray<S>;
+  /** Bolometric flux at the observer per row, in `S` (W m⁻² or erg s⁻¹ cm⁻²). */
   readonly bolometricFlux: FluxArray<S>;
+  /** First-order standard uncertainty of `bolometricFlux`. */
   readonly sigmaBolometricFlux: FluxArray<S>;
+  /** Angular diameter θ = 2R/d per row (rad in both systems). */
   readonly angularDiameter: AngleArray;
+  /** First-order standard uncertainty of `angularDiameter`. */
   readonly sigmaAngularDiameter: AngleArray;
   /** One {@link StarBatchReason} code per row (0 = OK). */
   readonly reason: Uint8Array;
@@ -489,6 +530,7 @@ export const StarBatchReason = PhotometryBatchReason;
 
 /** A typed batch solver for a fixed set of three observation names. */
 export interface StarBatchSolver<S extends SystemName, N extends StarObservationName> {
+  /** The system of every input and output column (`"SI"` or `"CGS"`). */
   readonly system: S;
   /** The observation names, in the order given. */
   readonly inputs: readonly N[];

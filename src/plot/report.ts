@@ -11,14 +11,19 @@ import { escapeXml, htmlMarkup } from "./xml";
 
 /** A figure: SVG markup (as produced by `svgChart`) and its caption (`_{…}`/`^{…}` markup allowed). */
 export interface ReportFigure {
+  /** Standalone SVG markup, inserted as is; must start with `<svg` and contain no scripting. */
   readonly svg: string;
+  /** Caption under the figure; HTML-escaped, `_{…}`/`^{…}` markup allowed. */
   readonly caption: string;
 }
 
 /** A table of text cells; header texts and the caption may carry `_{…}`/`^{…}` markup. */
 export interface ReportTable {
+  /** Column headings; `_{…}`/`^{…}` markup allowed. */
   readonly header: readonly string[];
+  /** Rows of cell texts, each as long as `header`. */
   readonly rows: readonly (readonly string[])[];
+  /** Caption above the table; `_{…}`/`^{…}` markup allowed. */
   readonly caption?: string;
   /** Right-align columns whose cells all look numeric (default true). */
   readonly alignNumbers?: boolean;
@@ -26,9 +31,13 @@ export interface ReportTable {
 
 /** Content of {@link htmlReport}. */
 export interface ReportSpec {
+  /** Page title: the `<title>` and the `<h1>` heading. */
   readonly title: string;
+  /** Introductory text under the heading; blank lines separate paragraphs. */
   readonly description?: string;
+  /** An optional results table, after the description. */
   readonly table?: ReportTable;
+  /** Figures, in order, after the table. */
   readonly figures?: readonly ReportFigure[];
   /** Caution text for the footer (e.g. validity limits of the models used). */
   readonly caution?: string;

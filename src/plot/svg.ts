@@ -49,8 +49,11 @@ export type AxisScale = "linear" | "log";
 export interface AxisSpec {
   /** Axis title; may contain `_{…}`/`^{…}` markup and, on a y axis, line breaks (`\n`). */
   readonly label?: string;
+  /** `"linear"` (default) or `"log"` (base 10; only values > 0 are drawn). */
   readonly scale?: AxisScale;
+  /** Lower end of the axis, in data units (default: from the data, rounded out). */
   readonly min?: number;
+  /** Upper end of the axis, in data units (default: from the data, rounded out); must exceed `min`. */
   readonly max?: number;
   /** Draw the axis with values decreasing along it (right to left on x, top to bottom on y). */
   readonly reverse?: boolean;
@@ -65,22 +68,31 @@ export type MarkerShape = "circle" | "square" | "diamond" | "dash";
 
 /** A line series (a polyline through the points in the given order). */
 export interface LineSeries {
+  /** Discriminant: `"line"`. */
   readonly type: "line";
+  /** Series name for the legend and the SVG tooltip; may contain `_{…}`/`^{…}` markup. */
   readonly name: string;
+  /** x values, in the x axis's data units. */
   readonly x: ArrayLike<number>;
+  /** y values, one per x; a non-finite point (or one outside a log axis) breaks the line. */
   readonly y: ArrayLike<number>;
   /** Any SVG colour; default from the palette. */
   readonly color?: string;
   /** Stroke width in px (default 1.5). */
   readonly width?: number;
+  /** Draw the line dashed (default false). */
   readonly dashed?: boolean;
 }
 
 /** Scatter points with optional vertical and horizontal error bars. */
 export interface ScatterSeries {
+  /** Discriminant: `"scatter"`. */
   readonly type: "scatter";
+  /** Series name for the legend and the SVG tooltip; may contain `_{…}`/`^{…}` markup. */
   readonly name: string;
+  /** x values, in the x axis's data units. */
   readonly x: ArrayLike<number>;
+  /** y values, one per x; non-finite points and points outside the ranges are omitted. */
   readonly y: ArrayLike<number>;
   /** Symmetric 1σ error (≥ 0), used for both sides unless `yErrLow`/`yErrHigh` are given. */
   readonly yErr?: ArrayLike<number>;
@@ -94,6 +106,7 @@ export interface ScatterSeries {
   readonly xErrLow?: ArrayLike<number>;
   /** Horizontal error towards larger x (≥ 0). */
   readonly xErrHigh?: ArrayLike<number>;
+  /** Any SVG colour; default from the palette. */
   readonly color?: string;
   /** Point radius in px (default 3): half the width of the marker. */
   readonly radius?: number;
@@ -110,15 +123,21 @@ export type Series = LineSeries | ScatterSeries;
 export interface BandCurve {
   /** Band name; may contain `_{…}`/`^{…}` markup. */
   readonly name: string;
+  /** x values (e.g. wavelengths), in the x axis's data units. */
   readonly x: ArrayLike<number>;
+  /** Response at each x (any scale; negative values are drawn as 0), same length as `x`. */
   readonly response: ArrayLike<number>;
+  /** Any SVG colour; default from the palette, after the series colours. */
   readonly color?: string;
 }
 
 /** A labelled vertical line at `x`, drawn only if `x` is inside the x range. */
 export interface MarkerLine {
+  /** Position on the x axis, in its data units. */
   readonly x: number;
+  /** Text drawn beside the line, rotated along it (plain text; none when omitted or empty). */
   readonly label?: string;
+  /** Any SVG colour (default `"#555555"`). */
   readonly color?: string;
 }
 
@@ -132,9 +151,13 @@ export interface ChartSpec {
   readonly width?: number;
   /** Height in px (default 440). */
   readonly height?: number;
+  /** The x axis. */
   readonly x?: AxisSpec;
+  /** The y axis of the main panel. */
   readonly y?: AxisSpec;
+  /** Data series, drawn in order in the main panel. */
   readonly series?: readonly Series[];
+  /** Band (filter) response curves, each scaled to a peak of 1. */
   readonly bands?: readonly BandCurve[];
   /** Where band curves go: `"axis"` (secondary 0–1 axis on the right, default) or `"panel"` (lower panel). */
   readonly bandPlacement?: "axis" | "panel";
@@ -142,6 +165,7 @@ export interface ChartSpec {
   readonly bandLabel?: string;
   /** Name the bands in the legend (`"legend"`, default) or by a label above each curve (`"inline"`). */
   readonly bandLabels?: "legend" | "inline";
+  /** Labelled vertical lines (e.g. spectral lines). */
   readonly markers?: readonly MarkerLine[];
   /** A residual panel between the main panel and the band panel, sharing the x axis. */
   readonly residual?: ResidualPanel;
@@ -155,6 +179,7 @@ export interface ChartSpec {
 export interface ResidualPanel {
   /** Linear y axis; unset `min`/`max` give a symmetric range ±max(3, largest |value| rounded up). */
   readonly y?: AxisSpec;
+  /** Residual series (e.g. (data − model)/σ), plotted against the shared x axis. */
   readonly series: readonly Series[];
   /** Draw a line at y = 0 (default true). */
   readonly zeroLine?: boolean;

@@ -318,7 +318,9 @@ export type AngularAreaArray<S extends SystemName = SystemName> = QuantityArray<
 
 /** A named kind of quantity: a name and its runtime dimension. Used to check parsed text and to convert between systems. */
 export interface Kind<D extends Dimension = Dimension> {
+  /** Readable name in lower-case words (e.g. `"spectral flux per wavelength"`), used in error messages. */
   readonly name: string;
+  /** The runtime dimension object (exponents of the seven base dimensions). */
   readonly dimension: D;
 }
 

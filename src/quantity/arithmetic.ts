@@ -48,11 +48,13 @@ export type Raised<A extends AnyQuantity, N extends PowerExponent> = QuantityWit
 
 /** Marker in a compile error: a square root needs every exponent even. */
 export interface SquareRootNeedsEvenExponents<Q> {
+  /** The key is the message the compile error shows; `Q` is the offending quantity type. Never present at run time. */
   readonly "cannot take the square root: some dimension exponent is odd": Q;
 }
 
 /** Marker in a compile error: a cube root needs every exponent divisible by 3. */
 export interface CubeRootNeedsExponentsDivisibleBy3<Q> {
+  /** The key is the message the compile error shows; `Q` is the offending quantity type. Never present at run time. */
   readonly "cannot take the cube root: some dimension exponent is not divisible by 3": Q;
 }
 
@@ -60,6 +62,7 @@ type IsUnion<T, U = T> = T extends unknown ? ([U] extends [T] ? false : true) : 
 
 /** Marker in a compile error: a list mixes quantities of different kinds or systems. */
 export interface MixedQuantities<Q> {
+  /** The key is the message the compile error shows; `Q` is the union of the mixed quantity types. Never present at run time. */
   readonly "all values must share one dimension and one system": Q;
 }
 

@@ -34,16 +34,21 @@ export type BaseDimension = (typeof baseDimensions)[number];
  * ```
  */
 export interface Dimension {
+  /** Exponent of length (base unit m in SI, cm in CGS). */
   readonly length: Exponent;
+  /** Exponent of mass (base unit kg in SI, g in CGS). */
   readonly mass: Exponent;
+  /** Exponent of time (s in both systems). */
   readonly time: Exponent;
+  /** Exponent of thermodynamic temperature (K in both systems). */
   readonly temperature: Exponent;
+  /** Exponent of amount of substance (mol in both systems). */
   readonly amount: Exponent;
+  /** Exponent of plane angle (rad in both systems; tracked, unlike in SI). */
   readonly angle: Exponent;
+  /** Exponent of solid angle (sr in both systems; tracked, unlike in SI). */
   readonly solidAngle: Exponent;
 }
-
-type Key = BaseDimension;
 
 /**
  * A concrete dimension with its seven exponents as type arguments, in the
@@ -60,12 +65,19 @@ export interface L_M_T_K_N_A_Sr<
   A extends Exponent,
   Sr extends Exponent,
 > extends Dimension {
+  /** Exponent of length, `L`. */
   readonly length: L;
+  /** Exponent of mass, `M`. */
   readonly mass: M;
+  /** Exponent of time, `T`. */
   readonly time: T;
+  /** Exponent of thermodynamic temperature, `K`. */
   readonly temperature: K;
+  /** Exponent of amount of substance, `N`. */
   readonly amount: N;
+  /** Exponent of plane angle, `A`. */
   readonly angle: A;
+  /** Exponent of solid angle, `Sr`. */
   readonly solidAngle: Sr;
 }
 
@@ -185,7 +197,7 @@ export type HasNever<D> = D extends Dimension
 export type CheckedDimension<D> = HasNever<D> extends true ? ExponentOutOfRange : D;
 
 /** Build a dimension type from a partial list of exponents (the rest are 0). */
-export type Dim<P extends Partial<Record<Key, Exponent>>> = P extends unknown
+export type Dim<P extends Partial<Record<BaseDimension, Exponent>>> = P extends unknown
   ? L_M_T_K_N_A_Sr<
   P["length"] extends Exponent ? P["length"] : 0,
   P["mass"] extends Exponent ? P["mass"] : 0,
@@ -217,7 +229,7 @@ export type IsSystemFree<D extends Dimension> = D["length"] extends 0 ? (D["mass
  * velocity.mass; // 0
  * ```
  */
-export function dimension<const P extends Partial<Record<Key, Exponent>>>(exponents: P): Dim<P> {
+export function dimension<const P extends Partial<Record<BaseDimension, Exponent>>>(exponents: P): Dim<P> {
   return {
     length: exponents.length ?? 0,
     mass: exponents.mass ?? 0,
@@ -278,7 +290,7 @@ export function isSystemFree(d: Dimension): boolean {
   return d.length === 0 && d.mass === 0;
 }
 
-const symbols: Record<Key, string> = {
+const symbols: Record<BaseDimension, string> = {
   length: "L",
   mass: "M",
   time: "T",

@@ -4,7 +4,10 @@
 export type Exponent = -12 | -11 | -10 | -9 | -8 | -7 | -6 | -5 | -4 | -3 | -2 | -1 | 0 | 1 | 2 | 3 | 4 | 5 | 6 | 7 | 8 | 9 | 10 | 11 | 12;
 
 /** Marker produced when a computed exponent leaves the supported range. */
-export type ExponentOutOfRange = { readonly "dimension exponent out of range -12..12": never };
+export type ExponentOutOfRange = {
+  /** The key is the message a compile error shows; the property never exists at run time. */
+  readonly "dimension exponent out of range -12..12": never;
+};
 
 /** `AddTable[a][b]` is a + b (never outside the range; see `QuantityWithTag`). @internal */
 export interface AddTable {

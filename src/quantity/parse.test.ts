@@ -43,6 +43,10 @@ describe("the compound-unit grammar", () => {
     expect(parseUnit("R☉").factor).toBe(6.957e8);
     expect(parseUnit("Rsol").factor).toBe(6.957e8);
     expect(parseUnit("cm^-1").factor).toBe(100);
+    // prefixed units are named with the prefix's name (SI Brochure)
+    expect(parseUnit("mK").name).toBe("millikelvin");
+    expect(parseUnit("kN").name).toBe("kilonewton");
+    expect(parseUnit("uJy").name).toBe("microjansky");
   });
   test("an empty unit is a pure number", () => {
     expect(parseQuantityText("  2.5 ").value).toBe(2.5);

@@ -84,7 +84,8 @@ function lookupSymbol(name: string): Unit | undefined {
     for (const [sym, u] of prefixable) {
       if (sym === rest) {
         const e = prefixExp(ps) as number;
-        return defineUnit(name, `${ps}${u.name}`, u.dimension, u.mantissa, u.exp10 + e);
+        const prefixName = prefixes.find((p) => p.exp10 === e)?.name ?? ps;
+        return defineUnit(name, `${prefixName}${u.name}`, u.dimension, u.mantissa, u.exp10 + e);
       }
     }
   }
@@ -256,7 +257,12 @@ const NUMBER = /^[+\-−]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+\-−]?[0-9]+
  * const { value, unit } = parseQuantityText("1.2 mas");
  * ```
  */
-export function parseQuantityText(text: string): { value: number; unit: Unit } {
+export function parseQuantityText(text: string): {
+  /** The number as written (in `unit`, not converted to any system). */
+  value: number;
+  /** The unit that followed the number (the dimensionless unit when none did). */
+  unit: Unit;
+} {
   if (typeof text !== "string") throw new ParseError(String(text), 0, "a string");
   let i = 0;
   while (i < text.length && /\s/.test(text[i] as string)) i++;

@@ -49,7 +49,9 @@ export type Quantity<D extends Dimension, S extends SystemTag> = number &
  * long chains of typed operations stay flat and quick to check.
  */
 export interface Brand<D extends Dimension, T extends SystemTag> {
+  /** The dimension `D` (compile time only: no such property exists at run time). */
   readonly [dimensionBrand]: D;
+  /** The system tag `T` (compile time only: no such property exists at run time). */
   readonly [systemBrand]: T;
 }
 
@@ -61,7 +63,9 @@ export type AnyQuantity = number & Brand<Dimension, SystemTag>;
  * quantity of any other dimension (an angle, a length…) is rejected.
  */
 export type Pure = number & {
+  /** Absent (a plain number) or the empty dimension (compile time only). */
   readonly [dimensionBrand]?: NoDimension;
+  /** Absent (a plain number) or `"SI=CGS"`: a pure number is the same in both systems (compile time only). */
   readonly [systemBrand]?: "SI=CGS";
 };
 
@@ -100,14 +104,21 @@ export type QuantityWithTag<D, T extends SystemTag> =
 
 /** Quantities that may meet a quantity of system tag `T` in a product or quotient: the same system, or system-free. */
 export type OperandFor<T extends SystemTag> = AnyQuantity & {
+  /** The operand's system tag: `T`, or `"SI=CGS"` (and either system when `T` is itself `"SI=CGS"`); compile time only. */
   readonly [systemBrand]?: T | "SI=CGS" | (T extends "SI=CGS" ? SystemName : never);
 };
 
 /** A quantity in SI, a system-free quantity or a plain number. */
-export type SIOperand = number & { readonly [systemBrand]?: "SI" | "SI=CGS" };
+export type SIOperand = number & {
+  /** Absent (a plain number), `"SI"` or `"SI=CGS"` (compile time only). */
+  readonly [systemBrand]?: "SI" | "SI=CGS";
+};
 
 /** A quantity in CGS, a system-free quantity or a plain number. */
-export type CGSOperand = number & { readonly [systemBrand]?: "CGS" | "SI=CGS" };
+export type CGSOperand = number & {
+  /** Absent (a plain number), `"CGS"` or `"SI=CGS"` (compile time only). */
+  readonly [systemBrand]?: "CGS" | "SI=CGS";
+};
 
 /**
  * Treat a plain number as a quantity of type `Q` without checking anything.

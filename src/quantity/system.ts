@@ -26,6 +26,7 @@ export interface FormatOptions {
 
 /** Anything carrying a runtime dimension: a {@link Unit} or a {@link Kind}. */
 export interface HasDimension<D extends Dimension> {
+  /** The runtime dimension object (exponents of the seven base dimensions). */
   readonly dimension: D;
 }
 

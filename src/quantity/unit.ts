@@ -138,8 +138,11 @@ export function defineUnit<D extends Dimension>(
 
 /** An SI prefix. */
 export interface Prefix {
+  /** Symbol written before a unit symbol, e.g. `"k"`, `"µ"`. */
   readonly symbol: string;
+  /** Name written before a unit name, e.g. `"kilo"`, `"micro"`. */
   readonly name: string;
+  /** Decimal exponent: the prefix multiplies a unit by 10^exp10 (exact). */
   readonly exp10: number;
 }
 

@@ -85,6 +85,7 @@ export type Medium = "vacuum" | "air";
 
 /** The compile-time medium brand of a wavelength (no run-time property). */
 export interface MediumTag<M extends Medium> {
+  /** The medium `M` (compile time only: no such property exists at run time). */
   readonly [mediumBrand]: M;
 }
 
@@ -101,19 +102,31 @@ export type VacuumWavelengthArray<S extends SystemName> = LengthArray<S> & Mediu
 export type AirWavelengthArray<S extends SystemName> = LengthArray<S> & MediumTag<"air">;
 
 /** A vacuum wavelength, or a `Length<S>` with no medium brand (taken as vacuum). An air wavelength is rejected. */
-export type NotAirWavelength<S extends SystemName> = Length<S> & { readonly [mediumBrand]?: "vacuum" };
+export type NotAirWavelength<S extends SystemName> = Length<S> & {
+  /** Absent (unbranded, taken as vacuum) or `"vacuum"` (compile time only). */
+  readonly [mediumBrand]?: "vacuum";
+};
 
 /** An array of vacuum wavelengths, or an unbranded `LengthArray<S>` (taken as vacuum); air is rejected. */
-export type NotAirWavelengthArray<S extends SystemName> = LengthArray<S> & { readonly [mediumBrand]?: "vacuum" };
+export type NotAirWavelengthArray<S extends SystemName> = LengthArray<S> & {
+  /** Absent (unbranded, taken as vacuum) or `"vacuum"` (compile time only). */
+  readonly [mediumBrand]?: "vacuum";
+};
 
 /** A standard-air wavelength or an unbranded `Length<S>`; a vacuum wavelength is rejected. */
-export type NotVacuumWavelength<S extends SystemName> = Length<S> & { readonly [mediumBrand]?: "air" };
+export type NotVacuumWavelength<S extends SystemName> = Length<S> & {
+  /** Absent (unbranded) or `"air"` (compile time only). */
+  readonly [mediumBrand]?: "air";
+};
 
 /** The medium of a branded wavelength (or array) type; `Medium` (either) when `W` is unbranded. */
 export type MediumOf<W> = W extends MediumTag<infer M> ? M : Medium;
 
 /** A length in system `S` that is either unbranded or branded with a medium in `M`. */
-export type MaybeInMedium<S extends SystemName, M extends Medium> = Length<S> & { readonly [mediumBrand]?: M };
+export type MaybeInMedium<S extends SystemName, M extends Medium> = Length<S> & {
+  /** Absent (unbranded) or a medium in `M` (compile time only). */
+  readonly [mediumBrand]?: M;
+};
 
 /**
  * A length in system `S` whose medium, if branded, is the medium of `W`:

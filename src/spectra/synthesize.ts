@@ -63,13 +63,33 @@ export type SpectrumArray<S extends SystemName> = Float64Array & Brand<Dimension
 
 /** The Gaussian width of a line: exactly one of `dopplerWidth` (b, 1/e half-width) and `gaussianSigma` (σ = b/√2). */
 export type SynthesisLineWidth<S extends SystemName> =
-  | { readonly dopplerWidth: Length<S>; readonly gaussianSigma?: never }
-  | { readonly gaussianSigma: Length<S>; readonly dopplerWidth?: never };
+  | {
+      /** Doppler width b, the 1/e half-width of the Gaussian core (> 0), a length in `S`. */
+      readonly dopplerWidth: Length<S>;
+      /** Not allowed together with `dopplerWidth`. */
+      readonly gaussianSigma?: never;
+    }
+  | {
+      /** Gaussian standard deviation σ = b/√2 (> 0), a length in `S`. */
+      readonly gaussianSigma: Length<S>;
+      /** Not allowed together with `gaussianSigma`. */
+      readonly dopplerWidth?: never;
+    };
 
 /** The strength of a line: exactly one of `tau0` (central optical depth) and `equivalentWidth`. */
 export type SynthesisLineStrength<S extends SystemName> =
-  | { readonly tau0: Pure; readonly equivalentWidth?: never }
-  | { readonly equivalentWidth: Length<S>; readonly tau0?: never };
+  | {
+      /** Central optical depth τ₀ (≥ 0), a pure number. */
+      readonly tau0: Pure;
+      /** Not allowed together with `tau0`. */
+      readonly equivalentWidth?: never;
+    }
+  | {
+      /** Equivalent width W = ∫ (1 − e^{−τ}) dλ (≥ 0), a length in `S`; converted to τ₀ on the curve of growth. */
+      readonly equivalentWidth: Length<S>;
+      /** Not allowed together with `equivalentWidth`. */
+      readonly tau0?: never;
+    };
 
 /**
  * One absorption line for {@link synthesizeSpectrum}: a centre (a

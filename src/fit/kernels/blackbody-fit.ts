@@ -168,9 +168,13 @@ export interface BlackbodyFitFlags {
 
 /** Result of a fit, plain JSON (numbers, strings, booleans, arrays, null). */
 export interface BlackbodyFitSI {
+  /** Fitted effective (blackbody) temperature T, K. */
   readonly temperatureK: number;
+  /** Standard uncertainty of T, K (from the covariance, not rescaled by χ²/dof). */
   readonly sigmaTemperatureK: number;
+  /** Fitted angular diameter θ = 2R/d, rad. */
   readonly angularDiameterRad: number;
+  /** Standard uncertainty of θ, rad (from the covariance, not rescaled by χ²/dof). */
   readonly sigmaAngularDiameterRad: number;
   /** A_V, mag (0 without extinction; the held value when not fitted). */
   readonly extinctionAV: number;
@@ -186,6 +190,7 @@ export interface BlackbodyFitSI {
   readonly logCovariance: number[][];
   /** Correlation matrix of the fitted parameters. */
   readonly correlation: number[][];
+  /** χ² = Σ pulls² at the solution (flux residuals for flux data, magnitude residuals for magnitudes). */
   readonly chi2: number;
   /** Number of channels − number of fitted parameters. */
   readonly dof: number;
@@ -197,13 +202,17 @@ export interface BlackbodyFitSI {
   readonly iterations: number;
   /** Model evaluations (each: every node of every channel, with derivatives). */
   readonly evaluations: number;
+  /** Temperature the iteration started from, K. */
   readonly startTemperatureK: number;
+  /** How the start was found: `"colour"` (colour temperature of the two best channels) or `"grid"` (61-point log grid in T). */
   readonly startMethod: "colour" | "grid";
+  /** Why the iteration stopped (`"maxIterations"` and `"stalled"` also set `flags.notConverged`). */
   readonly stopReason: FitStopReason;
   /** Model per channel in its data unit (f_λ W m⁻³ or AB mag). */
   readonly model: number[];
   /** (data − model)/σ per channel. */
   readonly pulls: number[];
+  /** Quality flags: check them before trusting the result. */
   readonly flags: BlackbodyFitFlags;
 }
 

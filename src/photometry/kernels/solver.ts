@@ -74,7 +74,7 @@ export const STAR_QUANTITIES = [
   "angularDiameterRad",
 ] as const;
 
-/** One of the six solver quantities. */
+/** One of the six solver quantities, named with their SI unit: `"temperatureK"`, `"luminosityW"`, `"radiusM"`, `"distanceM"`, `"bolometricFluxWm2"`, `"angularDiameterRad"`. */
 export type StarQuantity = (typeof STAR_QUANTITIES)[number];
 
 /** Kinds of input the solver accepts (the six quantities plus parallax and apparent bolometric magnitude). */
@@ -102,7 +102,9 @@ export interface StarObservationsSI {
 
 /** A derived quantity: value, first-order standard uncertainty, and whether it was also an input. */
 export interface DerivedQuantitySI {
+  /** Best estimate, in the unit named by the field (K, W, m, W m⁻², rad or mag): exp of the least-squares ln q (the first-order, log-normal median value); the magnitudes follow from it. */
   readonly value: number;
+  /** First-order standard uncertainty, same unit as `value`. */
   readonly sigma: number;
   /** σ / |value| (for the magnitudes: σ in mag). */
   readonly relativeSigma: number;
@@ -128,11 +130,17 @@ export interface StarConsistency {
 
 /** Result of {@link solveStarSI}; plain JSON (numbers, booleans, strings, arrays). */
 export interface StarSolutionSI {
+  /** Effective temperature, K. */
   readonly temperatureK: DerivedQuantitySI;
+  /** Luminosity L = 4πR²σT⁴, W. */
   readonly luminosityW: DerivedQuantitySI;
+  /** Radius, m. */
   readonly radiusM: DerivedQuantitySI;
+  /** Distance, m. */
   readonly distanceM: DerivedQuantitySI;
+  /** Bolometric flux at the observer f = L/(4πd²), W m⁻². */
   readonly bolometricFluxWm2: DerivedQuantitySI;
+  /** Angular diameter θ = 2R/d, rad. */
   readonly angularDiameterRad: DerivedQuantitySI;
   /** Parallax 1 au / d, rad. */
   readonly parallaxRad: DerivedQuantitySI;
@@ -146,6 +154,7 @@ export interface StarSolutionSI {
   readonly lnCovariance: number[][];
   /** 6 × 6 covariance of the quantities in SI units (products of the row and column units). */
   readonly covariance: number[][];
+  /** χ² consistency of the inputs (chi2 = 0, dof = 0, p = 1 when exactly determined). */
   readonly consistency: StarConsistency;
 }
 

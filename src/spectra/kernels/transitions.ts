@@ -164,7 +164,7 @@ export const HYDROGEN_SERIES = Object.freeze({
   humphreys: 6,
 } as const);
 
-/** A named series: Lyman (n₁ = 1), Balmer (2), Paschen (3), Brackett (4), Pfund (5), Humphreys (6). */
+/** A named series: Lyman (n₁ = 1), Balmer (2), Paschen (3), Brackett (4), Pfund (5), Humphreys (6); the keys of {@link hydrogenSeries}. */
 export type SeriesName = keyof typeof HYDROGEN_SERIES;
 
 /**
