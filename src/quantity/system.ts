@@ -153,12 +153,14 @@ function makeSystem<S extends SystemName>(name: S, exp10: (d: Dimension) => numb
   // rounded operation for decimal units, no branches, no allocation.
   const toBase =
     name === "SI"
-      ? (value: number, unit: Unit): number => (value * unit.scales.mulSI) / unit.scales.divSI
-      : (value: number, unit: Unit): number => (value * unit.scales.mulCGS) / unit.scales.divCGS;
+      ? (value: number, unit: Unit): number => (unit.scales.divSI === 1 ? value * unit.scales.mulSI : value / unit.scales.divSI)
+      : (value: number, unit: Unit): number =>
+          unit.scales.divCGS === 1 ? value * unit.scales.mulCGS : value / unit.scales.divCGS;
   const fromBase =
     name === "SI"
-      ? (value: number, unit: Unit): number => (value * unit.scales.divSI) / unit.scales.mulSI
-      : (value: number, unit: Unit): number => (value * unit.scales.divCGS) / unit.scales.mulCGS;
+      ? (value: number, unit: Unit): number => (unit.scales.mulSI === 1 ? value * unit.scales.divSI : value / unit.scales.mulSI)
+      : (value: number, unit: Unit): number =>
+          unit.scales.mulCGS === 1 ? value * unit.scales.divCGS : value / unit.scales.mulCGS;
   const base: Record<keyof Dimension, string> = {
     length: name === "SI" ? "m" : "cm",
     mass: name === "SI" ? "kg" : "g",

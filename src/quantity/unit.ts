@@ -84,7 +84,12 @@ for (let n = -22; n <= 22; n++) {
  */
 export function times10(v: number, n: number): number {
   const i = n + 22;
-  if (i >= 0 && i <= 44) return (v * (MUL[i] as number)) / (DIV[i] as number);
+  if (i >= 0 && i <= 44) {
+    // one of the two is 1; skipping the division by 1 keeps the common
+    // multiply path as cheap as hand-written code (the branch is predictable)
+    const d = DIV[i] as number;
+    return d === 1 ? v * (MUL[i] as number) : v / d;
+  }
   return v * Number(`1e${n}`);
 }
 
