@@ -14,4 +14,10 @@ export interface BenchCase {
   subject: () => number;
   /** Work items per call (rows, stars, wavelengths) for a throughput column. */
   items?: number;
+  /**
+   * Whether baseline and subject compute the same numbers (default true); set
+   * false where the baseline is a reference cost (e.g. one Planck evaluation
+   * vs one band fraction), so differing checksums are expected.
+   */
+  sameWork?: boolean;
 }

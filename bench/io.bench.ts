@@ -10,14 +10,8 @@
  */
 import { CsvParser } from "../src/cli/io/csv-read";
 import { formatCsvRow } from "../src/cli/io/write";
+import type { BenchCase } from "./case";
 
-/** Benchmark case, as the bench runner expects it. */
-interface BenchCase {
-  name: string;
-  setup?: () => void;
-  baseline: () => number;
-  subject: () => number;
-}
 
 const ROWS = 100_000;
 const CHUNK = 65_536;

@@ -78,7 +78,8 @@ for (const file of files) {
     const mb = median(b);
     const ms = median(s);
     const rate = c.items !== undefined ? `  (${((c.items / ms) * 1e3).toExponential(2)} items/s)` : "";
-    const agree = Math.abs(checkB - checkS) <= 1e-9 * Math.max(Math.abs(checkB), Math.abs(checkS)) ? "" : "  [checksums differ]";
+    const same = Math.abs(checkB - checkS) <= 1e-9 * Math.max(Math.abs(checkB), Math.abs(checkS));
+    const agree = c.sameWork === false ? "  (reference cost, different work)" : same ? "" : "  [checksums differ]";
     console.log(`  ${c.name}\n    baseline ${fmt(mb)} ms   subject ${fmt(ms)} ms   ratio ${(ms / mb).toFixed(3)}${rate}${agree}`);
   }
   console.log("");

@@ -18,13 +18,8 @@ import { synthesizeSpectrum, vacuumWavelength, type SynthesisLine } from "../src
 import { CGS, SI } from "../src/quantity/system";
 import { assume } from "../src/quantity/quantity";
 import type { Length } from "../src/quantity/aliases";
+import type { BenchCase } from "./case";
 
-interface BenchCase {
-  name: string;
-  setup?: () => void;
-  baseline: () => number;
-  subject: () => number;
-}
 
 const N_GRID = 100_000;
 const N_LINES = 100;
@@ -108,6 +103,7 @@ function checksum(f: Float64Array): number {
 export const cases: BenchCase[] = [
   {
     name: "synthesis: 1e5-point grid, 100 Voigt lines (baseline: 100 Gaussian lines, full grid, plain loop)",
+    sameWork: false,
     setup,
     baseline,
     subject: () => {
@@ -117,6 +113,7 @@ export const cases: BenchCase[] = [
   },
   {
     name: "synthesis, typed path in SI: synthesizeSpectrum(SI, …) (baseline as above)",
+    sameWork: false,
     setup,
     baseline,
     subject: () =>
@@ -131,6 +128,7 @@ export const cases: BenchCase[] = [
   },
   {
     name: "synthesis, typed path in CGS: grid and lines in cm, copied to SI per call (baseline as above)",
+    sameWork: false,
     setup,
     baseline,
     // the CGS continuum is 0.1 × the SI one: scale the checksum back for comparability
