@@ -1,5 +1,5 @@
 /**
- * Every ```ts example in the README and in the TSDoc of the public modules
+ * Every ```ts example in the README, the guides and the TSDoc of the public modules
  * must compile against the library. The examples are written to a cache
  * folder with `from "starlume"` pointed at src/index.ts and type-checked in
  * one TypeScript program; each example is one test.
@@ -53,6 +53,10 @@ const sources: string[] = [];
 walk(join(root, "src"), sources);
 const examples: Example[] = [];
 examples.push(...blocks(readFileSync(join(root, "README.md"), "utf8"), join(root, "README.md"), false));
+for (const name of readdirSync(join(root, "docs/guides")).filter((n) => n.endsWith(".md")).sort()) {
+  const file = join(root, "docs/guides", name);
+  examples.push(...blocks(readFileSync(file, "utf8"), file, false));
+}
 for (const f of sources) {
   const text = readFileSync(f, "utf8");
   // only TSDoc examples (blocks inside /** … */ after an @example tag)
