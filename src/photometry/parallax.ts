@@ -19,7 +19,7 @@
  * of a noisy number, its distribution is skewed, and the first-order
  * uncertainty σ_d = d σ_p/p stops meaning anything (Lutz & Kelker 1973,
  * PASP 85, 573, for the related bias in samples selected on parallax; the
- * 0.1 threshold is common practice, e.g. in work with Gaia parallaxes).
+ * 0.1 threshold is common practice in work with large astrometric surveys).
  * {@link parallaxDistance} raises `inversionBiased` above the threshold;
  * use a probabilistic estimate with an explicit distance prior there.
  *

@@ -15,7 +15,7 @@
  *
  * **Bias warning.** Inverting a parallax is a biased distance estimator once
  * the fractional parallax error σ_p/p exceeds about 0.1–0.2 (common practice;
- * see e.g. Lutz & Kelker 1973, PASP 85, 573, and the many discussions of Gaia
+ * see e.g. Lutz & Kelker 1973, PASP 85, 573, and later work on astrometric
  * parallaxes): 1/p is a non-linear transform of a noisy quantity, its
  * distribution is skewed, and the first-order uncertainty σ_d = d σ_p / p is
  * then meaningless. Beyond that threshold a probabilistic distance estimate
