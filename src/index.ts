@@ -10,6 +10,7 @@
 export * from "./quantity/index";
 export { constants } from "./constants/index";
 export type { Constant } from "./constants/index";
+export * from "./law/index";
 export * from "./radiation/index";
 export * from "./photometry/index";
 export * from "./spectra/index";

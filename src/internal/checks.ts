@@ -8,7 +8,7 @@
  */
 
 /** Format a value for an error message without losing sign or NaN. */
-function show(value: number): string {
+export function show(value: number): string {
   return Object.is(value, -0) ? "-0" : String(value);
 }
 

@@ -26,7 +26,7 @@
  *
  * @module
  */
-import type { NotAirWavelength } from "../spectra/medium";
+import type { NotAirWavelength } from "../quantity/medium";
 import { C } from "../constants/values";
 import { kinds } from "../quantity/aliases";
 import type { Dimensionless, Frequency, Length, PhotonRadiance, Radiance, Temperature } from "../quantity/aliases";

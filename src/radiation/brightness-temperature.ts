@@ -25,7 +25,7 @@
  *
  * @module
  */
-import type { NotAirWavelength } from "../spectra/medium";
+import type { NotAirWavelength } from "../quantity/medium";
 import { kinds } from "../quantity/aliases";
 import type {
   Frequency,

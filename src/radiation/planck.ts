@@ -21,13 +21,13 @@
  *
  * @module
  */
-import type { NotAirWavelength, NotAirWavelengthArray } from "../spectra/medium";
-import { arrayToSI, arrayFromSIInPlace, positive } from "../internal/typed";
-import { eval2, positiveSI } from "./internal";
+import type { NotAirWavelength, NotAirWavelengthArray } from "../quantity/medium";
+import type { BatchResult } from "../law/batch";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type {
   Frequency,
-  LengthArray,
   Length,
   SpectralPhotonRadiancePerFrequency,
   SpectralPhotonRadiancePerWavelength,
@@ -47,28 +47,17 @@ import type { Product, Quotient } from "../quantity/arithmetic";
 import type { SolidAngle } from "../quantity/aliases";
 import type { UnitSystem } from "../quantity/system";
 import {
-  planckPhotonRadianceFrequencySI,
-  planckPhotonRadianceWavelengthSI,
-  planckPhotonRadianceWavenumberSI,
-  planckRadianceFrequencyDerivativeTSI,
-  planckRadianceFrequencySI,
-  planckRadianceTemperatureBatchSI,
-  planckRadianceWavelengthDerivativeTSI,
-  planckRadianceWavelengthBatchSI,
-  planckRadianceWavelengthSI,
-  planckRadianceWavenumberSI,
-} from "./kernels/planck";
+  FORM_LAMBDA_ENERGY,
+  FORM_LAMBDA_PHOTON,
+  FORM_NU_ENERGY,
+  FORM_NU_PHOTON,
+  FORM_SIGMA_ENERGY,
+  FORM_SIGMA_PHOTON,
+  SHAPE_PLANCK,
+  spectralCore,
+} from "./kernels/planck-core";
+import { planckLambdaDerivativeTUnchecked, planckNuDerivativeTUnchecked } from "./kernels/planck";
 
-const L = kinds.length.dimension;
-const K = kinds.wavenumber.dimension;
-const BL = kinds.spectralRadiancePerWavelength.dimension;
-const BN = kinds.spectralRadiancePerFrequency.dimension;
-const BS = kinds.spectralRadiancePerWavenumber.dimension;
-const NL = kinds.spectralPhotonRadiancePerWavelength.dimension;
-const NN = kinds.spectralPhotonRadiancePerFrequency.dimension;
-const NS = kinds.spectralPhotonRadiancePerWavenumber.dimension;
-const T = kinds.temperature.dimension;
-const F = kinds.frequency.dimension;
 const DBL = dimension({ length: -1, mass: 1, time: -3, temperature: -1, solidAngle: -1 }) as SpectralRadiancePerWavelengthPerTemperatureDimension;
 const DBN = dimension({ mass: 1, time: -2, temperature: -1, solidAngle: -1 }) as SpectralRadiancePerFrequencyPerTemperatureDimension;
 
@@ -99,6 +88,60 @@ export const derivativeKinds = {
   },
 } as const;
 
+const wavelength = lawInput("wavelength", kinds.length, { vacuum: true });
+const frequency = lawInput("frequency", kinds.frequency);
+const wavenumber = lawInput("wavenumber", kinds.wavenumber);
+const temperature = lawInput("temperature", kinds.temperature);
+
+const bLambda = defineLaw({
+  name: "B_λ",
+  inputs: [wavelength, temperature],
+  result: kinds.spectralRadiancePerWavelength,
+  kernel: (l, t) => spectralCore(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, l, t),
+});
+const bNu = defineLaw({
+  name: "B_ν",
+  inputs: [frequency, temperature],
+  result: kinds.spectralRadiancePerFrequency,
+  kernel: (f, t) => spectralCore(SHAPE_PLANCK, FORM_NU_ENERGY, f, t),
+});
+const bSigma = defineLaw({
+  name: "B_σ̃",
+  inputs: [wavenumber, temperature],
+  result: kinds.spectralRadiancePerWavenumber,
+  kernel: (k, t) => spectralCore(SHAPE_PLANCK, FORM_SIGMA_ENERGY, k, t),
+});
+const nLambda = defineLaw({
+  name: "photon radiance N_λ",
+  inputs: [wavelength, temperature],
+  result: kinds.spectralPhotonRadiancePerWavelength,
+  kernel: (l, t) => spectralCore(SHAPE_PLANCK, FORM_LAMBDA_PHOTON, l, t),
+});
+const nNu = defineLaw({
+  name: "photon radiance N_ν",
+  inputs: [frequency, temperature],
+  result: kinds.spectralPhotonRadiancePerFrequency,
+  kernel: (f, t) => spectralCore(SHAPE_PLANCK, FORM_NU_PHOTON, f, t),
+});
+const nSigma = defineLaw({
+  name: "photon radiance N_σ̃",
+  inputs: [wavenumber, temperature],
+  result: kinds.spectralPhotonRadiancePerWavenumber,
+  kernel: (k, t) => spectralCore(SHAPE_PLANCK, FORM_SIGMA_PHOTON, k, t),
+});
+const dbLambda = defineLaw({
+  name: "∂B_λ/∂T",
+  inputs: [wavelength, temperature],
+  result: derivativeKinds.spectralRadiancePerWavelengthPerTemperature,
+  kernel: planckLambdaDerivativeTUnchecked,
+});
+const dbNu = defineLaw({
+  name: "∂B_ν/∂T",
+  inputs: [frequency, temperature],
+  result: derivativeKinds.spectralRadiancePerFrequencyPerTemperature,
+  kernel: planckNuDerivativeTUnchecked,
+});
+
 /**
  * Spectral radiance per unit wavelength, B_λ(λ, T) = (2hc²/λ⁵) / (exp(hc/λkT) − 1).
  *
@@ -119,7 +162,7 @@ export function planckRadianceWavelength<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralRadiancePerWavelength<S> {
-  return eval2(sys, planckRadianceWavelengthSI, "B_λ", BL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralRadiancePerWavelength<S>;
+  return bLambda(sys, wavelength, temperature);
 }
 
 /**
@@ -140,7 +183,7 @@ export function planckRadianceFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): SpectralRadiancePerFrequency<S> {
-  return eval2(sys, planckRadianceFrequencySI, "B_ν", BN, "frequency", frequency, F, "temperature", temperature, T) as SpectralRadiancePerFrequency<S>;
+  return bNu(sys, frequency, temperature);
 }
 
 /**
@@ -162,7 +205,7 @@ export function planckRadianceWavenumber<S extends SystemName>(
   wavenumber: Wavenumber<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralRadiancePerWavenumber<S> {
-  return eval2(sys, planckRadianceWavenumberSI, "B_σ̃", BS, "wavenumber", wavenumber, K, "temperature", temperature, T) as SpectralRadiancePerWavenumber<S>;
+  return bSigma(sys, wavenumber, temperature);
 }
 
 /**
@@ -183,7 +226,7 @@ export function planckPhotonRadianceWavelength<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralPhotonRadiancePerWavelength<S> {
-  return eval2(sys, planckPhotonRadianceWavelengthSI, "photon radiance N_λ", NL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralPhotonRadiancePerWavelength<S>;
+  return nLambda(sys, wavelength, temperature);
 }
 
 /**
@@ -204,7 +247,7 @@ export function planckPhotonRadianceFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): SpectralPhotonRadiancePerFrequency<S> {
-  return eval2(sys, planckPhotonRadianceFrequencySI, "photon radiance N_ν", NN, "frequency", frequency, F, "temperature", temperature, T) as SpectralPhotonRadiancePerFrequency<S>;
+  return nNu(sys, frequency, temperature);
 }
 
 /**
@@ -225,7 +268,7 @@ export function planckPhotonRadianceWavenumber<S extends SystemName>(
   wavenumber: Wavenumber<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralPhotonRadiancePerWavenumber<S> {
-  return eval2(sys, planckPhotonRadianceWavenumberSI, "photon radiance N_σ̃", NS, "wavenumber", wavenumber, K, "temperature", temperature, T) as SpectralPhotonRadiancePerWavenumber<S>;
+  return nSigma(sys, wavenumber, temperature);
 }
 
 /**
@@ -248,7 +291,7 @@ export function planckRadianceWavelengthDerivativeT<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralRadiancePerWavelengthPerTemperature<S> {
-  return eval2(sys, planckRadianceWavelengthDerivativeTSI, "∂B_λ/∂T", DBL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralRadiancePerWavelengthPerTemperature<S>;
+  return dbLambda(sys, wavelength, temperature);
 }
 
 /**
@@ -269,16 +312,9 @@ export function planckRadianceFrequencyDerivativeT<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): SpectralRadiancePerFrequencyPerTemperature<S> {
-  return eval2(sys, planckRadianceFrequencyDerivativeTSI, "∂B_ν/∂T", DBN, "frequency", frequency, F, "temperature", temperature, T) as SpectralRadiancePerFrequencyPerTemperature<S>;
+  return dbNu(sys, frequency, temperature);
 }
 
-/** Result of a typed batch: the values, and the indices of rows written as NaN. */
-export interface BatchResult<A> {
-  /** Output array (NaN in invalid rows). */
-  readonly values: A;
-  /** Ascending indices of invalid rows (non-finite or non-positive input); empty when all are valid. */
-  readonly invalid: number[];
-}
 
 /**
  * B_λ over many wavelengths at one temperature. Never throws part-way: a row
@@ -301,9 +337,7 @@ export function planckRadianceWavelengthBatch<S extends SystemName>(
   wavelengths: NotAirWavelengthArray<NoInfer<S>>,
   temperature: Temperature,
 ): BatchResult<SpectralRadiancePerWavelengthArray<S>> {
-  positive(sys, "temperature", temperature, T);
-  const r = planckRadianceWavelengthBatchSI(arrayToSI(sys, wavelengths, L), temperature);
-  return batchIn(sys, r.values, r.invalid, BL) as BatchResult<SpectralRadiancePerWavelengthArray<S>>;
+  return bLambda.batch(sys, wavelengths, temperature);
 }
 
 /**
@@ -325,28 +359,7 @@ export function planckRadianceTemperatureBatch<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperatures: TemperatureArray,
 ): BatchResult<SpectralRadiancePerWavelengthArray<S>> {
-  const r = planckRadianceTemperatureBatchSI(positiveSI(sys, "wavelength", wavelength, L), temperatures);
-  return batchIn(sys, r.values, r.invalid, BL) as BatchResult<SpectralRadiancePerWavelengthArray<S>>;
-}
-
-/**
- * An SI batch result in the caller's system, in place. A row whose value is
- * finite in SI but overflows on conversion (possible in CGS, where B_λ is ten
- * times its SI number) becomes NaN and joins `invalid`, which stays ascending.
- */
-function batchIn(sys: UnitSystem<SystemName>, values: Float64Array, invalid: number[], d: Dimension): BatchResult<Float64Array> {
-  arrayFromSIInPlace(sys, values, d);
-  if (sys.exp10(d) >= 0) return { values, invalid };
-  let added = false;
-  for (let i = 0; i < values.length; i++) {
-    if (values[i] === Infinity) {
-      values[i] = NaN;
-      invalid.push(i);
-      added = true;
-    }
-  }
-  if (added) invalid.sort((a, b) => a - b);
-  return { values, invalid };
+  return bLambda.batch(sys, wavelength, temperatures);
 }
 
 /** A quantity whose dimension is "per steradian" (solid-angle exponent −1). */

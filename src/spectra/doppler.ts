@@ -33,7 +33,7 @@ import { kinds } from "../quantity/aliases";
 import type { Dimensionless, Length, LengthArray, Velocity } from "../quantity/aliases";
 import type { Pure, SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import type { BatchResult } from "../radiation/planck";
+import type { BatchResult } from "../law/batch";
 import { show } from "./checks";
 import {
   classicalDopplerWavelengthSI,
@@ -249,7 +249,7 @@ export function dopplerShiftArray<S extends SystemName, A extends LengthArray<S>
   const k = sys.exp10(L);
   if (m === "relativistic" && k === 0) {
     const r = dopplerShiftWavelengthsSI(restWavelengths, v, out);
-    return { values: out as A, invalid: r.invalid };
+    return { values: out as A, invalid: r.invalid, reasons: r.invalid.map(() => "invalid input (TODO: reason)") };
   }
   const invalid: number[] = [];
   const z = m === "relativistic" ? redshiftFromVelocitySI(v) : v / C;
@@ -264,5 +264,5 @@ export function dopplerShiftArray<S extends SystemName, A extends LengthArray<S>
       invalid.push(i);
     }
   }
-  return { values: out as A, invalid };
+  return { values: out as A, invalid, reasons: invalid.map(() => "invalid input (TODO: reason)") };
 }

@@ -57,12 +57,40 @@
  *
  * @module
  */
+export type {
+  AirWavelength,
+  AirWavelengthArray,
+  MaybeInMedium,
+  Medium,
+  MediumOf,
+  MediumTag,
+  NotAirWavelength,
+  NotAirWavelengthArray,
+  NotVacuumWavelength,
+  NotVacuumWavelengthArray,
+  SameMediumAs,
+  VacuumWavelength,
+  VacuumWavelengthArray,
+  WavelengthOnGrid,
+} from "../quantity/medium";
+import type {
+  AirWavelength,
+  AirWavelengthArray,
+  MediumTag,
+  NotAirWavelength,
+  NotAirWavelengthArray,
+  NotVacuumWavelength,
+  NotVacuumWavelengthArray,
+  SameMediumAs,
+  VacuumWavelength,
+  VacuumWavelengthArray,
+} from "../quantity/medium";
 import { arrayFromSIInPlace, arrayToSI, fromSI, positive, toSI } from "../internal/typed";
 import { kinds } from "../quantity/aliases";
 import type { Dimensionless, Length, LengthArray } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import type { BatchResult } from "../radiation/planck";
+import type { BatchResult } from "../law/batch";
 import { inRangeSI } from "./checks";
 import {
   AIR_WAVELENGTH_MAX_M,
@@ -76,70 +104,6 @@ import {
   vacuumToAirWavelengthsSI,
 } from "./kernels/air-vacuum";
 
-declare const mediumBrand: unique symbol;
-
-const L = kinds.length.dimension;
-
-/** The medium a wavelength is measured in: `"vacuum"` or (standard) `"air"`. */
-export type Medium = "vacuum" | "air";
-
-/** The compile-time medium brand of a wavelength (no run-time property). */
-export interface MediumTag<M extends Medium> {
-  /** The medium `M` (compile time only: no such property exists at run time). */
-  readonly [mediumBrand]: M;
-}
-
-/** A wavelength in vacuum: `Length<S>` branded `"vacuum"`. */
-export type VacuumWavelength<S extends SystemName> = Length<S> & MediumTag<"vacuum">;
-
-/** A wavelength in standard air: `Length<S>` branded `"air"`. */
-export type AirWavelength<S extends SystemName> = Length<S> & MediumTag<"air">;
-
-/** A `Float64Array` of vacuum wavelengths. */
-export type VacuumWavelengthArray<S extends SystemName> = LengthArray<S> & MediumTag<"vacuum">;
-
-/** A `Float64Array` of standard-air wavelengths. */
-export type AirWavelengthArray<S extends SystemName> = LengthArray<S> & MediumTag<"air">;
-
-/** A vacuum wavelength, or a `Length<S>` with no medium brand (taken as vacuum). An air wavelength is rejected. */
-export type NotAirWavelength<S extends SystemName> = Length<S> & {
-  /** Absent (unbranded, taken as vacuum) or `"vacuum"` (compile time only). */
-  readonly [mediumBrand]?: "vacuum";
-};
-
-/** An array of vacuum wavelengths, or an unbranded `LengthArray<S>` (taken as vacuum); air is rejected. */
-export type NotAirWavelengthArray<S extends SystemName> = LengthArray<S> & {
-  /** Absent (unbranded, taken as vacuum) or `"vacuum"` (compile time only). */
-  readonly [mediumBrand]?: "vacuum";
-};
-
-/** A standard-air wavelength or an unbranded `Length<S>`; a vacuum wavelength is rejected. */
-export type NotVacuumWavelength<S extends SystemName> = Length<S> & {
-  /** Absent (unbranded) or `"air"` (compile time only). */
-  readonly [mediumBrand]?: "air";
-};
-
-/** The medium of a branded wavelength (or array) type; `Medium` (either) when `W` is unbranded. */
-export type MediumOf<W> = W extends MediumTag<infer M> ? M : Medium;
-
-/** A length in system `S` that is either unbranded or branded with a medium in `M`. */
-export type MaybeInMedium<S extends SystemName, M extends Medium> = Length<S> & {
-  /** Absent (unbranded) or a medium in `M` (compile time only). */
-  readonly [mediumBrand]?: M;
-};
-
-/**
- * A length in system `S` whose medium, if branded, is the medium of `W`:
- * an unbranded length, or one branded like `W` (anything, when `W` itself
- * is unbranded).
- */
-export type SameMediumAs<S extends SystemName, W> = MaybeInMedium<S, MediumOf<W>>;
-
-/**
- * The type of a single wavelength taken from a grid of type `G`: branded
- * like the grid, or a plain `Length<S>` when the grid is unbranded.
- */
-export type WavelengthOnGrid<S extends SystemName, G> = G extends MediumTag<infer M> ? Length<S> & MediumTag<M> : Length<S>;
 
 /**
  * Brand a length as a vacuum wavelength. Throws unless it is finite and > 0.
@@ -212,12 +176,13 @@ export function vacuumWavelengths<S extends SystemName>(
  */
 export function airWavelengths<S extends SystemName>(
   sys: UnitSystem<S>,
-  lengths: LengthArray<NoInfer<S>> & { readonly [mediumBrand]?: "air" },
+  lengths: NotVacuumWavelengthArray<NoInfer<S>>,
 ): AirWavelengthArray<S> {
   void sys;
   return lengths as Float64Array as AirWavelengthArray<S>;
 }
 
+const L = kinds.length.dimension;
 const VAC_NOTE = "standard-air formula range, 200 nm to 20 µm in air";
 const AIR_NOTE = "standard-air formula range";
 
@@ -310,7 +275,7 @@ export function vacuumToAirArray<S extends SystemName>(
 ): BatchResult<AirWavelengthArray<S>> {
   const out = new Float64Array(wavelengths.length);
   const r = vacuumToAirWavelengthsSI(arrayToSI(sys, wavelengths, L), out);
-  return { values: arrayFromSIInPlace(sys, out, L) as AirWavelengthArray<S>, invalid: r.invalid };
+  return { values: arrayFromSIInPlace(sys, out, L) as AirWavelengthArray<S>, invalid: r.invalid, reasons: r.invalid.map(() => "invalid input (TODO: reason)") };
 }
 
 /**
@@ -328,5 +293,5 @@ export function airToVacuumArray<S extends SystemName>(
 ): BatchResult<VacuumWavelengthArray<S>> {
   const out = new Float64Array(wavelengths.length);
   const r = airToVacuumWavelengthsSI(arrayToSI(sys, wavelengths, L), out);
-  return { values: arrayFromSIInPlace(sys, out, L) as VacuumWavelengthArray<S>, invalid: r.invalid };
+  return { values: arrayFromSIInPlace(sys, out, L) as VacuumWavelengthArray<S>, invalid: r.invalid, reasons: r.invalid.map(() => "invalid input (TODO: reason)") };
 }

@@ -38,7 +38,7 @@ import { kinds } from "../quantity/aliases";
 import type { Frequency, Length, LengthArray, Mass, Temperature, Velocity, Wavenumber, WavenumberArray } from "../quantity/aliases";
 import type { AnyQuantity, SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import type { BatchResult } from "../radiation/planck";
+import type { BatchResult } from "../law/batch";
 import { gaussianProfileSI, lorentzianProfileSI, voigtProfileSI, voigtProfilesSI } from "./kernels/profiles";
 import {
   atomicMassKg,
@@ -154,7 +154,7 @@ export function voigtProfileArray<S extends SystemName>(
   if (dopplerWidth === 0) positive(sys, "lorentzHwhm", lorentzHwhm, L);
   const out = new Float64Array(offsets.length);
   const r = voigtProfilesSI(arrayToSI(sys, offsets, L), toSI(sys, dopplerWidth, L), toSI(sys, lorentzHwhm, L), out);
-  return { values: arrayFromSIInPlace(sys, out, K) as WavenumberArray<S>, invalid: r.invalid };
+  return { values: arrayFromSIInPlace(sys, out, K) as WavenumberArray<S>, invalid: r.invalid, reasons: r.invalid.map(() => "invalid input (TODO: reason)") };
 }
 
 /**

@@ -195,6 +195,15 @@ export function planckLambdaDerivativeTUnchecked(lambda: number, T: number): num
   return (b / T) * f;
 }
 
+/** ∂B_ν/∂T without input checks (see {@link planckRadianceFrequencyDerivativeTSI}); +Infinity signals overflow. @internal */
+export function planckNuDerivativeTUnchecked(nu: number, T: number): number {
+  const b = spectralCore(SHAPE_PLANCK, FORM_NU_ENERGY, nu, T);
+  if (b === 0 || b === Infinity) return b;
+  const x = xOf(FORM_NU_ENERGY, nu, T);
+  const f = x === 0 ? 1 : x / -Math.expm1(-x);
+  return (b / T) * f;
+}
+
 /**
  * Temperature derivative of the spectral radiance per unit wavelength,
  * ∂B_λ/∂T = (B_λ/T) · x/(1 − e^−x), x = hc/(λkT)
@@ -236,11 +245,8 @@ export function planckRadianceWavelengthDerivativeTSI(wavelengthM: number, tempe
  * ```
  */
 export function planckRadianceFrequencyDerivativeTSI(frequencyHz: number, temperatureK: number): number {
-  const b = checked(FORM_NU_ENERGY, "frequency", "Hz", frequencyHz, temperatureK, "spectral radiance B_ν");
-  if (b === 0) return 0;
-  const x = xOf(FORM_NU_ENERGY, frequencyHz, temperatureK);
-  const f = x === 0 ? 1 : x / -Math.expm1(-x);
-  const d = (b / temperatureK) * f;
+  checked(FORM_NU_ENERGY, "frequency", "Hz", frequencyHz, temperatureK, "spectral radiance B_ν");
+  const d = planckNuDerivativeTUnchecked(frequencyHz, temperatureK);
   if (d === Infinity) {
     throw overflowError("∂B_ν/∂T", `frequency=${frequencyHz} Hz, temperature=${temperatureK} K`);
   }
