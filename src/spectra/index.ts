@@ -27,6 +27,7 @@ export type {
   NotAirWavelength,
   NotAirWavelengthArray,
   NotVacuumWavelength,
+  NotVacuumWavelengthArray,
   SameMediumAs,
   VacuumWavelength,
   VacuumWavelengthArray,
