@@ -14,7 +14,7 @@
 export interface BenchCase {
   /** Short name for the table, e.g. "B_λ typed scalar (SI)". */
   name: string;
-  /** What exactly is compared (printed with --verbose and written to BENCH_JSON). */
+  /** What exactly is compared (written to BENCH_JSON with the results). */
   note?: string;
   /** Work items per call (rows, stars, wavelengths): times are reported per item. */
   items: number;
