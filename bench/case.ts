@@ -1,23 +1,32 @@
 /**
- * One benchmark comparison: a hand-written plain-number `baseline` and the
- * `subject` (typed path or kernel) doing the same work. Both return a
- * checksum so the work cannot be optimised away.
+ * One benchmark comparison: a hand-written plain-number `baseline` (what a
+ * competent engineer would write on plain numbers, without the library) and
+ * the `subject` (typed path or kernel) doing the same work. Both return a
+ * checksum; the runner flags the case when the two disagree beyond
+ * `tolerance` (relative; 1e-12 unless the case declares and justifies more).
+ *
+ * Rules for baselines (see bench/run.ts): no `**` or `Math.pow` (powers by
+ * multiplication), `Math.expm1` where the formula has e^x − 1, each case's
+ * loops written out as their own function literals (no shared closure
+ * factory: it would make the call sites inside megamorphic and distort the
+ * ratio).
  */
 export interface BenchCase {
-  /** What is measured, e.g. "Planck B_λ over 10⁶ wavelengths". */
+  /** Short name for the table, e.g. "B_λ typed scalar (SI)". */
   name: string;
+  /** What exactly is compared (written to BENCH_JSON with the results). */
+  note?: string;
+  /** Work items per call (rows, stars, wavelengths): times are reported per item. */
+  items: number;
   /** Builds inputs once, before timing. */
   setup?: () => void;
   /** The plain-number version written by hand. */
   baseline: () => number;
   /** The library path under test. */
   subject: () => number;
-  /** Work items per call (rows, stars, wavelengths) for a throughput column. */
-  items?: number;
   /**
-   * Whether baseline and subject compute the same numbers (default true); set
-   * false where the baseline is a reference cost (e.g. one Planck evaluation
-   * vs one band fraction), so differing checksums are expected.
+   * Relative tolerance of the checksum comparison when the two sides cannot
+   * agree to 1e-12 (e.g. two iterative fits), with the reason.
    */
-  sameWork?: boolean;
+  tolerance?: { rel: number; why: string };
 }

@@ -3,8 +3,9 @@
  *
  * Data: 10⁵ rows × 6 unquoted fields of numbers and short names, built once in
  * `setup` (about 4 MB of text). Baseline: the naive
- * `text.split("\n").map((l) => l.split(","))`, which handles no quoting, no
- * CRLF and no errors; subject: the RFC 4180 streaming {@link CsvParser} fed
+ * `text.split("\n").map((l) => l.split(","))` a script author would write for
+ * this table (it handles no quoting, no CRLF and no errors, none of which the
+ * table needs); subject: the RFC 4180 streaming {@link CsvParser} fed
  * the same text in 64 KiB chunks (as a file stream would deliver it). Both
  * return a checksum (total field characters) so the work is not optimised away.
  */
@@ -44,7 +45,9 @@ function parseChunked(t: string): number {
 
 export const cases: BenchCase[] = [
   {
-    name: "csv parse 1e5 unquoted rows (naive split vs RFC 4180 streaming parser)",
+    name: "CSV parse, 6 unquoted fields",
+    note: "1e5 rows: RFC 4180 streaming CsvParser fed 64 KiB chunks vs text.split(\"\\n\").map(l => l.split(\",\")) (enough for this unquoted, LF-only table); checksum = total field characters",
+    items: ROWS,
     setup: () => {
       if (text === "") text = makeText();
     },

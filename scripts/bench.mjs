@@ -1,6 +1,8 @@
 // Bundles bench/run.ts (and the library sources it imports) with esbuild into
 // one ES module, as an application bundler would, and runs it with node.
-// Arguments are passed through: `npm run bench -- radiation`.
+// Arguments are passed through: `npm run bench -- radiation`; BENCH_JSON=path,
+// BENCH_PAIRS and BENCH_MIN_MS are read by bench/run.ts. The exit status is
+// the runner's (1 when a case's checksums disagree).
 import { build } from "esbuild";
 import { spawnSync } from "node:child_process";
 import { mkdirSync } from "node:fs";
