@@ -33,7 +33,11 @@
  *
  * The per-form Planck cores ({@link planckLambdaEnergyCore} and its five
  * siblings) are small, shape- and form-specific functions that the engine can
- * inline into a caller's loop; {@link spectralCore} dispatches to them.
+ * inline into a caller's loop; {@link spectralCore} dispatches to them. They
+ * evaluate the plain expression first and test the conditions after it: a
+ * branch *around* the `expm1` call measured ~1.4× slower in V8 (Node 20) than
+ * the same loop without it, a test after it ~1.1×; for the rare inputs that
+ * fail the test the wasted `expm1` is small beside the extended path.
  *
  * @internal
  */
@@ -153,10 +157,9 @@ export function spectralCore(shape: number, form: number, u: number, T: number):
  */
 export function planckLambdaEnergyCore(l: number, T: number): number {
   const x = C2_HI / (l * T);
-  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && l >= 1e-50 && l <= 1e50) {
-    const l2 = l * l;
-    return C1L / (l2 * l2 * l) / Math.expm1(x);
-  }
+  const l2 = l * l;
+  const v = C1L / (l2 * l2 * l) / Math.expm1(x);
+  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && l >= 1e-50 && l <= 1e50) return v;
   return spectralCoreExtended(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, l, T);
 }
 
@@ -171,10 +174,9 @@ export function planckLambdaEnergyCore(l: number, T: number): number {
  */
 export function planckLambdaPhotonCore(l: number, T: number): number {
   const x = C2_HI / (l * T);
-  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && l >= 1e-50 && l <= 1e50) {
-    const l2 = l * l;
-    return TWO_C / (l2 * l2) / Math.expm1(x);
-  }
+  const l2 = l * l;
+  const v = TWO_C / (l2 * l2) / Math.expm1(x);
+  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && l >= 1e-50 && l <= 1e50) return v;
   return spectralCoreExtended(SHAPE_PLANCK, FORM_LAMBDA_PHOTON, l, T);
 }
 
@@ -189,9 +191,8 @@ export function planckLambdaPhotonCore(l: number, T: number): number {
  */
 export function planckNuEnergyCore(nu: number, T: number): number {
   const x = (H_OVER_K_HI * nu) / T;
-  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && nu >= 1e-50 && nu <= 1e50) {
-    return (TWO_H_OVER_C2 * (nu * nu * nu)) / Math.expm1(x);
-  }
+  const v = (TWO_H_OVER_C2 * (nu * nu * nu)) / Math.expm1(x);
+  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && nu >= 1e-50 && nu <= 1e50) return v;
   return spectralCoreExtended(SHAPE_PLANCK, FORM_NU_ENERGY, nu, T);
 }
 
@@ -206,9 +207,8 @@ export function planckNuEnergyCore(nu: number, T: number): number {
  */
 export function planckNuPhotonCore(nu: number, T: number): number {
   const x = (H_OVER_K_HI * nu) / T;
-  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && nu >= 1e-50 && nu <= 1e50) {
-    return (TWO_OVER_C2 * (nu * nu)) / Math.expm1(x);
-  }
+  const v = (TWO_OVER_C2 * (nu * nu)) / Math.expm1(x);
+  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && nu >= 1e-50 && nu <= 1e50) return v;
   return spectralCoreExtended(SHAPE_PLANCK, FORM_NU_PHOTON, nu, T);
 }
 
@@ -223,9 +223,8 @@ export function planckNuPhotonCore(nu: number, T: number): number {
  */
 export function planckSigmaEnergyCore(s: number, T: number): number {
   const x = (C2_HI * s) / T;
-  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && s >= 1e-50 && s <= 1e50) {
-    return (C1L * (s * s * s)) / Math.expm1(x);
-  }
+  const v = (C1L * (s * s * s)) / Math.expm1(x);
+  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && s >= 1e-50 && s <= 1e50) return v;
   return spectralCoreExtended(SHAPE_PLANCK, FORM_SIGMA_ENERGY, s, T);
 }
 
@@ -240,9 +239,8 @@ export function planckSigmaEnergyCore(s: number, T: number): number {
  */
 export function planckSigmaPhotonCore(s: number, T: number): number {
   const x = (C2_HI * s) / T;
-  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && s >= 1e-50 && s <= 1e50) {
-    return (TWO_C * (s * s)) / Math.expm1(x);
-  }
+  const v = (TWO_C * (s * s)) / Math.expm1(x);
+  if (x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && s >= 1e-50 && s <= 1e50) return v;
   return spectralCoreExtended(SHAPE_PLANCK, FORM_SIGMA_PHOTON, s, T);
 }
 

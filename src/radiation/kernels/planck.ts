@@ -285,19 +285,26 @@ export function planckRadianceWavelengthBatchSI(
   requirePositive("temperature", temperatureK, "K");
   const values = batchOut(wavelengthsM.length, out);
   const invalid: number[] = [];
+  const T = temperatureK;
   const n = wavelengthsM.length;
   for (let i = 0; i < n; i++) {
     const l = wavelengthsM[i] as number;
-    // one comparison rejects NaN, ≤ 0 and +Infinity; the result's own check catches overflow
-    if (l > 0 && l < Infinity) {
-      const v = planckLambdaEnergyCore(l, temperatureK);
-      if (v < Infinity) {
-        values[i] = v;
-        continue;
-      }
+    // The plain path of planckLambdaEnergyCore, written out (same operations, so
+    // bit-identical). Its conditions also reject every invalid row: λ ≤ 0, NaN or
+    // ±Infinity fails the range test on λ (or gives x < 0, NaN, 0 or Infinity).
+    // (Evaluated before the test, as in the core: see planck-core.ts.)
+    const x = C2_HI / (l * T);
+    const l2 = l * l;
+    let v = C1L / (l2 * l2 * l) / Math.expm1(x);
+    if (!(x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && l >= 1e-50 && l <= 1e50)) {
+      v = l > 0 && l < Infinity ? spectralCoreExtended(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, l, T) : NaN;
     }
-    values[i] = NaN;
-    invalid.push(i);
+    // v < Infinity is false for NaN and for a true overflow
+    if (v < Infinity) values[i] = v;
+    else {
+      values[i] = NaN;
+      invalid.push(i);
+    }
   }
   return { values, invalid };
 }
@@ -336,19 +343,17 @@ export function planckRadianceTemperatureBatchSI(
   const n = temperaturesK.length;
   for (let i = 0; i < n; i++) {
     const t = temperaturesK[i] as number;
-    if (t > 0 && t < Infinity) {
-      const x = C2_HI / (l * t);
-      const v =
-        plainL && x <= X_PLAIN_MAX && x >= X_PLAIN_MIN
-          ? P / Math.expm1(x)
-          : spectralCoreExtended(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, l, t);
-      if (v < Infinity) {
-        values[i] = v;
-        continue;
-      }
+    // T ≤ 0, NaN or ±Infinity gives x < 0, NaN, Infinity or 0: never the plain path
+    const x = C2_HI / (l * t);
+    let v = P / Math.expm1(x);
+    if (!(plainL && x <= X_PLAIN_MAX && x >= X_PLAIN_MIN)) {
+      v = t > 0 && t < Infinity ? spectralCoreExtended(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, l, t) : NaN;
     }
-    values[i] = NaN;
-    invalid.push(i);
+    if (v < Infinity) values[i] = v;
+    else {
+      values[i] = NaN;
+      invalid.push(i);
+    }
   }
   return { values, invalid };
 }
