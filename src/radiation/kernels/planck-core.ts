@@ -153,6 +153,11 @@ export function spectralCore(shape: number, form: number, u: number, T: number):
  * @param l - wavelength λ, m
  * @param T - temperature T, K
  * @returns B_λ, W m^-2 sr^-1 m^-1
+ * Source: Planck (1901); CODATA 2018 constants.
+ * @example
+ * ```ts
+ * const v = planckLambdaEnergyCore(500e-9, 5772); // ≈ 2.624e13 W m^-3 sr^-1
+ * ```
  * @internal
  */
 export function planckLambdaEnergyCore(l: number, T: number): number {
@@ -170,6 +175,11 @@ export function planckLambdaEnergyCore(l: number, T: number): number {
  * @param l - wavelength λ, m
  * @param T - temperature T, K
  * @returns N_λ, photons s^-1 m^-2 sr^-1 m^-1
+ * Source: Planck (1901); CODATA 2018 constants.
+ * @example
+ * ```ts
+ * const v = planckLambdaPhotonCore(550e-9, 5772);
+ * ```
  * @internal
  */
 export function planckLambdaPhotonCore(l: number, T: number): number {
@@ -187,6 +197,11 @@ export function planckLambdaPhotonCore(l: number, T: number): number {
  * @param nu - frequency ν, Hz
  * @param T - temperature T, K
  * @returns B_ν, W m^-2 sr^-1 Hz^-1
+ * Source: Planck (1901); CODATA 2018 constants.
+ * @example
+ * ```ts
+ * const v = planckNuEnergyCore(1.4e9, 2.7255); // CMB at 21 cm
+ * ```
  * @internal
  */
 export function planckNuEnergyCore(nu: number, T: number): number {
@@ -203,6 +218,11 @@ export function planckNuEnergyCore(nu: number, T: number): number {
  * @param nu - frequency ν, Hz
  * @param T - temperature T, K
  * @returns N_ν, photons s^-1 m^-2 sr^-1 Hz^-1
+ * Source: Planck (1901); CODATA 2018 constants.
+ * @example
+ * ```ts
+ * const v = planckNuPhotonCore(5e14, 5772);
+ * ```
  * @internal
  */
 export function planckNuPhotonCore(nu: number, T: number): number {
@@ -219,6 +239,11 @@ export function planckNuPhotonCore(nu: number, T: number): number {
  * @param s - wavenumber σ̃, m^-1
  * @param T - temperature T, K
  * @returns B_σ̃, W m^-2 sr^-1 (m^-1)^-1
+ * Source: Planck (1901); CODATA 2018 constants.
+ * @example
+ * ```ts
+ * const v = planckSigmaEnergyCore(100000, 300); // 1000 cm^-1 at 300 K
+ * ```
  * @internal
  */
 export function planckSigmaEnergyCore(s: number, T: number): number {
@@ -235,6 +260,11 @@ export function planckSigmaEnergyCore(s: number, T: number): number {
  * @param s - wavenumber σ̃, m^-1
  * @param T - temperature T, K
  * @returns N_σ̃, photons s^-1 m^-2 sr^-1 (m^-1)^-1
+ * Source: Planck (1901); CODATA 2018 constants.
+ * @example
+ * ```ts
+ * const v = planckSigmaPhotonCore(2e6, 5772);
+ * ```
  * @internal
  */
 export function planckSigmaPhotonCore(s: number, T: number): number {
