@@ -514,7 +514,10 @@ export function createBlackbodyFitterSI(channels: readonly FitChannelSI[], setti
         let sum = A[i * 3 + j] as number;
         for (let m = 0; m < j; m++) sum -= (A[i * 3 + m] as number) * (A[j * 3 + m] as number);
         if (i === j) {
-          if (!(sum > 0) || !Number.isFinite(sum)) return false;
+          // A pivot within 64 ulp of the diagonal it came from is rounding noise (forming
+          // H and the subtraction each cost a few ulp of it): treat it as singular, so an
+          // exactly rank-deficient H is flagged whatever the sign of its last bits.
+          if (!(sum > 64 * Number.EPSILON * (A[i * 3 + i] as number)) || !Number.isFinite(sum)) return false;
           A[i * 3 + i] = Math.sqrt(sum);
         } else {
           A[i * 3 + j] = sum / (A[j * 3 + j] as number);

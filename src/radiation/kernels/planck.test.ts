@@ -15,6 +15,26 @@ import {
   planckRadianceWavelengthSI,
   planckRadianceWavenumberSI,
 } from "./planck";
+import {
+  FORM_LAMBDA_ENERGY,
+  FORM_LAMBDA_PHOTON,
+  FORM_NU_ENERGY,
+  FORM_NU_PHOTON,
+  FORM_SIGMA_ENERGY,
+  FORM_SIGMA_PHOTON,
+  SHAPE_PLANCK,
+  X_PLAIN_MAX,
+  planckLambdaEnergyCore,
+  planckLambdaPhotonCore,
+  planckNuEnergyCore,
+  planckNuPhotonCore,
+  planckSigmaEnergyCore,
+  planckSigmaPhotonCore,
+  spectralCore,
+  spectralCoreExtended,
+  xOf,
+} from "./planck-core";
+import { C2_HI, H_OVER_K_HI } from "./exact";
 import { blackbodyFractionBetweenWavelengthsSI } from "./band-fraction";
 import { WIEN_B_WAVELENGTH } from "./wien";
 
@@ -219,6 +239,61 @@ describe("Planck's law: properties", () => {
   });
 });
 
+describe("plain path (x ≤ 32) against the double-double path", () => {
+  // The per-form cores use a plain-double x below X_PLAIN_MAX and the double-double x of
+  // spectralCoreExtended above it. Error bound of the difference (u = 2^-53): the plain x
+  // carries ≤ 2 roundings plus the 0.42u rounding of c₂ (resp. h/k), and B's relative
+  // sensitivity to x is x/(1 − e^−x) ≤ x + 1 → (x + 1)·2.42u; the two expm1 calls (< 1 ulp
+  // each, 4u) and the different final roundings (≤ 4u) add 8u. The prefactor is formed
+  // by the same operations on both paths, so it cancels. Measured: ≤ 0.77 of this bound.
+  const u = 2 ** -53;
+  const cores: [string, number, (v: number, T: number) => number, "lambda" | "nu" | "sigma"][] = [
+    ["B_lambda", FORM_LAMBDA_ENERGY, planckLambdaEnergyCore, "lambda"],
+    ["N_lambda", FORM_LAMBDA_PHOTON, planckLambdaPhotonCore, "lambda"],
+    ["B_nu", FORM_NU_ENERGY, planckNuEnergyCore, "nu"],
+    ["N_nu", FORM_NU_PHOTON, planckNuPhotonCore, "nu"],
+    ["B_sigma", FORM_SIGMA_ENERGY, planckSigmaEnergyCore, "sigma"],
+    ["N_sigma", FORM_SIGMA_PHOTON, planckSigmaPhotonCore, "sigma"],
+  ];
+  for (const [key, form, core, variable] of cores) {
+    it(`${key}: within (2.42(x + 1) + 8)·2^-53 below the threshold, identical above (λ and x log-uniform, T = c₂/(λx))`, () => {
+      fc.assert(
+        fc.property(lambdaArb, logUniform(1e-3, 4 * X_PLAIN_MAX), (l, x0) => {
+          const v = variable === "lambda" ? l : variable === "nu" ? C / l : 1 / l;
+          const T = variable === "lambda" ? C2_HI / (l * x0) : variable === "nu" ? (H_OVER_K_HI * v) / x0 : (C2_HI * v) / x0;
+          const fast = core(v, T);
+          const ref = spectralCoreExtended(SHAPE_PLANCK, form, v, T);
+          expect(spectralCore(SHAPE_PLANCK, form, v, T)).toBe(fast);
+          const x = xOf(form, v, T);
+          if (x > X_PLAIN_MAX) {
+            expect(fast).toBe(ref);
+            return;
+          }
+          expect(Math.abs(fast / ref - 1)).toBeLessThanOrEqual((2.42 * (x + 1) + 8) * u);
+        }),
+        { numRuns: 500 },
+      );
+    });
+  }
+
+  it("the fixture's worst error stays within the plain-path bound at its x (not just within 1e-13)", () => {
+    // Same bound as above against the 40-digit reference, plus the ≤ 9u of the prefactor and
+    // divisions that no longer cancel: (2.42(x + 1) + 17)·u for x ≤ 32.
+    for (const [key, , core, variable] of cores) {
+      let worst = 0; // worst error as a fraction of the bound
+      let compared = 0;
+      for (const r of rows) {
+        const ref = r[key];
+        if (ref === null || ref === undefined || r.x > X_PLAIN_MAX) continue;
+        compared++;
+        worst = Math.max(worst, Math.abs(core(r[variable], r.T) / ref - 1) / ((2.42 * (r.x + 1) + 17) * u));
+      }
+      expect(compared).toBeGreaterThan(500);
+      expect(worst).toBeLessThanOrEqual(1);
+    }
+  });
+});
+
 describe("batch forms", () => {
   it("match the scalar kernel row by row and report invalid rows as NaN", () => {
     const ls = new Float64Array([5e-7, -1, 1e-6, NaN, Infinity, 0, 2e-5]);
@@ -226,6 +301,33 @@ describe("batch forms", () => {
     expect(invalid).toEqual([1, 3, 4, 5]);
     for (const i of invalid) expect(values[i]).toBeNaN();
     for (const i of [0, 2, 6]) expect(values[i]).toBe(planckRadianceWavelengthSI(ls[i] as number, 5772));
+  });
+
+  it("equal the scalar kernel bit for bit across the plain/extended threshold and the log path", () => {
+    // rows anywhere in the double range (extended, log and overflow paths), and
+    const anyPos = fc.double({ min: 1e-300, max: 1e300, noNaN: true });
+    const scalar = (l: number, T: number): number => {
+      try {
+        return planckRadianceWavelengthSI(l, T);
+      } catch {
+        return NaN; // a true overflow: the batch writes NaN and lists the row
+      }
+    };
+    // rows given by x = c₂/(λT) ∈ [1, 1000] (log-uniform) to hit both sides of x = 32
+    const row = fc.oneof(
+      anyPos.map((v) => ({ v, x: false })),
+      logUniform(1, 1000).map((v) => ({ v, x: true })),
+    );
+    fc.assert(
+      fc.property(lambdaArb, tempArb, fc.array(row, { minLength: 1, maxLength: 20 }), fc.array(row, { minLength: 1, maxLength: 20 }), (l, T, lr, tr) => {
+        const ls = lr.map((r) => (r.x ? C2_HI / (T * r.v) : r.v));
+        const ts = tr.map((r) => (r.x ? C2_HI / (l * r.v) : r.v));
+        const byL = planckRadianceWavelengthBatchSI(new Float64Array(ls), T);
+        ls.forEach((li, i) => expect(byL.values[i]).toBe(scalar(li, T)));
+        const byT = planckRadianceTemperatureBatchSI(l, new Float64Array(ts));
+        ts.forEach((ti, i) => expect(byT.values[i]).toBe(scalar(l, ti)));
+      }),
+    );
   });
 
   it("temperature batch writes into out and flags overflow rows", () => {

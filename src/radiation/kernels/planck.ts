@@ -13,14 +13,16 @@
  *
  * Source: M. Planck, Ann. Phys. 4, 553 (1901); constants CODATA 2018
  * (c₁L = 2hc², c₂ = hc/k). All kernels are accurate to ≤ 1e-13 relative
- * (measured ~1e-15, see planck.test.ts) against a 40-digit mpmath reference for
+ * (worst-case bound ≈ 1e-14, measured ≤ 5.1e-15; see planck-core.ts and planck.test.ts) against a 40-digit mpmath reference for
  * λ ∈ [1e-12, 1e4] m, T ∈ [1e-2, 1e10] K wherever the result is a normal
  * double; they return the true tiny value or 0 on underflow, and never NaN or
  * Infinity for finite positive input (a true value beyond ~1.8e308, which
  * needs T ≳ 1e200 K, throws a RangeError instead).
  */
-import { requirePositive, isPositiveFinite } from "../../internal/checks";
+import { C1L } from "../../constants/values";
+import { requirePositive } from "../../internal/checks";
 import { batchOut, type RadiationBatchResult } from "./batch";
+import { C2_HI } from "./exact";
 import {
   FORM_LAMBDA_ENERGY,
   FORM_LAMBDA_PHOTON,
@@ -29,9 +31,14 @@ import {
   FORM_SIGMA_ENERGY,
   FORM_SIGMA_PHOTON,
   SHAPE_PLANCK,
+  X_PLAIN_MAX,
+  X_PLAIN_MIN,
   lnSpectralCore,
   overflowError,
+  planckLambdaEnergyCore,
+  planckNuEnergyCore,
   spectralCore,
+  spectralCoreExtended,
   xOf,
 } from "./planck-core";
 
@@ -174,7 +181,7 @@ export function logPlanckRadianceWavelengthSI(wavelengthM: number, temperatureK:
 
 /** ln B_λ without input checks (inputs finite, > 0). @internal */
 export function lnPlanckLambdaUnchecked(lambda: number, T: number): number {
-  const b = spectralCore(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, lambda, T);
+  const b = planckLambdaEnergyCore(lambda, T);
   // Use the accurate direct value when it is a normal double.
   if (b >= 1e-300 && b !== Infinity) return Math.log(b);
   return lnSpectralCore(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, lambda, T);
@@ -182,12 +189,12 @@ export function lnPlanckLambdaUnchecked(lambda: number, T: number): number {
 
 /** B_λ without input checks; +Infinity signals overflow. @internal */
 export function planckLambdaUnchecked(lambda: number, T: number): number {
-  return spectralCore(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, lambda, T);
+  return planckLambdaEnergyCore(lambda, T);
 }
 
 /** ∂B_λ/∂T without input checks (see {@link planckRadianceWavelengthDerivativeTSI}). @internal */
 export function planckLambdaDerivativeTUnchecked(lambda: number, T: number): number {
-  const b = spectralCore(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, lambda, T);
+  const b = planckLambdaEnergyCore(lambda, T);
   if (b === 0 || b === Infinity) return b;
   const x = xOf(FORM_LAMBDA_ENERGY, lambda, T);
   // x/(1 − e^−x): → 1 (RJ) for x → 0, → x (Wien) for large x.
@@ -197,7 +204,7 @@ export function planckLambdaDerivativeTUnchecked(lambda: number, T: number): num
 
 /** ∂B_ν/∂T without input checks (see {@link planckRadianceFrequencyDerivativeTSI}); +Infinity signals overflow. @internal */
 export function planckNuDerivativeTUnchecked(nu: number, T: number): number {
-  const b = spectralCore(SHAPE_PLANCK, FORM_NU_ENERGY, nu, T);
+  const b = planckNuEnergyCore(nu, T);
   if (b === 0 || b === Infinity) return b;
   const x = xOf(FORM_NU_ENERGY, nu, T);
   const f = x === 0 ? 1 : x / -Math.expm1(-x);
@@ -278,15 +285,26 @@ export function planckRadianceWavelengthBatchSI(
   requirePositive("temperature", temperatureK, "K");
   const values = batchOut(wavelengthsM.length, out);
   const invalid: number[] = [];
-  for (let i = 0; i < wavelengthsM.length; i++) {
+  const T = temperatureK;
+  const n = wavelengthsM.length;
+  for (let i = 0; i < n; i++) {
     const l = wavelengthsM[i] as number;
-    let v = NaN;
-    if (isPositiveFinite(l)) v = spectralCore(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, l, temperatureK);
-    if (v !== v || v === Infinity) {
-      v = NaN;
+    // The plain path of planckLambdaEnergyCore, written out (same operations, so
+    // bit-identical). Its conditions also reject every invalid row: λ ≤ 0, NaN or
+    // ±Infinity fails the range test on λ (or gives x < 0, NaN, 0 or Infinity).
+    // (Evaluated before the test, as in the core: see planck-core.ts.)
+    const x = C2_HI / (l * T);
+    const l2 = l * l;
+    let v = C1L / (l2 * l2 * l) / Math.expm1(x);
+    if (!(x <= X_PLAIN_MAX && x >= X_PLAIN_MIN && l >= 1e-50 && l <= 1e50)) {
+      v = l > 0 && l < Infinity ? spectralCoreExtended(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, l, T) : NaN;
+    }
+    // v < Infinity is false for NaN and for a true overflow
+    if (v < Infinity) values[i] = v;
+    else {
+      values[i] = NaN;
       invalid.push(i);
     }
-    values[i] = v;
   }
   return { values, invalid };
 }
@@ -315,15 +333,27 @@ export function planckRadianceTemperatureBatchSI(
   requirePositive("wavelength", wavelengthM, "m");
   const values = batchOut(temperaturesK.length, out);
   const invalid: number[] = [];
-  for (let i = 0; i < temperaturesK.length; i++) {
+  // The prefactor 2hc²/λ⁵ is the same for every row: formed once, with the
+  // same operations as planckLambdaEnergyCore, so each row is bit-identical to
+  // the scalar kernel (the plain-path conditions are the same too).
+  const l = wavelengthM;
+  const l2 = l * l;
+  const P = C1L / (l2 * l2 * l);
+  const plainL = l >= 1e-50 && l <= 1e50;
+  const n = temperaturesK.length;
+  for (let i = 0; i < n; i++) {
     const t = temperaturesK[i] as number;
-    let v = NaN;
-    if (isPositiveFinite(t)) v = spectralCore(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, wavelengthM, t);
-    if (v !== v || v === Infinity) {
-      v = NaN;
+    // T ≤ 0, NaN or ±Infinity gives x < 0, NaN, Infinity or 0: never the plain path
+    const x = C2_HI / (l * t);
+    let v = P / Math.expm1(x);
+    if (!(plainL && x <= X_PLAIN_MAX && x >= X_PLAIN_MIN)) {
+      v = t > 0 && t < Infinity ? spectralCoreExtended(SHAPE_PLANCK, FORM_LAMBDA_ENERGY, l, t) : NaN;
+    }
+    if (v < Infinity) values[i] = v;
+    else {
+      values[i] = NaN;
       invalid.push(i);
     }
-    values[i] = v;
   }
   return { values, invalid };
 }
