@@ -16,7 +16,8 @@ import { show, unitSuffix } from "./text";
 /**
  * What an input must be, checked in the caller's unit before the kernel runs:
  * `"positive"` (finite and > 0, the default), `"nonNegative"` (finite and
- * ≥ 0), `"finite"` (any sign) or `"any"` (no check: NaN and ±Infinity pass).
+ * ≥ 0), `"finite"` (any sign) or `"any"` (no check: NaN and ±Infinity pass,
+ * unless `min` or `max` is given: a range refuses what lies outside it, NaN included).
  */
 export type InputCheck = "positive" | "nonNegative" | "finite" | "any";
 
