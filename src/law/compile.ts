@@ -20,13 +20,30 @@ import type { LawOutput } from "./output";
 import type { ExactScale } from "./scale";
 
 /** Whether this host lets us build functions from text (decided once). */
-const canCompile: boolean = (() => {
+const hostCompiles: boolean = (() => {
   try {
     return new Function("return 1")() === 1;
   } catch {
     return false;
   }
 })();
+
+/** Whether laws defined (and batch patterns first used) from now on get generated code. */
+let canCompile = hostCompiles;
+
+/**
+ * Tests only: turn generated code off (`false`) or back on (`true`, where the
+ * host allows it) for laws defined, and batch patterns first used, while it
+ * is off, so that the generic closures can be checked against the generated
+ * code. Returns the previous setting. Not exported from the package.
+ *
+ * @internal
+ */
+export function setCodegenForTests(enabled: boolean): boolean {
+  const previous = canCompile;
+  canCompile = enabled && hostCompiles;
+  return previous;
+}
 
 /** A number as a JavaScript literal that reads back to the same double. */
 function literal(x: number): string {

@@ -263,7 +263,7 @@ function rowReason(sys: Sys, inputs: readonly LawInput[], output: LawOutput, ker
     const input = inputs[k] as LawInput;
     const a = raw[k] as number;
     const x = input.rowToSI(sys, a);
-    if (x !== x && !(a !== a && input.check === "any")) return input.reason(sys, a);
+    if (x !== x && !(a !== a && input.nanPasses)) return input.reason(sys, a);
     si[k] = x;
   }
   return output.reason(sys, kernel(...si), inputs, raw);
@@ -274,7 +274,7 @@ function batch1(sys: Sys, i0: LawInput, xs: Float64Array, output: LawOutput, ker
   for (let i = 0; i < xs.length; i++) {
     const a = xs[i] as number;
     const x = i0.rowToSI(sys, a);
-    if (x !== x && !(a !== a && i0.check === "any")) {
+    if (x !== x && !(a !== a && i0.nanPasses)) {
       values[i] = NaN;
       log.add(i, i0.reason(sys, a));
       continue;
@@ -302,7 +302,7 @@ function batch2a(
   for (let i = 0; i < xs.length; i++) {
     const a = xs[i] as number;
     const x = i0.rowToSI(sys, a);
-    if (x !== x && !(a !== a && i0.check === "any")) {
+    if (x !== x && !(a !== a && i0.nanPasses)) {
       values[i] = NaN;
       log.add(i, i0.reason(sys, a));
       continue;
@@ -340,7 +340,7 @@ function batchN(
       const input = inputs[k] as LawInput;
       const a = arr[i] as number;
       const x = input.rowToSI(sys, a);
-      if (x !== x && !(a !== a && input.check === "any")) {
+      if (x !== x && !(a !== a && input.nanPasses)) {
         values[i] = NaN;
         log.add(i, input.reason(sys, a));
         continue rows;

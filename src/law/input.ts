@@ -16,7 +16,8 @@ import { show, unitSuffix } from "./text";
 /**
  * What an input must be, checked in the caller's unit before the kernel runs:
  * `"positive"` (finite and > 0, the default), `"nonNegative"` (finite and
- * ≥ 0), `"finite"` (any sign) or `"any"` (no check: NaN and ±Infinity pass).
+ * ≥ 0), `"finite"` (any sign) or `"any"` (no check: NaN and ±Infinity pass,
+ * unless `min` or `max` is given: a range refuses what lies outside it, NaN included).
  */
 export type InputCheck = "positive" | "nonNegative" | "finite" | "any";
 
@@ -66,6 +67,13 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
   readonly rangeNote: string;
   private readonly code: number;
   private readonly ranged: boolean;
+  /**
+   * Whether a NaN passes (check `"any"` with no range): such a NaN goes to
+   * the kernel as it is. A range is a check, so a ranged input refuses NaN.
+   *
+   * @internal
+   */
+  readonly nanPasses: boolean;
   /** CGS → SI scale of this input (SI needs none). */
   /** @internal */
   readonly cgs: ExactScale;
@@ -82,6 +90,7 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
     this.max = options.max ?? Infinity;
     if (!(this.min <= this.max)) throw new RangeError(`input ${name}: min (${this.min}) must not exceed max (${this.max})`);
     this.ranged = this.min !== -Infinity || this.max !== Infinity;
+    this.nanPasses = this.code === ANY && !this.ranged;
     this.rangeNote = options.rangeNote ?? "";
     const d = kind.dimension;
     this.cgs = exactScale(-2 * d.length - 3 * d.mass);
@@ -109,7 +118,7 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
     if (this.passes(value)) {
       if (sys === SI && !this.ranged) return value;
       const v = this.convertedToSI(sys, value);
-      if (v === v || value !== value) return v;
+      if (v === v || (value !== value && this.nanPasses)) return v;
     }
     return this.refuse(sys, value);
   }
@@ -148,17 +157,27 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
     throw new RangeError(this.reason(sys, value));
   }
 
+  /**
+   * An SI bound in the caller's unit for a message: in CGS to 15 significant
+   * digits, which hides only the half-ulp rounding of the ×10ᵏ (1e-7 m reads
+   * 0.00001 cm, not 0.000009999999999999999 cm).
+   */
+  private bound(sys: UnitSystem<SystemName>, boundSI: number): string {
+    if (sys.name === "SI" || this.cgs.exp10 === 0 || boundSI - boundSI !== 0) return show(boundSI);
+    const x = this.cgs.invert(boundSI);
+    return x === 0 ? show(x) : show(Number(x.toPrecision(15)));
+  }
+
   /** The message for a value that {@link LawInput.rowToSI} turns into NaN. */
   reason(sys: UnitSystem<SystemName>, value: number): string {
     const d = this.kind.dimension;
     const unit = unitSuffix(sys.coherentUnit(d));
     if (!this.passes(value)) return `${this.name} must be ${WORDS[this.code]}${unit}; got ${show(value)}`;
     const v = sys.name === "SI" ? value : this.cgs.apply(value);
-    if (this.ranged && v - v === 0 && !(v >= this.min && v <= this.max)) {
-      const lo = sys.name === "SI" ? this.min : this.cgs.invert(this.min);
-      const hi = sys.name === "SI" ? this.max : this.cgs.invert(this.max);
+    // the range message, unless a finite value left the double range on its way to SI
+    if (this.ranged && !(v >= this.min && v <= this.max) && (v - v === 0 || value - value !== 0)) {
       const note = this.rangeNote === "" ? "" : ` (${this.rangeNote})`;
-      return `${this.name} must be in [${lo}, ${hi}]${unit}${note}; got ${show(value)}`;
+      return `${this.name} must be in [${this.bound(sys, this.min)}, ${this.bound(sys, this.max)}]${unit}${note}; got ${show(value)}`;
     }
     return `${this.name} = ${show(value)}${unit} is outside the double range once converted to SI (${show(v)}${unitSuffix(SI.coherentUnit(d))})`;
   }

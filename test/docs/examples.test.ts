@@ -37,7 +37,9 @@ function blocks(text: string, file: string, inComments: boolean): Example[] {
     const strip = (l: string) => (inComments ? l.replace(/^\s*\*\s?/, "") : l);
     if (/^```ts\b/.test(strip(line).trim()) && (!inComments || /^\s*\*/.test(line))) {
       const start = i + 1;
-      const body: string[] = [];
+      // a guide block opened with ```ts continued is checked together with the block before it
+      const continued = /^```ts\s+continued\b/.test(strip(line).trim()) ? out[out.length - 1] : undefined;
+      const body: string[] = continued === undefined ? [] : [continued.code];
       i++;
       while (i < lines.length && strip(lines[i] as string).trim() !== "```") {
         body.push(strip(lines[i] as string));
