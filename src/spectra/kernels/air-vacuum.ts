@@ -31,6 +31,7 @@
  * @packageDocumentation
  */
 
+import { show } from "../../internal/checks";
 import type { BatchReport } from "./batch";
 import { requireOutputLength } from "./batch";
 
@@ -73,10 +74,6 @@ export const VACUUM_WAVELENGTH_MIN_M = solveVacuum(AIR_WAVELENGTH_MIN_M);
 /** Longest vacuum wavelength accepted, m: the vacuum wavelength of 20 µm in air. */
 export const VACUUM_WAVELENGTH_MAX_M = solveVacuum(AIR_WAVELENGTH_MAX_M);
 
-function show(v: number): string {
-  return Object.is(v, -0) ? "-0" : String(v);
-}
-
 function requireVacuum(vacuumWavelengthM: number): void {
   if (!(vacuumWavelengthM >= VACUUM_WAVELENGTH_MIN_M && vacuumWavelengthM <= VACUUM_WAVELENGTH_MAX_M)) {
     throw new RangeError(
@@ -105,6 +102,11 @@ function requireAir(airWavelengthM: number): void {
  */
 export function airRefractiveIndexSI(vacuumWavelengthM: number): number {
   requireVacuum(vacuumWavelengthM);
+  return airRefractiveIndexUnchecked(vacuumWavelengthM);
+}
+
+/** {@link airRefractiveIndexSI} without the range check (λ in range assumed). @internal */
+export function airRefractiveIndexUnchecked(vacuumWavelengthM: number): number {
   return 1 + refractivity(vacuumWavelengthM);
 }
 
@@ -119,6 +121,11 @@ export function airRefractiveIndexSI(vacuumWavelengthM: number): number {
  */
 export function vacuumToAirWavelengthSI(vacuumWavelengthM: number): number {
   requireVacuum(vacuumWavelengthM);
+  return vacuumToAirWavelengthUnchecked(vacuumWavelengthM);
+}
+
+/** {@link vacuumToAirWavelengthSI} without the range check (λ in range assumed). @internal */
+export function vacuumToAirWavelengthUnchecked(vacuumWavelengthM: number): number {
   return vacuumWavelengthM / (1 + refractivity(vacuumWavelengthM));
 }
 
@@ -133,6 +140,11 @@ export function vacuumToAirWavelengthSI(vacuumWavelengthM: number): number {
  */
 export function airToVacuumWavelengthSI(airWavelengthM: number): number {
   requireAir(airWavelengthM);
+  return solveVacuum(airWavelengthM);
+}
+
+/** {@link airToVacuumWavelengthSI} without the range check (λ in range assumed). @internal */
+export function airToVacuumWavelengthUnchecked(airWavelengthM: number): number {
   return solveVacuum(airWavelengthM);
 }
 
