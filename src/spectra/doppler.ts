@@ -269,14 +269,15 @@ export function radialVelocityFromWavelengths<S extends SystemName, W extends Le
 /**
  * Shift a whole line list by one radial velocity (a new array of the input's
  * type, medium brand included). The velocity is checked once (RangeError
- * for |v| ≥ c); rows that are not finite and > 0 become NaN and are listed
- * in `invalid`.
+ * for |v| ≥ c, before any row is written); a row that is not finite and
+ * > 0 becomes NaN, its index is listed in `invalid` and `reasons` says why
+ * (the message {@link dopplerShift} would throw).
  *
  * @example
  * ```ts
  * import { SI, dopplerShiftArray, ions, seriesVacuumWavelengths, units } from "starlume";
  * const balmer = seriesVacuumWavelengths(SI, ions.H, "balmer", 5);
- * const { values } = dopplerShiftArray(SI, balmer, SI.of(120, units.km_per_s)); // VacuumWavelengthArray<"SI">
+ * const { values, invalid, reasons } = dopplerShiftArray(SI, balmer, SI.of(120, units.km_per_s)); // VacuumWavelengthArray<"SI">; invalid = [], reasons = []
  * ```
  */
 export function dopplerShiftArray<S extends SystemName, A extends LengthArray<S>>(

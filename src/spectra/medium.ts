@@ -282,13 +282,15 @@ export function airToVacuum<S extends SystemName>(
 
 /**
  * {@link vacuumToAir} over an array (a new array). Never throws part-way:
- * rows outside the range, or not finite, become NaN and are listed in
- * `invalid`.
+ * rows outside the range, or not finite, become NaN, are listed in
+ * `invalid`, and `reasons` holds the message {@link vacuumToAir} would throw
+ * for each.
  *
  * @example
  * ```ts
  * import { SI, units, vacuumToAirArray, vacuumWavelengths } from "starlume";
- * const { values, invalid } = vacuumToAirArray(SI, vacuumWavelengths(SI, SI.arrayOf([486.27, 656.47, 50], units.nm))); // invalid = [2]
+ * const { values, invalid, reasons } = vacuumToAirArray(SI, vacuumWavelengths(SI, SI.arrayOf([486.27, 656.47, 50], units.nm)));
+ * // invalid = [2]; reasons[0] = "wavelength must be in [2.00064…e-7, 0.0000200…] m (standard-air formula range, …); got 5e-8"
  * ```
  */
 export function vacuumToAirArray<S extends SystemName>(
@@ -299,7 +301,8 @@ export function vacuumToAirArray<S extends SystemName>(
 }
 
 /**
- * {@link airToVacuum} over an array (a new array; bad rows NaN and listed in `invalid`).
+ * {@link airToVacuum} over an array (a new array; bad rows NaN, listed in
+ * `invalid` with their reasons in `reasons`).
  *
  * @example
  * ```ts

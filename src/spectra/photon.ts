@@ -13,7 +13,9 @@
  * vacuum): inputs are {@link NotAirWavelength} — a {@link VacuumWavelength}
  * or an unbranded `Length<S>`, never an {@link AirWavelength} — and outputs
  * are {@link VacuumWavelength}. Every input must be finite and > 0
- * (RangeError naming the parameter and the caller's unit).
+ * (RangeError naming the parameter and the caller's unit); a result beyond
+ * the double range in the caller's system (possibly only after the ×10ᵏ into
+ * CGS) throws a RangeError naming the argument instead of returning Infinity.
  *
  * @module
  */

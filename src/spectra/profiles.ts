@@ -195,7 +195,8 @@ export function voigtProfile<S extends SystemName>(
 
 /**
  * {@link voigtProfile} over many offsets (a new array). Widths are checked
- * once (RangeError); a non-finite offset gives NaN and is listed in `invalid`.
+ * once (RangeError, before any row is written); a non-finite offset gives
+ * NaN, is listed in `invalid` and has its reason in `reasons`.
  *
  * @example
  * ```ts
