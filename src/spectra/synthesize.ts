@@ -30,7 +30,7 @@
  * @module
  */
 import { show } from "../internal/checks";
-import type { BatchResult } from "../law/batch";
+import { BatchLog, type BatchResult } from "../law/batch";
 import { defineLaw } from "../law/define";
 import { type LawInput, lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
@@ -141,7 +141,7 @@ export function gridToSI(sys: UnitSystem<SystemName>, grid: Float64Array): Float
     if (x !== x || (i > 0 && !(v > (grid[i - 1] as number)))) {
       throw new RangeError(`grid must be finite and strictly increasing (${sys.coherentUnit(kinds.length.dimension)}); element ${i} is ${show(v)}`);
     }
-    si[i] = x;
+    if (si !== grid) si[i] = x;
   }
   return si;
 }
@@ -220,8 +220,8 @@ function resolveLines(sys: UnitSystem<SystemName>, lines: readonly SynthesisLine
 }
 
 /**
- * The synthesis on a grid already checked and in SI (`gridSI`); `rowReason`
- * says why a row whose continuum is not finite has no flux.
+ * The synthesis on a grid already checked and in SI (`gridSI`); `rowReason(i, c)`
+ * says why row i, whose continuum value c is not finite, has no flux.
  */
 function synthesizeOnGrid(
   sys: UnitSystem<SystemName>,
@@ -229,15 +229,16 @@ function synthesizeOnGrid(
   continuum: Float64Array,
   lines: readonly SynthesisLine<SystemName, Medium>[],
   options: SynthesisOptions | undefined,
-  rowReason: (i: number) => string,
+  rowReason: (i: number, c: number) => string,
 ): SynthesisResult<Float64Array> {
   const n = gridSI.length;
   if (continuum.length < n) throw new RangeError(`continuum must have length >= ${n} (the grid length); got ${continuum.length}`);
   const tauCut = tauCutoffOption.toSI(sys, options?.tauCutoff ?? 1e-8);
   const resolved = resolveLines(sys, lines);
   const out = new Float64Array(n);
-  const invalid = synthesizeSpectrumUnchecked(gridSI, continuum, resolved, tauCut, out);
-  return { values: out, flux: out, tau0: resolved.tau0 as DimensionlessArray, invalid, reasons: invalid.map(rowReason) };
+  const log = new BatchLog();
+  synthesizeSpectrumUnchecked(gridSI, continuum, resolved, tauCut, out, (i, c) => log.add(i, rowReason(i, c)));
+  return { ...log.result(out), flux: out, tau0: resolved.tau0 as DimensionlessArray };
 }
 
 /**
@@ -271,7 +272,7 @@ export function synthesizeSpectrum<S extends SystemName, G extends LengthArray<S
   options?: SynthesisOptions,
 ): SynthesisResult<C> {
   const gridSI = gridToSI(sys, grid);
-  const r = synthesizeOnGrid(sys, gridSI, continuum, lines, options, (i) => `continuum must be finite on the grid; element ${i} is ${show(continuum[i] as number)}`);
+  const r = synthesizeOnGrid(sys, gridSI, continuum, lines, options, (i, c) => `continuum must be finite on the grid; element ${i} is ${show(c)}`);
   return r as SynthesisResult<C>;
 }
 

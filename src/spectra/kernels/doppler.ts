@@ -20,7 +20,7 @@
 
 import { C } from "../../constants/values";
 import { requireFinite, requirePositive, show } from "../../internal/checks";
-import type { BatchReport } from "./batch";
+import { BatchLog, type BatchResult } from "../../law/batch";
 import { requireOutputLength } from "./batch";
 
 function requireSubluminal(name: string, vMs: number): number {
@@ -211,19 +211,19 @@ export function dopplerShiftWavelengthsSI(
   restWavelengthsM: Float64Array,
   radialVelocityMs: number,
   out: Float64Array,
-): BatchReport {
+): BatchResult<Float64Array> {
   requireSubluminal("radialVelocityMs", radialVelocityMs);
   requireOutputLength(restWavelengthsM, out);
   const z = Math.expm1(Math.atanh(radialVelocityMs / C));
-  const invalid: number[] = [];
+  const log = new BatchLog();
   for (let i = 0; i < restWavelengthsM.length; i++) {
     const l = restWavelengthsM[i] as number;
     if (l > 0 && l !== Infinity) {
       out[i] = l + l * z;
     } else {
       out[i] = NaN;
-      invalid.push(i);
+      log.add(i, `restWavelengthM must be a finite number > 0 m; got ${show(l)}`);
     }
   }
-  return { invalid };
+  return log.result(out);
 }

@@ -17,8 +17,8 @@
  * @packageDocumentation
  */
 
-import { requireFinite, requireNonNegative, requirePositive } from "../../internal/checks";
-import type { BatchReport } from "./batch";
+import { requireFinite, requireNonNegative, requirePositive, show } from "../../internal/checks";
+import { BatchLog, type BatchResult } from "../../law/batch";
 import { requireOutputLength } from "./batch";
 import { faddeeva } from "./faddeeva";
 
@@ -117,20 +117,20 @@ export function voigtProfilesSI(
   dopplerWidth: number,
   lorentzHwhm: number,
   out: Float64Array,
-): BatchReport {
+): BatchResult<Float64Array> {
   requireNonNegative("dopplerWidth", dopplerWidth, "(unit of the offset)");
   requireNonNegative("lorentzHwhm", lorentzHwhm, "(unit of the offset)");
   if (dopplerWidth === 0) requirePositive("lorentzHwhm", lorentzHwhm, "(unit of the offset; dopplerWidth is 0)");
   requireOutputLength(offsets, out);
-  const invalid: number[] = [];
+  const log = new BatchLog();
   for (let i = 0; i < offsets.length; i++) {
     const d = offsets[i] as number;
     if (!Number.isFinite(d)) {
       out[i] = NaN;
-      invalid.push(i);
+      log.add(i, `offset must be a finite number (unit of the widths); got ${show(d)}`);
     } else {
       out[i] = voigtProfileUnchecked(d, dopplerWidth, lorentzHwhm);
     }
   }
-  return { invalid };
+  return log.result(out);
 }

@@ -37,7 +37,7 @@
  */
 
 import { requireFinite, requireNonNegative, requirePositive, show } from "../../internal/checks";
-import type { BatchReport } from "./batch";
+import { BatchLog, type BatchResult } from "../../law/batch";
 import { faddeeva } from "./faddeeva";
 
 const SQRT_PI = Math.sqrt(Math.PI);
@@ -69,8 +69,8 @@ export interface SynthesisOptionsSI {
   readonly tauCutoff?: number;
 }
 
-/** Result of {@link synthesizeSpectrumSI}: batch report plus the τ₀ used for each line. */
-export interface SynthesisReportSI extends BatchReport {
+/** Result of {@link synthesizeSpectrumSI}: the batch result over the grid (`values` is `out`) plus the τ₀ used for each line. */
+export interface SynthesisReportSI extends BatchResult<Float64Array> {
   /** Central optical depth used for each line (solved when W was given). */
   readonly tau0: Float64Array;
 }
@@ -315,7 +315,11 @@ export function synthesizeSpectrumSI(
     resolved.tau0[i] =
       line.tau0 !== undefined ? line.tau0 : solveTau0(line.equivalentWidthM as number, resolved.dopplerWidthM[i] as number, resolved.lorentzHwhmM[i] as number);
   }
-  return { invalid: synthesizeSpectrumUnchecked(wavelengthsM, continuum, resolved, tauCut, out), tau0: resolved.tau0 };
+  const log = new BatchLog();
+  synthesizeSpectrumUnchecked(wavelengthsM, continuum, resolved, tauCut, out, (j, c) =>
+    log.add(j, `continuum must be finite; element ${j} is ${show(c)}`),
+  );
+  return { ...log.result(out), tau0: resolved.tau0 };
 }
 
 /**
@@ -339,8 +343,9 @@ export interface ResolvedLinesSI {
 /**
  * {@link synthesizeSpectrumSI} without the checks: the grid finite and
  * strictly increasing, `continuum` and `out` at least as long, the lines
- * resolved and valid, the cutoff `tauCut` finite and > 0. Returns the ascending
- * indices of the rows written as NaN (continuum not finite).
+ * resolved and valid, the cutoff `tauCut` finite and > 0. Each row whose
+ * continuum value `c` is not finite is written as NaN and passed to
+ * `bad(j, c)`, in ascending order.
  *
  * @internal
  */
@@ -350,7 +355,8 @@ export function synthesizeSpectrumUnchecked(
   lines: ResolvedLinesSI,
   tauCut: number,
   out: Float64Array,
-): number[] {
+  bad: (j: number, c: number) => void,
+): void {
   const n = wavelengthsM.length;
   const nl = lines.tau0.length;
   // Optical depth accumulator: `out`, unless it aliases the continuum.
@@ -382,15 +388,13 @@ export function synthesizeSpectrumUnchecked(
       }
     }
   }
-  const invalid: number[] = [];
   for (let j = 0; j < n; j++) {
     const c = continuum[j] as number;
     if (Number.isFinite(c)) {
       out[j] = c * Math.exp(-(tau[j] as number));
     } else {
       out[j] = NaN;
-      invalid.push(j);
+      bad(j, c);
     }
   }
-  return invalid;
 }
