@@ -183,3 +183,50 @@ describe("bad input: RangeError naming the parameter and the caller's unit", () 
     expect(() => redshiftFromVelocity(SI, vSI(1), "newtonian" as DopplerModel)).toThrow(/^model must be/);
   });
 });
+
+describe("the strict bounds |v| < c and z > −1 are exact, in either system", () => {
+  it("v = c is refused and the largest double below c is accepted (SI); c in cm s⁻¹ is refused (CGS)", () => {
+    expect(() => redshiftFromVelocity(SI, vSI(C))).toThrow(/^radialVelocity must be a finite number with \|radialVelocity\| < c = 299792458 m s\^-1; got 299792458$/);
+    expect(() => redshiftFromVelocity(SI, vSI(-C))).toThrow(/got -299792458$/);
+    // c − 2⁻²⁴ m s⁻¹ is the double just below c: 1 − β ≈ 2e-16, so 1 + z ≈ √(2/2e-16) ≈ 1e8 (finite)
+    const z = redshiftFromVelocity(SI, vSI(C - 2 ** -24));
+    expect(z).toBeGreaterThan(1e7);
+    expect(z).toBeLessThan(1e9);
+    expect(() => dopplerShift(CGS, lenCGS(5e-5), vCGS(29979245800))).toThrow(/^radialVelocity must be a finite number with \|radialVelocity\| < c = 29979245800 cm s\^-1; got 29979245800$/);
+  });
+  it("z = −1 is refused, the next double above it accepted (v → −c)", () => {
+    expect(() => velocityFromRedshift(CGS, -1)).toThrow(/^redshift must be a finite number > -1; got -1$/);
+    expect(() => redshiftWavelength(CGS, lenCGS(5e-5), Number.NEGATIVE_INFINITY)).toThrow(/^redshift must be a finite number > -1; got -Infinity$/);
+    const v = velocityFromRedshift(CGS, -1 + 2 ** -53);
+    // q = z(2 + z) rounds to z (2 + z rounds to 1), so v = c·z/(1 + 2⁻⁵³ → 1) = −c(1 − 2⁻⁵³):
+    // just inside −c, within a few ulp of it
+    expect(v).toBeGreaterThan(-29979245800);
+    expect(rel(v, -29979245800)).toBeLessThan(1e-15);
+  });
+});
+
+describe("line lists: each bad row carries the message its scalar form would throw", () => {
+  it("non-positive and non-finite rows, in the caller's unit", () => {
+    const rows = assumeArray<LengthArray<"CGS">>(Float64Array.of(6.5628e-5, 0, Number.NaN, -1e-5));
+    const r = dopplerShiftArray(CGS, rows, vCGS(3e6));
+    expect(r.invalid).toEqual([1, 2, 3]);
+    expect(r.reasons).toEqual([
+      "restWavelength must be a finite number > 0 cm; got 0",
+      "restWavelength must be a finite number > 0 cm; got NaN",
+      "restWavelength must be a finite number > 0 cm; got -0.00001",
+    ]);
+    expect(() => dopplerShift(CGS, lenCGS(0), vCGS(3e6))).toThrow(new RangeError(r.reasons[0]));
+    expect(r.values[0]).toBe(dopplerShift(CGS, lenCGS(6.5628e-5), vCGS(3e6)));
+    // the classical model reports the same rows
+    expect(dopplerShiftArray(CGS, rows, vCGS(3e6), "classical").reasons).toEqual(r.reasons);
+  });
+  it("a shifted wavelength beyond the double range only in CGS is a reported row, not Infinity", () => {
+    // v = 0.9c: 1 + z = √19 ≈ 4.36; 5e307 cm = 5e305 m → 2.2e306 m (finite), 2.2e308 cm (not)
+    const v = 0.9 * 29979245800;
+    const r = dopplerShiftArray(CGS, assumeArray<LengthArray<"CGS">>(Float64Array.of(5e307, 1e-5)), vCGS(v));
+    expect(r.invalid).toEqual([0]);
+    expect(r.reasons[0]).toBe(`observed wavelength overflows the double range in cm for restWavelength=5e+307 cm, radialVelocity=${v} cm s^-1`);
+    expect(() => dopplerShift(CGS, lenCGS(5e307), vCGS(v))).toThrow(new RangeError(r.reasons[0]));
+    expect(Number.isFinite(dopplerShift(SI, lenSI(5e305), vSI(0.9 * C)))).toBe(true);
+  });
+});

@@ -27,29 +27,27 @@
  * @module
  */
 import { C } from "../constants/values";
-import { requireFinite } from "../internal/checks";
-import { fromSI, positive, toSI } from "../internal/typed";
+import { show } from "../internal/checks";
+import { defineLaw } from "../law/define";
+import { LawInput, lawInput } from "../law/input";
+import { lawOutput } from "../law/output";
+import type { BatchResult } from "../law/batch";
 import { kinds } from "../quantity/aliases";
-import type { Dimensionless, Length, LengthArray, Velocity } from "../quantity/aliases";
+import type { Dimensionless, Kind, Length, LengthArray, Velocity } from "../quantity/aliases";
+import type { Dimension } from "../quantity/dimension";
 import type { Pure, SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import type { BatchResult } from "../law/batch";
-import { show } from "./checks";
 import {
-  classicalDopplerWavelengthSI,
-  classicalVelocityFromWavelengthsSI,
-  dopplerShiftWavelengthsSI,
-  observedWavelengthFromRedshiftSI,
-  radialVelocityFromWavelengthsSI,
-  redshiftFromVelocitySI,
-  redshiftFromWavelengthsSI,
-  relativisticDopplerWavelengthSI,
-  velocityFromRedshiftSI,
+  classicalDopplerWavelengthUnchecked,
+  classicalVelocityFromWavelengthsUnchecked,
+  observedWavelengthFromRedshiftUnchecked,
+  radialVelocityFromWavelengthsUnchecked,
+  redshiftFromVelocityUnchecked,
+  redshiftFromWavelengthsUnchecked,
+  relativisticDopplerWavelengthUnchecked,
+  velocityFromRedshiftUnchecked,
 } from "./kernels/doppler";
 import type { SameMediumAs } from "./medium";
-
-const L = kinds.length.dimension;
-const V = kinds.velocity.dimension;
 
 /** `"relativistic"` (default; longitudinal special-relativistic Doppler) or `"classical"` (first order, z = v/c). */
 export type DopplerModel = "relativistic" | "classical";
@@ -61,22 +59,80 @@ function modelOf(model: DopplerModel): DopplerModel {
   return model;
 }
 
-/** |v| < c in the caller's unit; returns v in m s⁻¹. */
-function subluminalSI(sys: UnitSystem<SystemName>, name: string, v: number): number {
-  const si = toSI(sys, v, V);
-  if (!(Math.abs(si) < C)) {
-    throw new RangeError(
-      `${name} must be a finite number with |${name}| < c = ${fromSI(sys, C, V)} ${sys.coherentUnit(V)}; got ${show(v)}`,
-    );
+/**
+ * A finite input bounded by a strict inequality (|v| < c, z > −1). The law
+ * toolkit's bounds are inclusive, so the bound given is the nearest double
+ * inside (exact in SI: v ≤ c − 2⁻²⁴ m s⁻¹ ⇔ v < c); the message states the
+ * physical rule rather than that double.
+ */
+class StrictlyBoundedInput<D extends Dimension> extends LawInput<D, false> {
+  private readonly rule: (sys: UnitSystem<SystemName>) => string;
+  constructor(name: string, kind: Kind<D>, min: number, max: number, rule: (sys: UnitSystem<SystemName>) => string) {
+    super(name, kind, { check: "finite", min, max });
+    this.rule = rule;
   }
-  return si;
+  override reason(sys: UnitSystem<SystemName>, value: number): string {
+    return `${this.name} must be a finite number ${this.rule(sys)}; got ${show(value)}`;
+  }
 }
 
-function redshiftChecked(z: number): number {
-  requireFinite("redshift", z, "(dimensionless)");
-  if (!(z > -1)) throw new RangeError(`redshift must be a finite number > -1 (dimensionless); got ${show(z)}`);
-  return z;
-}
+/** The largest double below c (c = 299 792 458 m s⁻¹ is exact; the doubles just below it are 2⁻²⁴ apart). */
+const BELOW_C = C - 2 ** -24;
+/** The smallest double above −1 (the doubles in [−1, −½] are 2⁻⁵³ apart). */
+const ABOVE_MINUS_ONE = -1 + 2 ** -53;
+const speedOfLight = lawOutput("c", kinds.velocity);
+
+const radialVelocity = new StrictlyBoundedInput(
+  "radialVelocity",
+  kinds.velocity,
+  -BELOW_C,
+  BELOW_C,
+  (sys) => `with |radialVelocity| < c = ${speedOfLight.fromSI(sys, C)} ${sys.coherentUnit(kinds.velocity.dimension)}`,
+);
+const redshift = new StrictlyBoundedInput("redshift", kinds.dimensionless, ABOVE_MINUS_ONE, Infinity, () => "> -1");
+const restWavelength = lawInput("restWavelength", kinds.length);
+const observedWavelength = lawInput("observedWavelength", kinds.length);
+
+const zOfV = defineLaw({ name: "redshift", inputs: [radialVelocity], result: kinds.dimensionless, kernel: redshiftFromVelocityUnchecked });
+const zOfVClassical = defineLaw({ name: "redshift", inputs: [radialVelocity], result: kinds.dimensionless, kernel: (v) => v / C });
+const vOfZ = defineLaw({ name: "radial velocity", inputs: [redshift], result: kinds.velocity, kernel: velocityFromRedshiftUnchecked });
+const vOfZClassical = defineLaw({ name: "radial velocity", inputs: [redshift], result: kinds.velocity, kernel: (z) => C * z });
+const shifted = defineLaw({
+  name: "observed wavelength",
+  inputs: [restWavelength, radialVelocity],
+  result: kinds.length,
+  kernel: relativisticDopplerWavelengthUnchecked,
+});
+const shiftedClassical = defineLaw({
+  name: "observed wavelength",
+  inputs: [restWavelength, radialVelocity],
+  result: kinds.length,
+  kernel: classicalDopplerWavelengthUnchecked,
+});
+const redshifted = defineLaw({
+  name: "observed wavelength",
+  inputs: [restWavelength, redshift],
+  result: kinds.length,
+  kernel: observedWavelengthFromRedshiftUnchecked,
+});
+const zOfWavelengths = defineLaw({
+  name: "redshift",
+  inputs: [observedWavelength, restWavelength],
+  result: kinds.dimensionless,
+  kernel: redshiftFromWavelengthsUnchecked,
+});
+const vOfWavelengths = defineLaw({
+  name: "radial velocity",
+  inputs: [observedWavelength, restWavelength],
+  result: kinds.velocity,
+  kernel: radialVelocityFromWavelengthsUnchecked,
+});
+const vOfWavelengthsClassical = defineLaw({
+  name: "radial velocity",
+  inputs: [observedWavelength, restWavelength],
+  result: kinds.velocity,
+  kernel: classicalVelocityFromWavelengthsUnchecked,
+});
 
 /**
  * Redshift of a source with radial velocity v: z = √((1+β)/(1−β)) − 1
@@ -97,8 +153,7 @@ export function redshiftFromVelocity<S extends SystemName>(
   radialVelocity: Velocity<NoInfer<S>>,
   model: DopplerModel = "relativistic",
 ): Dimensionless {
-  const v = subluminalSI(sys, "radialVelocity", radialVelocity);
-  return (modelOf(model) === "relativistic" ? redshiftFromVelocitySI(v) : v / C) as Dimensionless;
+  return modelOf(model) === "relativistic" ? zOfV(sys, radialVelocity) : zOfVClassical(sys, radialVelocity);
 }
 
 /**
@@ -120,9 +175,7 @@ export function velocityFromRedshift<S extends SystemName>(
   redshift: Pure,
   model: DopplerModel = "relativistic",
 ): Velocity<S> {
-  const z = redshiftChecked(redshift);
-  const v = modelOf(model) === "relativistic" ? velocityFromRedshiftSI(z) : C * z;
-  return fromSI(sys, v, V) as Velocity<S>;
+  return modelOf(model) === "relativistic" ? vOfZ(sys, redshift) : vOfZClassical(sys, redshift);
 }
 
 /**
@@ -148,11 +201,9 @@ export function dopplerShift<S extends SystemName, W extends Length<S>>(
   radialVelocity: Velocity<NoInfer<S>>,
   model: DopplerModel = "relativistic",
 ): W {
-  positive(sys, "restWavelength", restWavelength, L);
-  const v = subluminalSI(sys, "radialVelocity", radialVelocity);
-  const lam = toSI(sys, restWavelength, L);
-  const out = modelOf(model) === "relativistic" ? relativisticDopplerWavelengthSI(lam, v) : classicalDopplerWavelengthSI(lam, v);
-  return fromSI(sys, out, L) as W;
+  const law = modelOf(model) === "relativistic" ? shifted : shiftedClassical;
+  // the law returns a Length<S>; the shifted wavelength keeps the caller's medium brand
+  return law(sys, restWavelength, radialVelocity) as W;
 }
 
 /**
@@ -170,9 +221,7 @@ export function redshiftWavelength<S extends SystemName, W extends Length<S>>(
   restWavelength: W,
   redshift: Pure,
 ): W {
-  positive(sys, "restWavelength", restWavelength, L);
-  const z = redshiftChecked(redshift);
-  return fromSI(sys, observedWavelengthFromRedshiftSI(toSI(sys, restWavelength, L), z), L) as W;
+  return redshifted(sys, restWavelength, redshift) as W;
 }
 
 /**
@@ -192,9 +241,7 @@ export function redshiftFromWavelengths<S extends SystemName, W extends Length<S
   observedWavelength: W,
   restWavelength: SameMediumAs<NoInfer<S>, NoInfer<W>>,
 ): Dimensionless {
-  positive(sys, "observedWavelength", observedWavelength, L);
-  positive(sys, "restWavelength", restWavelength, L);
-  return redshiftFromWavelengthsSI(toSI(sys, observedWavelength, L), toSI(sys, restWavelength, L)) as Dimensionless;
+  return zOfWavelengths(sys, observedWavelength, restWavelength);
 }
 
 /**
@@ -215,25 +262,22 @@ export function radialVelocityFromWavelengths<S extends SystemName, W extends Le
   restWavelength: SameMediumAs<NoInfer<S>, NoInfer<W>>,
   model: DopplerModel = "relativistic",
 ): Velocity<S> {
-  positive(sys, "observedWavelength", observedWavelength, L);
-  positive(sys, "restWavelength", restWavelength, L);
-  const o = toSI(sys, observedWavelength, L);
-  const r = toSI(sys, restWavelength, L);
-  const v = modelOf(model) === "relativistic" ? radialVelocityFromWavelengthsSI(o, r) : classicalVelocityFromWavelengthsSI(o, r);
-  return fromSI(sys, v, V) as Velocity<S>;
+  const law = modelOf(model) === "relativistic" ? vOfWavelengths : vOfWavelengthsClassical;
+  return law(sys, observedWavelength, restWavelength);
 }
 
 /**
  * Shift a whole line list by one radial velocity (a new array of the input's
  * type, medium brand included). The velocity is checked once (RangeError
- * for |v| ≥ c); rows that are not finite and > 0 become NaN and are listed
- * in `invalid`.
+ * for |v| ≥ c, before any row is written); a row that is not finite and
+ * > 0 becomes NaN, its index is listed in `invalid` and `reasons` says why
+ * (the message {@link dopplerShift} would throw).
  *
  * @example
  * ```ts
  * import { SI, dopplerShiftArray, ions, seriesVacuumWavelengths, units } from "starlume";
  * const balmer = seriesVacuumWavelengths(SI, ions.H, "balmer", 5);
- * const { values } = dopplerShiftArray(SI, balmer, SI.of(120, units.km_per_s)); // VacuumWavelengthArray<"SI">
+ * const { values, invalid, reasons } = dopplerShiftArray(SI, balmer, SI.of(120, units.km_per_s)); // VacuumWavelengthArray<"SI">; invalid = [], reasons = []
  * ```
  */
 export function dopplerShiftArray<S extends SystemName, A extends LengthArray<S>>(
@@ -242,27 +286,6 @@ export function dopplerShiftArray<S extends SystemName, A extends LengthArray<S>
   radialVelocity: Velocity<NoInfer<S>>,
   model: DopplerModel = "relativistic",
 ): BatchResult<A> {
-  const v = subluminalSI(sys, "radialVelocity", radialVelocity);
-  const m = modelOf(model);
-  const n = restWavelengths.length;
-  const out = new Float64Array(n);
-  const k = sys.exp10(L);
-  if (m === "relativistic" && k === 0) {
-    const r = dopplerShiftWavelengthsSI(restWavelengths, v, out);
-    return { values: out as A, invalid: r.invalid, reasons: r.invalid.map(() => "invalid input (TODO: reason)") };
-  }
-  const invalid: number[] = [];
-  const z = m === "relativistic" ? redshiftFromVelocitySI(v) : v / C;
-  for (let i = 0; i < n; i++) {
-    const l = restWavelengths[i] as number;
-    if (l > 0 && l !== Infinity) {
-      const si = toSI(sys, l, L);
-      // the kernels' roundings: l + l·z (relativistic), l·(1 + v/c) (classical)
-      out[i] = fromSI(sys, m === "relativistic" ? si + si * z : si * (1 + z), L);
-    } else {
-      out[i] = NaN;
-      invalid.push(i);
-    }
-  }
-  return { values: out as A, invalid, reasons: invalid.map(() => "invalid input (TODO: reason)") };
+  const law = modelOf(model) === "relativistic" ? shifted : shiftedClassical;
+  return law.batch(sys, restWavelengths, radialVelocity) as BatchResult<A>;
 }

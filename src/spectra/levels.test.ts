@@ -137,3 +137,10 @@ describe("bad input: RangeError naming the parameter", () => {
     expect(() => ionFromMassNumber(2, 1)).toThrow(/^z must not exceed massNumber/);
   });
 });
+
+describe("the infinite-mass limit in CGS", () => {
+  it("the nuclear mass stays Infinity, the reduced mass is m_e in grams (× 10³ exactly)", () => {
+    expect(nuclearMass(CGS, ions.hydrogenInfiniteMass)).toBe(Infinity);
+    expect(reducedMass(CGS, ions.hydrogenInfiniteMass)).toBe(times10(M_E, 3));
+  });
+});

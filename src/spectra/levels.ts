@@ -19,9 +19,10 @@
  *
  * @module
  */
-import { fromSI, positive, toSI } from "../internal/typed";
+import { show } from "../internal/checks";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
-import { checkedIon, modelOf } from "./checks";
 import type { Energy, Mass } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
@@ -29,18 +30,77 @@ import {
   ALPHA_PARTICLE_MASS_KG,
   DEUTERON_MASS_KG,
   PROTON_MASS_KG,
-  bohrLevelEnergySI,
-  diracLevelCentroidEnergySI,
-  diracLevelEnergySI,
+  bohrLevelEnergyUnchecked,
+  diracLevelCentroidEnergyUnchecked,
+  diracLevelEnergyUnchecked,
   nuclearMassFromMassNumberKg,
-  reducedMassKg,
+  reducedMassUnchecked,
+  requireJ,
   requireNuclearCharge,
   requireQuantumNumber,
 } from "./kernels/hydrogen-like";
-import { ionizationEnergySI } from "./kernels/transitions";
+import { ionizationEnergyUnchecked } from "./kernels/transitions";
 
-const E = kinds.energy.dimension;
-const M = kinds.mass.dimension;
+/**
+ * Inputs of the internal laws below. Quantum numbers must be integers (or
+ * half-integers) and the ion a valid record: checks the law toolkit does not
+ * express, so the typed functions make them once, with the kernels' messages,
+ * and these inputs pass their values through (`check: "any"`). The laws only
+ * move the SI result into the caller's system.
+ */
+const nIn = lawInput("n", kinds.dimensionless, { check: "any" });
+const jIn = lawInput("j", kinds.dimensionless, { check: "any" });
+const zIn = lawInput("z", kinds.dimensionless, { check: "any" });
+const massKgIn = lawInput("nuclearMassKg", kinds.dimensionless, { check: "any" });
+const nuclearMassInput = lawInput("nuclearMass", kinds.mass);
+
+const massOf = defineLaw({ name: "nuclear mass", inputs: [massKgIn], result: kinds.mass, kernel: (m) => m });
+const reducedMassOf = defineLaw({ name: "reduced mass", inputs: [massKgIn], result: kinds.mass, kernel: reducedMassUnchecked });
+const bohrLevel = defineLaw({ name: "level energy", inputs: [nIn, zIn, massKgIn], result: kinds.energy, kernel: bohrLevelEnergyUnchecked });
+const diracLevel = defineLaw({ name: "level energy", inputs: [nIn, jIn, zIn, massKgIn], result: kinds.energy, kernel: diracLevelEnergyUnchecked });
+const diracCentroid = defineLaw({
+  name: "level energy",
+  inputs: [nIn, zIn, massKgIn],
+  result: kinds.energy,
+  kernel: diracLevelCentroidEnergyUnchecked,
+});
+const bohrIonization = defineLaw({ name: "ionization energy", inputs: [nIn, zIn, massKgIn], result: kinds.energy, kernel: ionizationEnergyUnchecked });
+const diracIonization = defineLaw({
+  name: "ionization energy",
+  inputs: [nIn, zIn, massKgIn],
+  result: kinds.energy,
+  kernel: (level, charge, mass) => -diracLevelCentroidEnergyUnchecked(level, charge, mass),
+});
+
+/**
+ * The ion, after checking Z and the nuclear mass (for ions built by hand
+ * rather than with {@link ion}): RangeError naming the bad field.
+ *
+ * @internal
+ */
+export function checkedIon(ionValue: Ion): Ion {
+  requireNuclearCharge(ionValue.z);
+  if (!(ionValue.nuclearMassKg > 0)) {
+    throw new RangeError(
+      `ion.nuclearMassKg must be a number > 0 kg (Infinity for the infinite-mass limit); got ${show(ionValue.nuclearMassKg)}`,
+    );
+  }
+  return ionValue;
+}
+
+/**
+ * The level model named by the options (default `"bohr"`); RangeError for an
+ * unknown name (e.g. from untyped JavaScript).
+ *
+ * @internal
+ */
+export function modelOf(options: LevelModelOptions | undefined): LevelModel {
+  const m = options?.model ?? "bohr";
+  if (m !== "bohr" && m !== "dirac-centroid") {
+    throw new RangeError(`options.model must be "bohr" or "dirac-centroid"; got ${JSON.stringify(m)}`);
+  }
+  return m;
+}
 
 /**
  * A hydrogen-like ion: nuclear charge number Z and nuclear mass. System-free
@@ -103,11 +163,7 @@ export function ion<S extends SystemName>(
   name?: string,
 ): Ion {
   requireNuclearCharge(z);
-  let kg = Infinity;
-  if (nuclearMass !== "infinite") {
-    positive(sys, "nuclearMass", nuclearMass, M);
-    kg = toSI(sys, nuclearMass, M);
-  }
+  const kg = nuclearMass === "infinite" ? Infinity : nuclearMassInput.toSI(sys, nuclearMass);
   return Object.freeze({ name: name ?? `Z = ${z}`, z, nuclearMassKg: kg });
 }
 
@@ -143,7 +199,9 @@ export function ionFromMassNumber(z: number, massNumber: number, name?: string):
  * ```
  */
 export function nuclearMass<S extends SystemName>(sys: UnitSystem<S>, ionValue: Ion): Mass<S> {
-  return fromSI(sys, checkedIon(ionValue).nuclearMassKg, M) as Mass<S>;
+  const kg = checkedIon(ionValue).nuclearMassKg;
+  // the infinite-mass limit is Infinity in every system (a law refuses non-finite results)
+  return kg === Infinity ? (kg as Mass<S>) : massOf(sys, kg);
 }
 
 /**
@@ -157,7 +215,7 @@ export function nuclearMass<S extends SystemName>(sys: UnitSystem<S>, ionValue: 
  * ```
  */
 export function reducedMass<S extends SystemName>(sys: UnitSystem<S>, ionValue: Ion): Mass<S> {
-  return fromSI(sys, reducedMassKg(checkedIon(ionValue).nuclearMassKg), M) as Mass<S>;
+  return reducedMassOf(sys, checkedIon(ionValue).nuclearMassKg);
 }
 
 /**
@@ -176,7 +234,8 @@ export function reducedMass<S extends SystemName>(sys: UnitSystem<S>, ionValue: 
  */
 export function bohrLevelEnergy<S extends SystemName>(sys: UnitSystem<S>, ionValue: Ion, n: number): Energy<S> {
   const i = checkedIon(ionValue);
-  return fromSI(sys, bohrLevelEnergySI(n, i.z, i.nuclearMassKg), E) as Energy<S>;
+  requireQuantumNumber("n", n);
+  return bohrLevel(sys, n, i.z, i.nuclearMassKg);
 }
 
 /**
@@ -201,7 +260,9 @@ export function diracLevelEnergy<S extends SystemName>(
   j: number,
 ): Energy<S> {
   const i = checkedIon(ionValue);
-  return fromSI(sys, diracLevelEnergySI(n, j, i.z, i.nuclearMassKg), E) as Energy<S>;
+  requireQuantumNumber("n", n);
+  requireJ("j", j, n);
+  return diracLevel(sys, n, j, i.z, i.nuclearMassKg);
 }
 
 /**
@@ -218,7 +279,8 @@ export function diracLevelEnergy<S extends SystemName>(
  */
 export function diracLevelCentroidEnergy<S extends SystemName>(sys: UnitSystem<S>, ionValue: Ion, n: number): Energy<S> {
   const i = checkedIon(ionValue);
-  return fromSI(sys, diracLevelCentroidEnergySI(n, i.z, i.nuclearMassKg), E) as Energy<S>;
+  requireQuantumNumber("n", n);
+  return diracCentroid(sys, n, i.z, i.nuclearMassKg);
 }
 
 /** The level model of the line and ionisation functions. */
@@ -264,6 +326,5 @@ export function ionizationEnergy<S extends SystemName>(
   const i = checkedIon(ionValue);
   const model = modelOf(options);
   requireQuantumNumber("n", n);
-  const si = model === "bohr" ? ionizationEnergySI(n, i.z, i.nuclearMassKg) : -diracLevelCentroidEnergySI(n, i.z, i.nuclearMassKg);
-  return fromSI(sys, si, E) as Energy<S>;
+  return model === "bohr" ? bohrIonization(sys, n, i.z, i.nuclearMassKg) : diracIonization(sys, n, i.z, i.nuclearMassKg);
 }

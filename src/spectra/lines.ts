@@ -21,36 +21,111 @@
  * @module
  */
 import { C, H } from "../constants/values";
-import { arrayFromSIInPlace, fromSI } from "../internal/typed";
+import { show } from "../internal/checks";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
+import { lawOutput } from "../law/output";
 import { kinds } from "../quantity/aliases";
 import type { Energy, Frequency, Wavenumber } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import { checkedIon, modelOf, show } from "./checks";
-import { diracLevelCentroidEnergySI } from "./kernels/hydrogen-like";
+import { diracLevelCentroidEnergyUnchecked, requireJ, requireQuantumNumber } from "./kernels/hydrogen-like";
 import {
   HYDROGEN_SERIES,
-  diracCentroidTransitionEnergySI,
-  diracTransitionEnergySI,
-  seriesLimitEnergySI,
-  seriesLimitVacuumWavelengthSI,
+  diracCentroidTransitionEnergyUnchecked,
+  diracTransitionEnergyUnchecked,
+  ionizationEnergyUnchecked,
+  requireLevelAbove,
+  requireOrdered,
+  seriesLimitVacuumWavelengthUnchecked,
   seriesLowerLevel as seriesLowerLevelKernel,
-  seriesVacuumWavelengthsSI,
-  transitionEnergySI,
-  transitionFrequencySI,
-  transitionVacuumWavelengthSI,
-  transitionWavenumberSI,
+  transitionEnergyUnchecked,
+  transitionFrequencyUnchecked,
+  transitionVacuumWavelengthUnchecked,
+  transitionWavenumberUnchecked,
 } from "./kernels/transitions";
 import type { SeriesName } from "./kernels/transitions";
-import type { Ion, LevelModelOptions } from "./levels";
+import { checkedIon, modelOf, type Ion, type LevelModelOptions } from "./levels";
 import type { VacuumWavelength, VacuumWavelengthArray } from "./medium";
 
 export type { SeriesName };
 
-const L = kinds.length.dimension;
-const K = kinds.wavenumber.dimension;
-const E = kinds.energy.dimension;
 const HC = H * C;
+
+/**
+ * Inputs of the internal laws below: quantum numbers and the ion's Z and
+ * nuclear mass (kg), checked once by the typed functions (integers, ordering:
+ * checks the law toolkit does not express) and passed through here
+ * (`check: "any"`). The laws move the SI result into the caller's system.
+ */
+const nLowerIn = lawInput("nLower", kinds.dimensionless, { check: "any" });
+const nUpperIn = lawInput("nUpper", kinds.dimensionless, { check: "any" });
+const jLowerIn = lawInput("jLower", kinds.dimensionless, { check: "any" });
+const jUpperIn = lawInput("jUpper", kinds.dimensionless, { check: "any" });
+const zIn = lawInput("z", kinds.dimensionless, { check: "any" });
+const massKgIn = lawInput("nuclearMassKg", kinds.dimensionless, { check: "any" });
+const transition = [nLowerIn, nUpperIn, zIn, massKgIn] as const;
+const limit = [nLowerIn, zIn, massKgIn] as const;
+
+const bohrEnergy = defineLaw({ name: "transition energy", inputs: transition, result: kinds.energy, kernel: transitionEnergyUnchecked });
+const diracEnergy = defineLaw({
+  name: "transition energy",
+  inputs: transition,
+  result: kinds.energy,
+  kernel: diracCentroidTransitionEnergyUnchecked,
+});
+const bohrWavenumber = defineLaw({ name: "wavenumber", inputs: transition, result: kinds.wavenumber, kernel: transitionWavenumberUnchecked });
+const diracWavenumber = defineLaw({
+  name: "wavenumber",
+  inputs: transition,
+  result: kinds.wavenumber,
+  kernel: (nl, nu, z, m) => diracCentroidTransitionEnergyUnchecked(nl, nu, z, m) / HC,
+});
+const bohrFrequency = defineLaw({ name: "frequency", inputs: transition, result: kinds.frequency, kernel: transitionFrequencyUnchecked });
+const diracFrequency = defineLaw({
+  name: "frequency",
+  inputs: transition,
+  result: kinds.frequency,
+  kernel: (nl, nu, z, m) => diracCentroidTransitionEnergyUnchecked(nl, nu, z, m) / H,
+});
+const bohrWavelength = defineLaw({
+  name: "vacuum wavelength",
+  inputs: transition,
+  result: kinds.length,
+  kernel: transitionVacuumWavelengthUnchecked,
+});
+const diracWavelength = defineLaw({
+  name: "vacuum wavelength",
+  inputs: transition,
+  result: kinds.length,
+  kernel: (nl, nu, z, m) => HC / diracCentroidTransitionEnergyUnchecked(nl, nu, z, m),
+});
+const diracLevelsEnergy = defineLaw({
+  name: "transition energy",
+  inputs: [nLowerIn, jLowerIn, nUpperIn, jUpperIn, zIn, massKgIn],
+  result: kinds.energy,
+  kernel: diracTransitionEnergyUnchecked,
+});
+const bohrLimitEnergy = defineLaw({ name: "series-limit energy", inputs: limit, result: kinds.energy, kernel: ionizationEnergyUnchecked });
+const diracLimitEnergy = defineLaw({
+  name: "series-limit energy",
+  inputs: limit,
+  result: kinds.energy,
+  kernel: (n1, z, m) => -diracLevelCentroidEnergyUnchecked(n1, z, m),
+});
+const bohrLimitWavelength = defineLaw({
+  name: "series-limit wavelength",
+  inputs: limit,
+  result: kinds.length,
+  kernel: seriesLimitVacuumWavelengthUnchecked,
+});
+const diracLimitWavelength = defineLaw({
+  name: "series-limit wavelength",
+  inputs: limit,
+  result: kinds.length,
+  kernel: (n1, z, m) => HC / -diracLevelCentroidEnergyUnchecked(n1, z, m),
+});
+const wavelengthOut = lawOutput("vacuum wavelength", kinds.length);
 
 /**
  * The named series and their lower levels n₁:
@@ -78,14 +153,6 @@ export function seriesLowerLevel(series: SeriesName): number {
   return seriesLowerLevelKernel(series);
 }
 
-/** Transition energy in J (SI), by model. */
-function energySI(ionValue: Ion, nLower: number, nUpper: number, options: LevelModelOptions | undefined): number {
-  const i = checkedIon(ionValue);
-  return modelOf(options) === "bohr"
-    ? transitionEnergySI(nLower, nUpper, i.z, i.nuclearMassKg)
-    : diracCentroidTransitionEnergySI(nLower, nUpper, i.z, i.nuclearMassKg);
-}
-
 /**
  * Energy of the transition n_lower → n_upper, E = h c R∞ Z² (μ/m_e)(1/n₁² − 1/n₂²)
  * (Bohr, default) or the Dirac shell-centroid difference.
@@ -109,7 +176,10 @@ export function transitionEnergy<S extends SystemName>(
   nUpper: number,
   options?: LevelModelOptions,
 ): Energy<S> {
-  return fromSI(sys, energySI(ionValue, nLower, nUpper, options), E) as Energy<S>;
+  const i = checkedIon(ionValue);
+  const bohr = modelOf(options) === "bohr";
+  requireOrdered(nLower, nUpper);
+  return (bohr ? bohrEnergy : diracEnergy)(sys, nLower, nUpper, i.z, i.nuclearMassKg);
 }
 
 /**
@@ -131,11 +201,9 @@ export function transitionWavenumber<S extends SystemName>(
   options?: LevelModelOptions,
 ): Wavenumber<S> {
   const i = checkedIon(ionValue);
-  const si =
-    modelOf(options) === "bohr"
-      ? transitionWavenumberSI(nLower, nUpper, i.z, i.nuclearMassKg)
-      : diracCentroidTransitionEnergySI(nLower, nUpper, i.z, i.nuclearMassKg) / HC;
-  return fromSI(sys, si, K) as Wavenumber<S>;
+  const bohr = modelOf(options) === "bohr";
+  requireOrdered(nLower, nUpper);
+  return (bohr ? bohrWavenumber : diracWavenumber)(sys, nLower, nUpper, i.z, i.nuclearMassKg);
 }
 
 /**
@@ -156,13 +224,10 @@ export function transitionFrequency<S extends SystemName>(
   nUpper: number,
   options?: LevelModelOptions,
 ): Frequency {
-  void sys;
   const i = checkedIon(ionValue);
-  const si =
-    modelOf(options) === "bohr"
-      ? transitionFrequencySI(nLower, nUpper, i.z, i.nuclearMassKg)
-      : diracCentroidTransitionEnergySI(nLower, nUpper, i.z, i.nuclearMassKg) / H;
-  return si as Frequency;
+  const bohr = modelOf(options) === "bohr";
+  requireOrdered(nLower, nUpper);
+  return (bohr ? bohrFrequency : diracFrequency)(sys, nLower, nUpper, i.z, i.nuclearMassKg);
 }
 
 /**
@@ -184,11 +249,9 @@ export function transitionVacuumWavelength<S extends SystemName>(
   options?: LevelModelOptions,
 ): VacuumWavelength<S> {
   const i = checkedIon(ionValue);
-  const si =
-    modelOf(options) === "bohr"
-      ? transitionVacuumWavelengthSI(nLower, nUpper, i.z, i.nuclearMassKg)
-      : HC / diracCentroidTransitionEnergySI(nLower, nUpper, i.z, i.nuclearMassKg);
-  return fromSI(sys, si, L) as VacuumWavelength<S>;
+  const bohr = modelOf(options) === "bohr";
+  requireOrdered(nLower, nUpper);
+  return (bohr ? bohrWavelength : diracWavelength)(sys, nLower, nUpper, i.z, i.nuclearMassKg) as VacuumWavelength<S>;
 }
 
 /** A Dirac fine-structure level: principal quantum number n and total angular momentum j (½ ≤ j ≤ n − ½). */
@@ -224,7 +287,12 @@ export function diracTransitionEnergy<S extends SystemName>(
   upper: DiracLevel,
 ): Energy<S> {
   const i = checkedIon(ionValue);
-  return fromSI(sys, diracTransitionEnergySI(lower.n, lower.j, upper.n, upper.j, i.z, i.nuclearMassKg), E) as Energy<S>;
+  requireQuantumNumber("nLower", lower.n);
+  requireQuantumNumber("nUpper", upper.n);
+  requireJ("jLower", lower.j, lower.n);
+  requireJ("jUpper", upper.j, upper.n);
+  requireLevelAbove(lower.n, lower.j, upper.n, upper.j);
+  return diracLevelsEnergy(sys, lower.n, lower.j, upper.n, upper.j, i.z, i.nuclearMassKg);
 }
 
 /**
@@ -283,11 +351,7 @@ export function seriesLimitEnergy<S extends SystemName>(
 ): Energy<S> {
   const i = checkedIon(ionValue);
   const n1 = seriesLowerLevelKernel(series);
-  const si =
-    modelOf(options) === "bohr"
-      ? seriesLimitEnergySI(series, i.z, i.nuclearMassKg)
-      : -diracLevelCentroidEnergySI(n1, i.z, i.nuclearMassKg);
-  return fromSI(sys, si, E) as Energy<S>;
+  return (modelOf(options) === "bohr" ? bohrLimitEnergy : diracLimitEnergy)(sys, n1, i.z, i.nuclearMassKg);
 }
 
 /**
@@ -308,11 +372,8 @@ export function seriesLimitVacuumWavelength<S extends SystemName>(
 ): VacuumWavelength<S> {
   const i = checkedIon(ionValue);
   const n1 = seriesLowerLevelKernel(series);
-  const si =
-    modelOf(options) === "bohr"
-      ? seriesLimitVacuumWavelengthSI(series, i.z, i.nuclearMassKg)
-      : HC / -diracLevelCentroidEnergySI(n1, i.z, i.nuclearMassKg);
-  return fromSI(sys, si, L) as VacuumWavelength<S>;
+  const law = modelOf(options) === "bohr" ? bohrLimitWavelength : diracLimitWavelength;
+  return law(sys, n1, i.z, i.nuclearMassKg) as VacuumWavelength<S>;
 }
 
 /**
@@ -335,16 +396,18 @@ export function seriesVacuumWavelengths<S extends SystemName>(
   options?: LevelModelOptions,
 ): VacuumWavelengthArray<S> {
   const i = checkedIon(ionValue);
-  let out: Float64Array;
-  if (modelOf(options) === "bohr") {
-    out = seriesVacuumWavelengthsSI(series, count, i.z, i.nuclearMassKg);
-  } else {
-    const n1 = seriesLowerLevelKernel(series);
-    if (!Number.isInteger(count) || count < 1) {
-      throw new RangeError(`count must be an integer >= 1; got ${show(count)}`);
-    }
-    out = new Float64Array(count);
-    for (let k = 0; k < count; k++) out[k] = HC / diracCentroidTransitionEnergySI(n1, n1 + 1 + k, i.z, i.nuclearMassKg);
+  const n1 = seriesLowerLevelKernel(series);
+  const bohr = modelOf(options) === "bohr";
+  if (!Number.isInteger(count) || count < 1) {
+    throw new RangeError(`count must be an integer >= 1; got ${show(count)}`);
   }
-  return arrayFromSIInPlace(sys, out, L) as VacuumWavelengthArray<S>;
+  const out = new Float64Array(count);
+  for (let k = 0; k < count; k++) {
+    const nUpper = n1 + 1 + k;
+    const si = bohr
+      ? transitionVacuumWavelengthUnchecked(n1, nUpper, i.z, i.nuclearMassKg)
+      : HC / diracCentroidTransitionEnergyUnchecked(n1, nUpper, i.z, i.nuclearMassKg);
+    out[k] = wavelengthOut.fromSI(sys, si);
+  }
+  return out as VacuumWavelengthArray<S>;
 }

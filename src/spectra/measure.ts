@@ -23,59 +23,82 @@
  *
  * @module
  */
-import { requireFinite } from "../internal/checks";
-import { arrayToSI, fromSI, toSI } from "../internal/typed";
+import { show } from "../internal/checks";
+import { lawInput } from "../law/input";
+import { lawOutput } from "../law/output";
 import { kinds } from "../quantity/aliases";
 import type { Dimensionless, Length, LengthArray } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import { increasingGrid, show } from "./checks";
-import { equivalentWidthSI, lineCentroidSI, lineDepthSI } from "./kernels/measure";
+import { equivalentWidthUnchecked, lineCentroidUnchecked, lineDepthUnchecked } from "./kernels/measure";
 import type { SameMediumAs, WavelengthOnGrid } from "./medium";
-import type { SpectrumArray } from "./synthesize";
+import { gridToSI, type SpectrumArray } from "./synthesize";
 
-const L = kinds.length.dimension;
+const loInput = lawInput("lo", kinds.length, { check: "finite" });
+const hiInput = lawInput("hi", kinds.length, { check: "finite" });
+const windowInputs = [loInput, hiInput];
+const equivalentWidthOut = lawOutput("equivalent width", kinds.length);
+const centroidOut = lawOutput("centroid", kinds.length);
 
-/** First index with grid[i] >= x, and first with grid[i] > x. */
-function countInWindow(grid: Float64Array, lo: number, hi: number): number {
-  const bound = (x: number, strict: boolean): number => {
-    let a = 0;
-    let b = grid.length;
-    while (a < b) {
-      const m = (a + b) >>> 1;
-      const g = grid[m] as number;
-      if (strict ? g <= x : g < x) a = m + 1;
-      else b = m;
-    }
-    return a;
-  };
-  return bound(hi, true) - bound(lo, false);
+/** First index with grid[i] >= x (`strict`: > x); the grid is increasing. */
+function bound(grid: Float64Array, x: number, strict: boolean): number {
+  let a = 0;
+  let b = grid.length;
+  while (a < b) {
+    const m = (a + b) >>> 1;
+    const g = grid[m] as number;
+    if (strict ? g <= x : g < x) a = m + 1;
+    else b = m;
+  }
+  return a;
 }
 
-type Kernel = (g: Float64Array, f: Float64Array, c: Float64Array, lo: number, hi: number) => number;
+/** A measurement window, checked: the grid in SI and the grid points i0 … i1 − 1 inside [lo, hi]. */
+interface Window {
+  readonly gridSI: Float64Array;
+  readonly i0: number;
+  readonly i1: number;
+}
 
-function measure(
+/**
+ * Check everything a measurement needs, once and in the caller's units
+ * (module header), and find the window on the caller's grid.
+ */
+function windowOf(
   sys: UnitSystem<SystemName>,
   grid: Float64Array,
   flux: Float64Array,
   continuum: Float64Array,
   lo: number,
   hi: number,
-  kernel: Kernel,
-): number {
-  const unit = sys.coherentUnit(L);
-  increasingGrid(sys, "grid", grid, L);
+): Window {
+  const unit = sys.coherentUnit(kinds.length.dimension);
+  const gridSI = gridToSI(sys, grid);
   const n = grid.length;
   if (flux.length !== n) throw new RangeError(`flux must have the grid length ${n}; got ${flux.length}`);
   if (continuum.length !== n) throw new RangeError(`continuum must have the grid length ${n}; got ${continuum.length}`);
-  requireFinite("lo", lo, unit);
-  requireFinite("hi", hi, unit);
+  loInput.toSI(sys, lo);
+  hiInput.toSI(sys, hi);
   if (!(hi > lo)) throw new RangeError(`hi must be greater than lo (${show(lo)}) ${unit}; got ${show(hi)}`);
-  const count = countInWindow(grid, lo, hi);
-  if (count < 2) {
-    throw new RangeError(`the window [lo, hi] = [${show(lo)}, ${show(hi)}] ${unit} must contain at least 2 grid points; got ${count}`);
+  const i0 = bound(grid, lo, false);
+  const i1 = bound(grid, hi, true);
+  if (i1 - i0 < 2) {
+    throw new RangeError(`the window [lo, hi] = [${show(lo)}, ${show(hi)}] ${unit} must contain at least 2 grid points; got ${i1 - i0}`);
   }
-  return kernel(arrayToSI(sys, grid, L), flux, continuum, toSI(sys, lo, L), toSI(sys, hi, L));
+  for (let i = i0; i < i1; i++) {
+    const f = flux[i] as number;
+    const c = continuum[i] as number;
+    if (!(f - f === 0)) throw new RangeError(`flux must be finite in the window; element ${i} is ${show(f)}`);
+    if (!(c > 0 && c < Infinity)) throw new RangeError(`continuum must be finite and > 0 in the window; element ${i} is ${show(c)}`);
+  }
+  return { gridSI, i0, i1 };
+}
+
+/** An SI length result in the caller's system; RangeError naming the window when it is not finite there. */
+function lengthIn(sys: UnitSystem<SystemName>, out: typeof equivalentWidthOut, valueSI: number, lo: number, hi: number): number {
+  const v = out.fromSI(sys, valueSI);
+  if (v !== v) throw new RangeError(out.reason(sys, valueSI, windowInputs, [lo, hi]));
+  return v;
 }
 
 /**
@@ -105,7 +128,8 @@ export function equivalentWidth<S extends SystemName, G extends LengthArray<S>, 
   lo: SameMediumAs<NoInfer<S>, NoInfer<G>>,
   hi: SameMediumAs<NoInfer<S>, NoInfer<G>>,
 ): Length<S> {
-  return fromSI(sys, measure(sys, grid, flux, continuum, lo, hi, equivalentWidthSI), L) as Length<S>;
+  const w = windowOf(sys, grid, flux, continuum, lo, hi);
+  return lengthIn(sys, equivalentWidthOut, equivalentWidthUnchecked(w.gridSI, flux, continuum, w.i0, w.i1), lo, hi) as Length<S>;
 }
 
 /**
@@ -130,7 +154,13 @@ export function lineCentroid<S extends SystemName, G extends LengthArray<S>, C e
   lo: SameMediumAs<NoInfer<S>, NoInfer<G>>,
   hi: SameMediumAs<NoInfer<S>, NoInfer<G>>,
 ): WavelengthOnGrid<S, G> {
-  return fromSI(sys, measure(sys, grid, flux, continuum, lo, hi, lineCentroidSI), L) as WavelengthOnGrid<S, G>;
+  const w = windowOf(sys, grid, flux, continuum, lo, hi);
+  const c = lineCentroidUnchecked(w.gridSI, flux, continuum, w.i0, w.i1);
+  if (c !== c) {
+    const unit = sys.coherentUnit(kinds.length.dimension);
+    throw new RangeError(`flux has no deficit against continuum in [lo, hi] = [${show(lo)}, ${show(hi)}] ${unit}: the centroid is undefined`);
+  }
+  return lengthIn(sys, centroidOut, c, lo, hi) as WavelengthOnGrid<S, G>;
 }
 
 /**
@@ -153,5 +183,6 @@ export function lineDepth<S extends SystemName, G extends LengthArray<S>, C exte
   lo: SameMediumAs<NoInfer<S>, NoInfer<G>>,
   hi: SameMediumAs<NoInfer<S>, NoInfer<G>>,
 ): Dimensionless {
-  return measure(sys, grid, flux, continuum, lo, hi, lineDepthSI) as Dimensionless;
+  const w = windowOf(sys, grid, flux, continuum, lo, hi);
+  return lineDepthUnchecked(flux, continuum, w.i0, w.i1) as Dimensionless;
 }

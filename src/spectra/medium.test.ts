@@ -120,3 +120,16 @@ describe("bad input: RangeError naming the parameter, value and the caller's uni
     expect(() => airWavelength(CGS, assume<Length<"CGS">>(Infinity))).toThrow(/length must be a finite number > 0 cm/);
   });
 });
+
+describe("array rows carry the scalar form's message, in the caller's unit", () => {
+  it("outside the formula's range, or not positive", () => {
+    const r = vacuumToAirArray(CGS, vacuumWavelengths(CGS, assumeArray<LengthArray<"CGS">>(Float64Array.of(6.5646e-5, 1e-5, -1))));
+    expect(r.invalid).toEqual([1, 2]);
+    expect(r.reasons[0]).toMatch(/^wavelength must be in \[0\.0000200064\d*, 0\.0020005\d*\] cm \(standard-air formula range, 200 nm to 20 µm in air\); got 0\.00001$/);
+    expect(r.reasons[1]).toBe("wavelength must be a finite number > 0 cm; got -1");
+    expect(() => vacuumToAir(CGS, vacuumWavelength(CGS, assume<Length<"CGS">>(1e-5)))).toThrow(new RangeError(r.reasons[0]));
+    const a = airToVacuumArray(SI, airWavelengths(SI, assumeArray<LengthArray<"SI">>(Float64Array.of(30e-6, 500e-9))));
+    expect(a.invalid).toEqual([0]);
+    expect(a.reasons).toEqual(["wavelength must be in [2e-7, 0.00002] m (standard-air formula range); got 0.00003"]);
+  });
+});

@@ -85,25 +85,57 @@ import type {
   VacuumWavelength,
   VacuumWavelengthArray,
 } from "../quantity/medium";
-import { arrayFromSIInPlace, arrayToSI, fromSI, positive, toSI } from "../internal/typed";
+import type { BatchResult } from "../law/batch";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
-import type { Dimensionless, Length, LengthArray } from "../quantity/aliases";
+import type { Dimensionless } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import type { BatchResult } from "../law/batch";
-import { inRangeSI } from "./checks";
 import {
   AIR_WAVELENGTH_MAX_M,
   AIR_WAVELENGTH_MIN_M,
   VACUUM_WAVELENGTH_MAX_M,
   VACUUM_WAVELENGTH_MIN_M,
-  airRefractiveIndexSI,
-  airToVacuumWavelengthSI,
-  airToVacuumWavelengthsSI,
-  vacuumToAirWavelengthSI,
-  vacuumToAirWavelengthsSI,
+  airRefractiveIndexUnchecked,
+  airToVacuumWavelengthUnchecked,
+  vacuumToAirWavelengthUnchecked,
 } from "./kernels/air-vacuum";
 
+/** A wavelength to brand: finite and > 0, in the caller's unit. */
+const anyLength = lawInput("length", kinds.length);
+/** A vacuum wavelength inside the standard-air formula's range (SI bounds; messages print them in the caller's unit). */
+const vacuumInRange = lawInput("wavelength", kinds.length, {
+  vacuum: true,
+  min: VACUUM_WAVELENGTH_MIN_M,
+  max: VACUUM_WAVELENGTH_MAX_M,
+  rangeNote: "standard-air formula range, 200 nm to 20 µm in air",
+});
+/** An air wavelength inside the formula's range, 200 nm to 20 µm. */
+const airInRange = lawInput("wavelength", kinds.length, {
+  min: AIR_WAVELENGTH_MIN_M,
+  max: AIR_WAVELENGTH_MAX_M,
+  rangeNote: "standard-air formula range",
+});
+
+const refractiveIndex = defineLaw({
+  name: "refractive index",
+  inputs: [vacuumInRange],
+  result: kinds.dimensionless,
+  kernel: airRefractiveIndexUnchecked,
+});
+const toAir = defineLaw({
+  name: "air wavelength",
+  inputs: [vacuumInRange],
+  result: kinds.length,
+  kernel: vacuumToAirWavelengthUnchecked,
+});
+const toVacuum = defineLaw({
+  name: "vacuum wavelength",
+  inputs: [airInRange],
+  result: kinds.length,
+  kernel: airToVacuumWavelengthUnchecked,
+});
 
 /**
  * Brand a length as a vacuum wavelength. Throws unless it is finite and > 0.
@@ -122,7 +154,7 @@ export function vacuumWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
   length: NotAirWavelength<NoInfer<S>>,
 ): VacuumWavelength<S> {
-  positive(sys, "length", length, L);
+  anyLength.toSI(sys, length); // the check only: the value is kept as given
   return length as number as VacuumWavelength<S>;
 }
 
@@ -143,7 +175,7 @@ export function airWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
   length: NotVacuumWavelength<NoInfer<S>>,
 ): AirWavelength<S> {
-  positive(sys, "length", length, L);
+  anyLength.toSI(sys, length); // the check only: the value is kept as given
   return length as number as AirWavelength<S>;
 }
 
@@ -182,10 +214,6 @@ export function airWavelengths<S extends SystemName>(
   return lengths as Float64Array as AirWavelengthArray<S>;
 }
 
-const L = kinds.length.dimension;
-const VAC_NOTE = "standard-air formula range, 200 nm to 20 µm in air";
-const AIR_NOTE = "standard-air formula range";
-
 /**
  * Refractive index of standard air (Edlén 1966, module header) at a vacuum
  * wavelength: n = 1 + 10⁻⁸[8342.13 + 2 406 030/(130 − σ²) + 15 997/(38.9 − σ²)],
@@ -204,9 +232,7 @@ export function airRefractiveIndex<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: NotAirWavelength<NoInfer<S>>,
 ): Dimensionless {
-  const si = toSI(sys, wavelength, L);
-  inRangeSI(sys, "wavelength", wavelength, si, VACUUM_WAVELENGTH_MIN_M, VACUUM_WAVELENGTH_MAX_M, L, VAC_NOTE);
-  return airRefractiveIndexSI(si) as Dimensionless;
+  return refractiveIndex(sys, wavelength);
 }
 
 /**
@@ -229,9 +255,7 @@ export function vacuumToAir<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: VacuumWavelength<NoInfer<S>>,
 ): AirWavelength<S> {
-  const si = toSI(sys, wavelength, L);
-  inRangeSI(sys, "wavelength", wavelength, si, VACUUM_WAVELENGTH_MIN_M, VACUUM_WAVELENGTH_MAX_M, L, VAC_NOTE);
-  return fromSI(sys, vacuumToAirWavelengthSI(si), L) as AirWavelength<S>;
+  return toAir(sys, wavelength) as AirWavelength<S>;
 }
 
 /**
@@ -253,33 +277,32 @@ export function airToVacuum<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: AirWavelength<NoInfer<S>>,
 ): VacuumWavelength<S> {
-  const si = toSI(sys, wavelength, L);
-  inRangeSI(sys, "wavelength", wavelength, si, AIR_WAVELENGTH_MIN_M, AIR_WAVELENGTH_MAX_M, L, AIR_NOTE);
-  return fromSI(sys, airToVacuumWavelengthSI(si), L) as VacuumWavelength<S>;
+  return toVacuum(sys, wavelength) as VacuumWavelength<S>;
 }
 
 /**
  * {@link vacuumToAir} over an array (a new array). Never throws part-way:
- * rows outside the range, or not finite, become NaN and are listed in
- * `invalid`.
+ * rows outside the range, or not finite, become NaN, are listed in
+ * `invalid`, and `reasons` holds the message {@link vacuumToAir} would throw
+ * for each.
  *
  * @example
  * ```ts
  * import { SI, units, vacuumToAirArray, vacuumWavelengths } from "starlume";
- * const { values, invalid } = vacuumToAirArray(SI, vacuumWavelengths(SI, SI.arrayOf([486.27, 656.47, 50], units.nm))); // invalid = [2]
+ * const { values, invalid, reasons } = vacuumToAirArray(SI, vacuumWavelengths(SI, SI.arrayOf([486.27, 656.47, 50], units.nm)));
+ * // invalid = [2]; reasons[0] = "wavelength must be in [2.00064…e-7, 0.0000200…] m (standard-air formula range, …); got 5e-8"
  * ```
  */
 export function vacuumToAirArray<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelengths: VacuumWavelengthArray<NoInfer<S>>,
 ): BatchResult<AirWavelengthArray<S>> {
-  const out = new Float64Array(wavelengths.length);
-  const r = vacuumToAirWavelengthsSI(arrayToSI(sys, wavelengths, L), out);
-  return { values: arrayFromSIInPlace(sys, out, L) as AirWavelengthArray<S>, invalid: r.invalid, reasons: r.invalid.map(() => "invalid input (TODO: reason)") };
+  return toAir.batch(sys, wavelengths) as BatchResult<AirWavelengthArray<S>>;
 }
 
 /**
- * {@link airToVacuum} over an array (a new array; bad rows NaN and listed in `invalid`).
+ * {@link airToVacuum} over an array (a new array; bad rows NaN, listed in
+ * `invalid` with their reasons in `reasons`).
  *
  * @example
  * ```ts
@@ -291,7 +314,5 @@ export function airToVacuumArray<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelengths: AirWavelengthArray<NoInfer<S>>,
 ): BatchResult<VacuumWavelengthArray<S>> {
-  const out = new Float64Array(wavelengths.length);
-  const r = airToVacuumWavelengthsSI(arrayToSI(sys, wavelengths, L), out);
-  return { values: arrayFromSIInPlace(sys, out, L) as VacuumWavelengthArray<S>, invalid: r.invalid, reasons: r.invalid.map(() => "invalid input (TODO: reason)") };
+  return toVacuum.batch(sys, wavelengths) as BatchResult<VacuumWavelengthArray<S>>;
 }

@@ -144,3 +144,14 @@ describe("bad input: RangeError naming the parameter and the caller's unit", () 
     expect(() => vacuumWavelengthFromWavenumber(CGS, kCGS(Infinity))).toThrow(/^wavenumber must be a finite number > 0 cm\^-1/);
   });
 });
+
+describe("CGS: values beyond the double range are refused in the caller's unit", () => {
+  it("a result finite in SI but not after the ×10² into cm", () => {
+    // λ = c/ν = 9.99e306 m for ν = 3e-299 Hz: 9.99e308 cm overflows
+    expect(Number.isFinite(vacuumWavelengthFromFrequency(SI, nu(3e-299)))).toBe(true);
+    expect(() => vacuumWavelengthFromFrequency(CGS, nu(3e-299))).toThrow(/^vacuum wavelength overflows the double range in cm for frequency=3e-299 s\^-1$/);
+  });
+  it("an input valid in cm⁻¹ that leaves the double range in m⁻¹", () => {
+    expect(() => photonEnergyFromWavenumber(CGS, kCGS(1e307))).toThrow(/^wavenumber = 1e\+307 cm\^-1 is outside the double range once converted to SI \(Infinity m\^-1\)$/);
+  });
+});

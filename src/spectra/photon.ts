@@ -13,35 +13,111 @@
  * vacuum): inputs are {@link NotAirWavelength} — a {@link VacuumWavelength}
  * or an unbranded `Length<S>`, never an {@link AirWavelength} — and outputs
  * are {@link VacuumWavelength}. Every input must be finite and > 0
- * (RangeError naming the parameter and the caller's unit).
+ * (RangeError naming the parameter and the caller's unit); a result beyond
+ * the double range in the caller's system (possibly only after the ×10ᵏ into
+ * CGS) throws a RangeError naming the argument instead of returning Infinity.
  *
  * @module
  */
-import { fromSI, positive, toSI } from "../internal/typed";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type { Energy, Frequency, Wavenumber } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
 import {
-  frequencyFromPhotonEnergySI,
-  frequencyFromWavelengthSI,
-  frequencyFromWavenumberSI,
-  photonEnergyFromFrequencySI,
-  photonEnergyFromWavelengthSI,
-  photonEnergyFromWavenumberSI,
-  wavelengthFromFrequencySI,
-  wavelengthFromPhotonEnergySI,
-  wavelengthFromWavenumberSI,
-  wavenumberFromFrequencySI,
-  wavenumberFromPhotonEnergySI,
-  wavenumberFromWavelengthSI,
+  frequencyFromPhotonEnergyUnchecked,
+  frequencyFromWavelengthUnchecked,
+  frequencyFromWavenumberUnchecked,
+  photonEnergyFromFrequencyUnchecked,
+  photonEnergyFromWavelengthUnchecked,
+  photonEnergyFromWavenumberUnchecked,
+  wavelengthFromFrequencyUnchecked,
+  wavelengthFromPhotonEnergyUnchecked,
+  wavelengthFromWavenumberUnchecked,
+  wavenumberFromFrequencyUnchecked,
+  wavenumberFromPhotonEnergyUnchecked,
+  wavenumberFromWavelengthUnchecked,
 } from "./kernels/photon";
 import type { NotAirWavelength, VacuumWavelength } from "./medium";
 
-const L = kinds.length.dimension;
-const E = kinds.energy.dimension;
-const K = kinds.wavenumber.dimension;
-const F = kinds.frequency.dimension;
+const wavelength = lawInput("wavelength", kinds.length, { vacuum: true });
+const energy = lawInput("energy", kinds.energy);
+const frequency = lawInput("frequency", kinds.frequency);
+const wavenumber = lawInput("wavenumber", kinds.wavenumber);
+
+const energyOfWavelength = defineLaw({
+  name: "photon energy",
+  inputs: [wavelength],
+  result: kinds.energy,
+  kernel: photonEnergyFromWavelengthUnchecked,
+});
+const wavelengthOfEnergy = defineLaw({
+  name: "vacuum wavelength",
+  inputs: [energy],
+  result: kinds.length,
+  kernel: wavelengthFromPhotonEnergyUnchecked,
+});
+const energyOfFrequency = defineLaw({
+  name: "photon energy",
+  inputs: [frequency],
+  result: kinds.energy,
+  kernel: photonEnergyFromFrequencyUnchecked,
+});
+const frequencyOfEnergy = defineLaw({
+  name: "frequency",
+  inputs: [energy],
+  result: kinds.frequency,
+  kernel: frequencyFromPhotonEnergyUnchecked,
+});
+const energyOfWavenumber = defineLaw({
+  name: "photon energy",
+  inputs: [wavenumber],
+  result: kinds.energy,
+  kernel: photonEnergyFromWavenumberUnchecked,
+});
+const wavenumberOfEnergy = defineLaw({
+  name: "vacuum wavenumber",
+  inputs: [energy],
+  result: kinds.wavenumber,
+  kernel: wavenumberFromPhotonEnergyUnchecked,
+});
+const frequencyOfWavelength = defineLaw({
+  name: "frequency",
+  inputs: [wavelength],
+  result: kinds.frequency,
+  kernel: frequencyFromWavelengthUnchecked,
+});
+const wavelengthOfFrequency = defineLaw({
+  name: "vacuum wavelength",
+  inputs: [frequency],
+  result: kinds.length,
+  kernel: wavelengthFromFrequencyUnchecked,
+});
+const wavenumberOfWavelength = defineLaw({
+  name: "vacuum wavenumber",
+  inputs: [wavelength],
+  result: kinds.wavenumber,
+  kernel: wavenumberFromWavelengthUnchecked,
+});
+const wavelengthOfWavenumber = defineLaw({
+  name: "vacuum wavelength",
+  inputs: [wavenumber],
+  result: kinds.length,
+  kernel: wavelengthFromWavenumberUnchecked,
+});
+const frequencyOfWavenumber = defineLaw({
+  name: "frequency",
+  inputs: [wavenumber],
+  result: kinds.frequency,
+  kernel: frequencyFromWavenumberUnchecked,
+});
+const wavenumberOfFrequency = defineLaw({
+  name: "vacuum wavenumber",
+  inputs: [frequency],
+  result: kinds.wavenumber,
+  kernel: wavenumberFromFrequencyUnchecked,
+});
 
 /**
  * Photon energy from vacuum wavelength, E = hc/λ.
@@ -59,8 +135,7 @@ export function photonEnergyFromWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: NotAirWavelength<NoInfer<S>>,
 ): Energy<S> {
-  positive(sys, "wavelength", wavelength, L);
-  return fromSI(sys, photonEnergyFromWavelengthSI(toSI(sys, wavelength, L)), E) as Energy<S>;
+  return energyOfWavelength(sys, wavelength);
 }
 
 /**
@@ -80,8 +155,7 @@ export function photonWavelengthFromEnergy<S extends SystemName>(
   sys: UnitSystem<S>,
   energy: Energy<NoInfer<S>>,
 ): VacuumWavelength<S> {
-  positive(sys, "energy", energy, E);
-  return fromSI(sys, wavelengthFromPhotonEnergySI(toSI(sys, energy, E)), L) as VacuumWavelength<S>;
+  return wavelengthOfEnergy(sys, energy) as VacuumWavelength<S>;
 }
 
 /**
@@ -97,8 +171,7 @@ export function photonWavelengthFromEnergy<S extends SystemName>(
  * ```
  */
 export function photonEnergyFromFrequency<S extends SystemName>(sys: UnitSystem<S>, frequency: Frequency): Energy<S> {
-  positive(sys, "frequency", frequency, F);
-  return fromSI(sys, photonEnergyFromFrequencySI(frequency), E) as Energy<S>;
+  return energyOfFrequency(sys, frequency);
 }
 
 /**
@@ -111,8 +184,7 @@ export function photonEnergyFromFrequency<S extends SystemName>(sys: UnitSystem<
  * ```
  */
 export function photonFrequencyFromEnergy<S extends SystemName>(sys: UnitSystem<S>, energy: Energy<NoInfer<S>>): Frequency {
-  positive(sys, "energy", energy, E);
-  return frequencyFromPhotonEnergySI(toSI(sys, energy, E)) as Frequency;
+  return frequencyOfEnergy(sys, energy);
 }
 
 /**
@@ -128,8 +200,7 @@ export function photonEnergyFromWavenumber<S extends SystemName>(
   sys: UnitSystem<S>,
   wavenumber: Wavenumber<NoInfer<S>>,
 ): Energy<S> {
-  positive(sys, "wavenumber", wavenumber, K);
-  return fromSI(sys, photonEnergyFromWavenumberSI(toSI(sys, wavenumber, K)), E) as Energy<S>;
+  return energyOfWavenumber(sys, wavenumber);
 }
 
 /**
@@ -145,8 +216,7 @@ export function photonWavenumberFromEnergy<S extends SystemName>(
   sys: UnitSystem<S>,
   energy: Energy<NoInfer<S>>,
 ): Wavenumber<S> {
-  positive(sys, "energy", energy, E);
-  return fromSI(sys, wavenumberFromPhotonEnergySI(toSI(sys, energy, E)), K) as Wavenumber<S>;
+  return wavenumberOfEnergy(sys, energy);
 }
 
 /**
@@ -162,8 +232,7 @@ export function frequencyFromVacuumWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: NotAirWavelength<NoInfer<S>>,
 ): Frequency {
-  positive(sys, "wavelength", wavelength, L);
-  return frequencyFromWavelengthSI(toSI(sys, wavelength, L)) as Frequency;
+  return frequencyOfWavelength(sys, wavelength);
 }
 
 /**
@@ -179,8 +248,7 @@ export function vacuumWavelengthFromFrequency<S extends SystemName>(
   sys: UnitSystem<S>,
   frequency: Frequency,
 ): VacuumWavelength<S> {
-  positive(sys, "frequency", frequency, F);
-  return fromSI(sys, wavelengthFromFrequencySI(frequency), L) as VacuumWavelength<S>;
+  return wavelengthOfFrequency(sys, frequency) as VacuumWavelength<S>;
 }
 
 /**
@@ -196,8 +264,7 @@ export function wavenumberFromVacuumWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: NotAirWavelength<NoInfer<S>>,
 ): Wavenumber<S> {
-  positive(sys, "wavelength", wavelength, L);
-  return fromSI(sys, wavenumberFromWavelengthSI(toSI(sys, wavelength, L)), K) as Wavenumber<S>;
+  return wavenumberOfWavelength(sys, wavelength);
 }
 
 /**
@@ -213,8 +280,7 @@ export function vacuumWavelengthFromWavenumber<S extends SystemName>(
   sys: UnitSystem<S>,
   wavenumber: Wavenumber<NoInfer<S>>,
 ): VacuumWavelength<S> {
-  positive(sys, "wavenumber", wavenumber, K);
-  return fromSI(sys, wavelengthFromWavenumberSI(toSI(sys, wavenumber, K)), L) as VacuumWavelength<S>;
+  return wavelengthOfWavenumber(sys, wavenumber) as VacuumWavelength<S>;
 }
 
 /**
@@ -230,8 +296,7 @@ export function frequencyFromWavenumber<S extends SystemName>(
   sys: UnitSystem<S>,
   wavenumber: Wavenumber<NoInfer<S>>,
 ): Frequency {
-  positive(sys, "wavenumber", wavenumber, K);
-  return frequencyFromWavenumberSI(toSI(sys, wavenumber, K)) as Frequency;
+  return frequencyOfWavenumber(sys, wavenumber);
 }
 
 /**
@@ -244,6 +309,5 @@ export function frequencyFromWavenumber<S extends SystemName>(
  * ```
  */
 export function wavenumberFromFrequency<S extends SystemName>(sys: UnitSystem<S>, frequency: Frequency): Wavenumber<S> {
-  positive(sys, "frequency", frequency, F);
-  return fromSI(sys, wavenumberFromFrequencySI(frequency), K) as Wavenumber<S>;
+  return wavenumberOfFrequency(sys, frequency);
 }

@@ -177,3 +177,18 @@ describe("bad input: RangeError naming the parameter and the caller's unit", () 
     expect(() => atomicMass(SI, 0)).toThrow(/relativeAtomicMass/);
   });
 });
+
+describe("batch reasons and results beyond the double range", () => {
+  it("non-finite offsets are reported with the scalar message; widths both 0 throw before any row", () => {
+    const offsets = assumeArray<LengthArray<"CGS">>(Float64Array.of(0, Number.NaN, Infinity));
+    const r = voigtProfileArray(CGS, offsets, lenCGS(3e-9), lenCGS(0));
+    expect(r.invalid).toEqual([1, 2]);
+    expect(r.reasons).toEqual(["offset must be a finite number cm; got NaN", "offset must be a finite number cm; got Infinity"]);
+    expect(() => voigtProfile(CGS, lenCGS(Number.NaN), lenCGS(3e-9), lenCGS(0))).toThrow(new RangeError(r.reasons[0]));
+    expect(() => voigtProfileArray(CGS, offsets, lenCGS(0), lenCGS(0))).toThrow(/^lorentzHwhm must be a finite number > 0 cm; got 0$/);
+  });
+  it("a profile too tall for a double throws naming the arguments instead of returning Infinity", () => {
+    // φ_G(0) = 1/(b√π) = 5.6e309 m⁻¹ for b = 1e-310 m
+    expect(() => gaussianProfile(SI, lenSI(0), lenSI(1e-310))).toThrow(/^φ_G overflows the double range in m\^-1 for offset=0 m, dopplerWidth=1e-310 m$/);
+  });
+});

@@ -33,31 +33,100 @@
  *
  * @module
  */
-import { arrayFromSIInPlace, arrayToSI, finite, fromSI, nonNegative, positive, toSI } from "../internal/typed";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
+import type { BatchResult } from "../law/batch";
 import { kinds } from "../quantity/aliases";
 import type { Frequency, Length, LengthArray, Mass, Temperature, Velocity, Wavenumber, WavenumberArray } from "../quantity/aliases";
 import type { AnyQuantity, SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import type { BatchResult } from "../law/batch";
-import { gaussianProfileSI, lorentzianProfileSI, voigtProfileSI, voigtProfilesSI } from "./kernels/profiles";
+import { gaussianProfileUnchecked, lorentzianProfileUnchecked, voigtProfileUnchecked } from "./kernels/profiles";
 import {
-  atomicMassKg,
-  dopplerVelocityWidthSI,
-  dopplerWidthFrequencySI,
-  dopplerWidthWavelengthSI,
+  atomicMassUnchecked,
+  dopplerVelocityWidthUnchecked,
   dopplerWidthFromSigma as dopplerWidthFromSigmaKernel,
+  dopplerWidthUnchecked,
   gaussianFwhmFromDopplerWidth,
-  lorentzHwhmFrequencySI,
-  lorentzHwhmWavelengthSI,
+  lorentzHwhmFrequencyUnchecked,
+  lorentzHwhmWavelengthUnchecked,
   voigtFwhmApprox,
 } from "./kernels/widths";
 
-const L = kinds.length.dimension;
-const K = kinds.wavenumber.dimension;
-const V = kinds.velocity.dimension;
-const M = kinds.mass.dimension;
-const T = kinds.temperature.dimension;
-const F = kinds.frequency.dimension;
+const offset = lawInput("offset", kinds.length, { check: "finite" });
+const gaussianWidth = lawInput("dopplerWidth", kinds.length);
+const lorentzianWidth = lawInput("lorentzHwhm", kinds.length);
+const voigtGaussianWidth = lawInput("dopplerWidth", kinds.length, { check: "nonNegative" });
+const voigtLorentzianWidth = lawInput("lorentzHwhm", kinds.length, { check: "nonNegative" });
+
+const gaussian = defineLaw({ name: "φ_G", inputs: [offset, gaussianWidth], result: kinds.wavenumber, kernel: gaussianProfileUnchecked });
+const lorentzian = defineLaw({ name: "φ_L", inputs: [offset, lorentzianWidth], result: kinds.wavenumber, kernel: lorentzianProfileUnchecked });
+const voigt = defineLaw({
+  name: "φ_V",
+  inputs: [offset, voigtGaussianWidth, voigtLorentzianWidth],
+  result: kinds.wavenumber,
+  kernel: voigtProfileUnchecked,
+});
+
+/**
+ * The one joint condition of the Voigt widths, checked before the law (whose
+ * inputs are checked one at a time): b and γ not both 0.
+ */
+function requireSomeWidth(sys: UnitSystem<SystemName>, dopplerWidth: number, lorentzHwhm: number): void {
+  if (dopplerWidth === 0 && lorentzHwhm === 0) throw new RangeError(lorentzianWidth.reason(sys, lorentzHwhm));
+}
+
+const relativeAtomicMass = lawInput("relativeAtomicMass", kinds.dimensionless);
+const temperature = lawInput("temperature", kinds.temperature);
+const mass = lawInput("mass", kinds.mass);
+const microturbulence = lawInput("microturbulence", kinds.velocity, { check: "nonNegative" });
+const centerWavelength = lawInput("centerWavelength", kinds.length);
+const centerFrequency = lawInput("centerFrequency", kinds.frequency);
+const dampingRate = lawInput("dampingRate", kinds.frequency, { check: "nonNegative" });
+
+const atomMass = defineLaw({ name: "atomic mass", inputs: [relativeAtomicMass], result: kinds.mass, kernel: atomicMassUnchecked });
+const velocityWidth = defineLaw({
+  name: "Doppler velocity width",
+  inputs: [temperature, mass, microturbulence],
+  result: kinds.velocity,
+  kernel: dopplerVelocityWidthUnchecked,
+});
+const thermalVelocityWidth = defineLaw({
+  name: "Doppler velocity width",
+  inputs: [temperature, mass],
+  result: kinds.velocity,
+  kernel: (t, m) => dopplerVelocityWidthUnchecked(t, m, 0),
+});
+const wavelengthWidth = defineLaw({
+  name: "Doppler width",
+  inputs: [centerWavelength, temperature, mass, microturbulence],
+  result: kinds.length,
+  kernel: (l, t, m, xi) => dopplerWidthUnchecked(l, dopplerVelocityWidthUnchecked(t, m, xi)),
+});
+const thermalWavelengthWidth = defineLaw({
+  name: "Doppler width",
+  inputs: [centerWavelength, temperature, mass],
+  result: kinds.length,
+  kernel: (l, t, m) => dopplerWidthUnchecked(l, dopplerVelocityWidthUnchecked(t, m, 0)),
+});
+const frequencyWidth = defineLaw({
+  name: "Doppler width",
+  inputs: [centerFrequency, temperature, mass, microturbulence],
+  result: kinds.frequency,
+  kernel: (f, t, m, xi) => dopplerWidthUnchecked(f, dopplerVelocityWidthUnchecked(t, m, xi)),
+});
+const thermalFrequencyWidth = defineLaw({
+  name: "Doppler width",
+  inputs: [centerFrequency, temperature, mass],
+  result: kinds.frequency,
+  kernel: (f, t, m) => dopplerWidthUnchecked(f, dopplerVelocityWidthUnchecked(t, m, 0)),
+});
+const lorentzWavelength = defineLaw({
+  name: "Lorentz HWHM",
+  inputs: [centerWavelength, dampingRate],
+  result: kinds.length,
+  kernel: lorentzHwhmWavelengthUnchecked,
+});
+const lorentzFrequency = defineLaw({ name: "Lorentz HWHM", inputs: [dampingRate], result: kinds.frequency, kernel: lorentzHwhmFrequencyUnchecked });
 
 /**
  * Gaussian profile per unit wavelength, φ_G(Δ) = exp(−(Δ/b)²)/(b√π).
@@ -77,9 +146,7 @@ export function gaussianProfile<S extends SystemName>(
   offset: Length<NoInfer<S>>,
   dopplerWidth: Length<NoInfer<S>>,
 ): Wavenumber<S> {
-  finite(sys, "offset", offset, L);
-  positive(sys, "dopplerWidth", dopplerWidth, L);
-  return fromSI(sys, gaussianProfileSI(toSI(sys, offset, L), toSI(sys, dopplerWidth, L)), K) as Wavenumber<S>;
+  return gaussian(sys, offset, dopplerWidth);
 }
 
 /**
@@ -99,9 +166,7 @@ export function lorentzianProfile<S extends SystemName>(
   offset: Length<NoInfer<S>>,
   lorentzHwhm: Length<NoInfer<S>>,
 ): Wavenumber<S> {
-  finite(sys, "offset", offset, L);
-  positive(sys, "lorentzHwhm", lorentzHwhm, L);
-  return fromSI(sys, lorentzianProfileSI(toSI(sys, offset, L), toSI(sys, lorentzHwhm, L)), K) as Wavenumber<S>;
+  return lorentzian(sys, offset, lorentzHwhm);
 }
 
 /**
@@ -124,17 +189,14 @@ export function voigtProfile<S extends SystemName>(
   dopplerWidth: Length<NoInfer<S>>,
   lorentzHwhm: Length<NoInfer<S>>,
 ): Wavenumber<S> {
-  finite(sys, "offset", offset, L);
-  nonNegative(sys, "dopplerWidth", dopplerWidth, L);
-  nonNegative(sys, "lorentzHwhm", lorentzHwhm, L);
-  if (dopplerWidth === 0) positive(sys, "lorentzHwhm", lorentzHwhm, L);
-  const v = voigtProfileSI(toSI(sys, offset, L), toSI(sys, dopplerWidth, L), toSI(sys, lorentzHwhm, L));
-  return fromSI(sys, v, K) as Wavenumber<S>;
+  requireSomeWidth(sys, dopplerWidth, lorentzHwhm);
+  return voigt(sys, offset, dopplerWidth, lorentzHwhm);
 }
 
 /**
  * {@link voigtProfile} over many offsets (a new array). Widths are checked
- * once (RangeError); a non-finite offset gives NaN and is listed in `invalid`.
+ * once (RangeError, before any row is written); a non-finite offset gives
+ * NaN, is listed in `invalid` and has its reason in `reasons`.
  *
  * @example
  * ```ts
@@ -149,12 +211,8 @@ export function voigtProfileArray<S extends SystemName>(
   dopplerWidth: Length<NoInfer<S>>,
   lorentzHwhm: Length<NoInfer<S>>,
 ): BatchResult<WavenumberArray<S>> {
-  nonNegative(sys, "dopplerWidth", dopplerWidth, L);
-  nonNegative(sys, "lorentzHwhm", lorentzHwhm, L);
-  if (dopplerWidth === 0) positive(sys, "lorentzHwhm", lorentzHwhm, L);
-  const out = new Float64Array(offsets.length);
-  const r = voigtProfilesSI(arrayToSI(sys, offsets, L), toSI(sys, dopplerWidth, L), toSI(sys, lorentzHwhm, L), out);
-  return { values: arrayFromSIInPlace(sys, out, K) as WavenumberArray<S>, invalid: r.invalid, reasons: r.invalid.map(() => "invalid input (TODO: reason)") };
+  requireSomeWidth(sys, dopplerWidth, lorentzHwhm);
+  return voigt.batch(sys, offsets, dopplerWidth, lorentzHwhm);
 }
 
 /**
@@ -170,20 +228,7 @@ export function voigtProfileArray<S extends SystemName>(
  * ```
  */
 export function atomicMass<S extends SystemName>(sys: UnitSystem<S>, relativeAtomicMass: number): Mass<S> {
-  return fromSI(sys, atomicMassKg(relativeAtomicMass), M) as Mass<S>;
-}
-
-function velocityWidthSI(
-  sys: UnitSystem<SystemName>,
-  temperature: number,
-  mass: number,
-  microturbulence: number | undefined,
-): number {
-  positive(sys, "temperature", temperature, T);
-  positive(sys, "mass", mass, M);
-  const xi = microturbulence ?? 0;
-  nonNegative(sys, "microturbulence", xi, V);
-  return dopplerVelocityWidthSI(temperature, toSI(sys, mass, M), toSI(sys, xi, V));
+  return atomMass(sys, relativeAtomicMass);
 }
 
 /**
@@ -206,7 +251,9 @@ export function dopplerVelocityWidth<S extends SystemName>(
   mass: Mass<NoInfer<S>>,
   microturbulence?: Velocity<NoInfer<S>>,
 ): Velocity<S> {
-  return fromSI(sys, velocityWidthSI(sys, temperature, mass, microturbulence), V) as Velocity<S>;
+  return microturbulence === undefined
+    ? thermalVelocityWidth(sys, temperature, mass)
+    : velocityWidth(sys, temperature, mass, microturbulence);
 }
 
 /**
@@ -231,10 +278,9 @@ export function dopplerWidth<S extends SystemName>(
   mass: Mass<NoInfer<S>>,
   microturbulence?: Velocity<NoInfer<S>>,
 ): Length<S> {
-  positive(sys, "centerWavelength", centerWavelength, L);
-  velocityWidthSI(sys, temperature, mass, microturbulence);
-  const lam = toSI(sys, centerWavelength, L);
-  return fromSI(sys, dopplerWidthWavelengthSI(lam, temperature, toSI(sys, mass, M), toSI(sys, microturbulence ?? 0, V)), L) as Length<S>;
+  return microturbulence === undefined
+    ? thermalWavelengthWidth(sys, centerWavelength, temperature, mass)
+    : wavelengthWidth(sys, centerWavelength, temperature, mass, microturbulence);
 }
 
 /**
@@ -255,9 +301,9 @@ export function dopplerWidthFrequency<S extends SystemName>(
   mass: Mass<NoInfer<S>>,
   microturbulence?: Velocity<NoInfer<S>>,
 ): Frequency {
-  positive(sys, "centerFrequency", centerFrequency, F);
-  velocityWidthSI(sys, temperature, mass, microturbulence);
-  return dopplerWidthFrequencySI(centerFrequency, temperature, toSI(sys, mass, M), toSI(sys, microturbulence ?? 0, V)) as Frequency;
+  return microturbulence === undefined
+    ? thermalFrequencyWidth(sys, centerFrequency, temperature, mass)
+    : frequencyWidth(sys, centerFrequency, temperature, mass, microturbulence);
 }
 
 /**
@@ -278,9 +324,7 @@ export function lorentzHwhm<S extends SystemName>(
   centerWavelength: Length<NoInfer<S>>,
   dampingRate: Frequency,
 ): Length<S> {
-  positive(sys, "centerWavelength", centerWavelength, L);
-  nonNegative(sys, "dampingRate", dampingRate, F);
-  return fromSI(sys, lorentzHwhmWavelengthSI(toSI(sys, centerWavelength, L), dampingRate), L) as Length<S>;
+  return lorentzWavelength(sys, centerWavelength, dampingRate);
 }
 
 /**
@@ -294,8 +338,7 @@ export function lorentzHwhm<S extends SystemName>(
  * ```
  */
 export function lorentzHwhmFrequency<S extends SystemName>(sys: UnitSystem<S>, dampingRate: Frequency): Frequency {
-  nonNegative(sys, "dampingRate", dampingRate, F);
-  return lorentzHwhmFrequencySI(dampingRate) as Frequency;
+  return lorentzFrequency(sys, dampingRate);
 }
 
 /**

@@ -230,3 +230,35 @@ describe("bad input: RangeError naming the parameter and the caller's unit", () 
     expect(() => lineCentroid(CGS, g, c, c, lenCGS(0), lenCGS(1))).toThrow(/centroid is undefined/);
   });
 });
+
+describe("batch reasons and messages in the caller's unit", () => {
+  it("a row whose continuum is not finite is reported with a reason; values is the flux", () => {
+    const g = assumeArray<LengthArray<"CGS">>(gridOf(1e-4, 1e-10, 5));
+    const c = assumeArray<DimensionlessArray>(Float64Array.of(1, 1, Number.NaN, 1, Infinity));
+    const r = synthesizeSpectrum(CGS, g, c, []);
+    expect(r.invalid).toEqual([2, 4]);
+    expect(r.reasons).toEqual(["continuum must be finite on the grid; element 2 is NaN", "continuum must be finite on the grid; element 4 is Infinity"]);
+    expect(r.values).toBe(r.flux);
+  });
+  it("on a Planck continuum the reasons are the Planck batch's", () => {
+    const g = assumeArray<LengthArray<"CGS">>(Float64Array.of(-1e-7, 0, 1e-5, 2e-5));
+    const r = synthesizePlanckSpectrum(CGS, g, assume<Temperature>(5000), []);
+    const planck = planckRadianceWavelengthBatch(CGS, g, assume<Temperature>(5000));
+    expect(r.invalid).toEqual([0, 1]);
+    expect(r.reasons).toEqual(planck.reasons);
+    expect(r.reasons).toEqual(["wavelength must be a finite number > 0 cm; got -1e-7", "wavelength must be a finite number > 0 cm; got 0"]);
+  });
+  it("CGS messages for lines, options and measurements", () => {
+    const g = assumeArray<LengthArray<"CGS">>(gridOf(1e-4, 1e-10, 10));
+    const c = assumeArray<DimensionlessArray>(new Float64Array(10).fill(1));
+    const line = { center: lenCGS(1e-4), dopplerWidth: lenCGS(1e-10), tau0: -1 } as SynthesisLine<"CGS">;
+    expect(() => synthesizeSpectrum(CGS, g, c, [line])).toThrow(/^lines\[0\]\.tau0 must be a finite number >= 0; got -1$/);
+    expect(() => synthesizeSpectrum(CGS, g, c, [], { tauCutoff: 0 })).toThrow(/^options\.tauCutoff must be a finite number > 0; got 0$/);
+    expect(() => equivalentWidthFromTau0(CGS, 1, lenCGS(1), lenCGS(-2))).toThrow(/^lorentzHwhm must be a finite number >= 0 cm; got -2$/);
+    expect(() => lineCentroid(CGS, g, c, c, lenCGS(0), lenCGS(1))).toThrow(/^flux has no deficit against continuum in \[lo, hi\] = \[0, 1\] cm: the centroid is undefined$/);
+    const badFlux = assumeArray<DimensionlessArray>(new Float64Array(10).fill(1));
+    badFlux[3] = Number.NaN;
+    expect(() => equivalentWidth(CGS, g, badFlux, c, lenCGS(0), lenCGS(1))).toThrow(/^flux must be finite in the window; element 3 is NaN$/);
+    expect(() => synthesizeSpectrum(CGS, assumeArray<LengthArray<"CGS">>(Float64Array.of(1, 2, Number.NaN)), c, [])).toThrow(/^grid must be finite and strictly increasing \(cm\); element 2 is NaN$/);
+  });
+});

@@ -29,8 +29,10 @@
  *
  * @module
  */
-import { arrayToSI, fromSI, nonNegative, positive, toSI } from "../internal/typed";
-import { requireNonNegative } from "../internal/checks";
+import { show } from "../internal/checks";
+import { BatchLog, type BatchResult } from "../law/batch";
+import { defineLaw } from "../law/define";
+import { type LawInput, lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type {
   Dimensionless,
@@ -44,16 +46,13 @@ import type { Dimension } from "../quantity/dimension";
 import type { Brand, Pure, SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
 import { planckRadianceWavelengthBatch } from "../radiation/planck";
-import { increasingGrid } from "./checks";
 import {
-  equivalentWidthFromTau0SI,
-  synthesizeSpectrumSI,
-  tau0FromEquivalentWidthSI,
-  type SynthesisLineSI,
+  equivalentWidthFromTau0Unchecked,
+  synthesizeSpectrumUnchecked,
+  tau0FromEquivalentWidthUnchecked,
+  type ResolvedLinesSI,
 } from "./kernels/synthesize";
 import type { MaybeInMedium, Medium, MediumOf, NotAirWavelengthArray } from "./medium";
-
-const L = kinds.length.dimension;
 
 /**
  * Any typed array of quantities in system `S` (or system-free): what a
@@ -111,61 +110,135 @@ export interface SynthesisOptions {
   readonly tauCutoff?: number;
 }
 
-/** Result of {@link synthesizeSpectrum}. */
-export interface SynthesisResult<C> {
-  /** F = F_c e^{−τ} on the grid, the continuum's type (NaN where the continuum is not finite). */
+/**
+ * Result of {@link synthesizeSpectrum}: a {@link BatchResult} over the grid
+ * (the flux in `values`, NaN where the continuum is not finite, those rows
+ * in `invalid` with a reason each) plus the τ₀ of each line.
+ */
+export interface SynthesisResult<C> extends BatchResult<C> {
+  /** F = F_c e^{−τ} on the grid, the continuum's type: the same array as `values`. */
   readonly flux: C;
   /** Central optical depth used for each line (solved when W was given). */
   readonly tau0: DimensionlessArray;
-  /** Ascending indices of rows written as NaN (non-finite continuum); empty when none. */
-  readonly invalid: number[];
 }
 
-/** Validate lines in the caller's units and convert them to the kernel's SI form. */
-function linesToSI(sys: UnitSystem<SystemName>, lines: readonly SynthesisLine<SystemName, Medium>[]): SynthesisLineSI[] {
-  const out: SynthesisLineSI[] = [];
-  for (let i = 0; i < lines.length; i++) {
+/** A grid value: finite, any sign (the grid's order is checked by {@link gridToSI}). */
+const gridValue = lawInput("grid", kinds.length, { check: "finite" });
+
+/**
+ * Check that a wavelength grid is finite and strictly increasing, in the
+ * caller's unit (RangeError naming the first bad element), and return it in
+ * SI: the same array in SI, a converted copy in CGS. One pass.
+ *
+ * @internal
+ */
+export function gridToSI(sys: UnitSystem<SystemName>, grid: Float64Array): Float64Array {
+  const n = grid.length;
+  const si = sys.name === "SI" ? grid : new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const v = grid[i] as number;
+    const x = gridValue.rowToSI(sys, v);
+    if (x !== x || (i > 0 && !(v > (grid[i - 1] as number)))) {
+      throw new RangeError(`grid must be finite and strictly increasing (${sys.coherentUnit(kinds.length.dimension)}); element ${i} is ${show(v)}`);
+    }
+    if (si !== grid) si[i] = x;
+  }
+  return si;
+}
+
+// The fields of a line, checked one by one (a message names `lines[i].<field>`).
+const center = lawInput("center", kinds.length);
+const dopplerWidthField = lawInput("dopplerWidth", kinds.length);
+const gaussianSigmaField = lawInput("gaussianSigma", kinds.length);
+const lorentzHwhmField = lawInput("lorentzHwhm", kinds.length, { check: "nonNegative" });
+const tau0Field = lawInput("tau0", kinds.dimensionless, { check: "nonNegative" });
+const equivalentWidthField = lawInput("equivalentWidth", kinds.length, { check: "nonNegative" });
+const tauCutoffOption = lawInput("options.tauCutoff", kinds.dimensionless);
+
+// The curve of growth, with and without a Lorentz width (γ = 0: a Gaussian line).
+const widthOfTau0 = defineLaw({
+  name: "equivalent width",
+  inputs: [tau0Field, dopplerWidthField, lorentzHwhmField],
+  result: kinds.length,
+  kernel: equivalentWidthFromTau0Unchecked,
+});
+const widthOfTau0Gaussian = defineLaw({
+  name: "equivalent width",
+  inputs: [tau0Field, dopplerWidthField],
+  result: kinds.length,
+  kernel: (tau0, b) => equivalentWidthFromTau0Unchecked(tau0, b, 0),
+});
+const tau0OfWidth = defineLaw({
+  name: "tau0",
+  inputs: [equivalentWidthField, dopplerWidthField, lorentzHwhmField],
+  result: kinds.dimensionless,
+  kernel: tau0FromEquivalentWidthUnchecked,
+});
+const tau0OfWidthGaussian = defineLaw({
+  name: "tau0",
+  inputs: [equivalentWidthField, dopplerWidthField],
+  result: kinds.dimensionless,
+  kernel: (w, b) => tau0FromEquivalentWidthUnchecked(w, b, 0),
+});
+
+/** A field of line `i` checked and in SI; the RangeError names it as `lines[i].<field>`. */
+function fieldToSI(sys: UnitSystem<SystemName>, i: number, field: LawInput, value: number): number {
+  const x = field.rowToSI(sys, value);
+  if (x !== x) throw new RangeError(`lines[${i}].${field.reason(sys, value)}`);
+  return x;
+}
+
+/** Check the lines in the caller's units (before anything is written) and resolve them for the kernel: b, γ and τ₀ (W solved). */
+function resolveLines(sys: UnitSystem<SystemName>, lines: readonly SynthesisLine<SystemName, Medium>[]): ResolvedLinesSI {
+  const nl = lines.length;
+  const out: ResolvedLinesSI = {
+    centerM: new Float64Array(nl),
+    dopplerWidthM: new Float64Array(nl),
+    lorentzHwhmM: new Float64Array(nl),
+    tau0: new Float64Array(nl),
+  };
+  for (let i = 0; i < nl; i++) {
     const line = lines[i] as SynthesisLine<SystemName, Medium>;
-    const p = `lines[${i}]`;
-    positive(sys, `${p}.center`, line.center, L);
+    out.centerM[i] = fieldToSI(sys, i, center, line.center);
     const hasB = line.dopplerWidth !== undefined;
-    const hasS = line.gaussianSigma !== undefined;
-    if (hasB === hasS) throw new RangeError(`${p} must give exactly one of dopplerWidth or gaussianSigma (${sys.coherentUnit(L)})`);
-    if (hasB) positive(sys, `${p}.dopplerWidth`, line.dopplerWidth as number, L);
-    else positive(sys, `${p}.gaussianSigma`, line.gaussianSigma as number, L);
-    const gamma = line.lorentzHwhm ?? 0;
-    nonNegative(sys, `${p}.lorentzHwhm`, gamma, L);
+    if (hasB === (line.gaussianSigma !== undefined)) {
+      throw new RangeError(`lines[${i}] must give exactly one of dopplerWidth or gaussianSigma (${sys.coherentUnit(kinds.length.dimension)})`);
+    }
+    const b = hasB
+      ? fieldToSI(sys, i, dopplerWidthField, line.dopplerWidth as number)
+      : Math.SQRT2 * fieldToSI(sys, i, gaussianSigmaField, line.gaussianSigma as number);
+    const gamma = line.lorentzHwhm === undefined ? 0 : fieldToSI(sys, i, lorentzHwhmField, line.lorentzHwhm);
     const hasT = line.tau0 !== undefined;
-    const hasW = line.equivalentWidth !== undefined;
-    if (hasT === hasW) throw new RangeError(`${p} must give exactly one of tau0 or equivalentWidth`);
-    if (hasT) requireNonNegative(`${p}.tau0`, line.tau0 as number, "(dimensionless)");
-    else nonNegative(sys, `${p}.equivalentWidth`, line.equivalentWidth as number, L);
-    const centerM = toSI(sys, line.center, L);
-    const lorentzHwhmM = toSI(sys, gamma, L);
-    const width = hasB
-      ? { dopplerWidthM: toSI(sys, line.dopplerWidth as number, L) }
-      : { gaussianSigmaM: toSI(sys, line.gaussianSigma as number, L) };
-    const strength = hasT ? { tau0: line.tau0 as number } : { equivalentWidthM: toSI(sys, line.equivalentWidth as number, L) };
-    out.push({ centerM, lorentzHwhmM, ...width, ...strength });
+    if (hasT === (line.equivalentWidth !== undefined)) throw new RangeError(`lines[${i}] must give exactly one of tau0 or equivalentWidth`);
+    out.dopplerWidthM[i] = b;
+    out.lorentzHwhmM[i] = gamma;
+    out.tau0[i] = hasT
+      ? fieldToSI(sys, i, tau0Field, line.tau0 as number)
+      : tau0FromEquivalentWidthUnchecked(fieldToSI(sys, i, equivalentWidthField, line.equivalentWidth as number), b, gamma);
   }
   return out;
 }
 
-function synthesizeChecked(
+/**
+ * The synthesis on a grid already checked and in SI (`gridSI`); `rowReason(i, c)`
+ * says why row i, whose continuum value c is not finite, has no flux.
+ */
+function synthesizeOnGrid(
   sys: UnitSystem<SystemName>,
-  grid: Float64Array,
+  gridSI: Float64Array,
   continuum: Float64Array,
   lines: readonly SynthesisLine<SystemName, Medium>[],
   options: SynthesisOptions | undefined,
+  rowReason: (i: number, c: number) => string,
 ): SynthesisResult<Float64Array> {
-  increasingGrid(sys, "grid", grid, L);
-  const n = grid.length;
+  const n = gridSI.length;
   if (continuum.length < n) throw new RangeError(`continuum must have length >= ${n} (the grid length); got ${continuum.length}`);
-  const linesSI = linesToSI(sys, lines);
+  const tauCut = tauCutoffOption.toSI(sys, options?.tauCutoff ?? 1e-8);
+  const resolved = resolveLines(sys, lines);
   const out = new Float64Array(n);
-  const opts = options?.tauCutoff === undefined ? {} : { tauCutoff: options.tauCutoff };
-  const r = synthesizeSpectrumSI(arrayToSI(sys, grid, L), continuum, linesSI, out, opts);
-  return { flux: out, tau0: r.tau0 as DimensionlessArray, invalid: r.invalid };
+  const log = new BatchLog();
+  synthesizeSpectrumUnchecked(gridSI, continuum, resolved, tauCut, out, (i, c) => log.add(i, rowReason(i, c)));
+  return { ...log.result(out), flux: out, tau0: resolved.tau0 as DimensionlessArray };
 }
 
 /**
@@ -174,7 +247,7 @@ function synthesizeChecked(
  * (RangeError naming e.g. `lines[3].dopplerWidth` in the caller's unit);
  * the grid must be finite and strictly increasing and the continuum at
  * least as long. Rows whose continuum is not finite become NaN and are
- * listed in `invalid`.
+ * listed in `invalid`, each with a reason in `reasons`.
  *
  * @param sys - `SI` or `CGS`
  * @param grid - wavelengths in `sys`, strictly increasing (vacuum, air or unbranded)
@@ -198,7 +271,9 @@ export function synthesizeSpectrum<S extends SystemName, G extends LengthArray<S
   lines: readonly SynthesisLine<NoInfer<S>, MediumOf<NoInfer<G>>>[],
   options?: SynthesisOptions,
 ): SynthesisResult<C> {
-  return synthesizeChecked(sys, grid, continuum, lines, options) as SynthesisResult<C>;
+  const gridSI = gridToSI(sys, grid);
+  const r = synthesizeOnGrid(sys, gridSI, continuum, lines, options, (i, c) => `continuum must be finite on the grid; element ${i} is ${show(c)}`);
+  return r as SynthesisResult<C>;
 }
 
 /** Result of {@link synthesizePlanckSpectrum}: the synthesis plus its blackbody continuum. */
@@ -212,7 +287,8 @@ export interface PlanckSynthesisResult<S extends SystemName> extends SynthesisRe
  * from `planckRadianceWavelengthBatch` (W m⁻² sr⁻¹ m⁻¹ or
  * erg s⁻¹ cm⁻² sr⁻¹ cm⁻¹), then {@link synthesizeSpectrum}. The grid is a
  * vacuum (or unbranded) wavelength grid; line centres are vacuum wavelengths
- * or unbranded. Grid rows ≤ 0 give NaN and are listed in `invalid`.
+ * or unbranded. Grid rows ≤ 0 give NaN and are listed in `invalid`, with
+ * the Planck batch's reason for each in `reasons`.
  *
  * @param sys - `SI` or `CGS`
  * @param grid - vacuum wavelengths in `sys`, strictly increasing
@@ -236,15 +312,12 @@ export function synthesizePlanckSpectrum<S extends SystemName, G extends NotAirW
   lines: readonly SynthesisLine<NoInfer<S>, "vacuum">[],
   options?: SynthesisOptions,
 ): PlanckSynthesisResult<S> {
-  increasingGrid(sys, "grid", grid, L);
+  const gridSI = gridToSI(sys, grid);
   const planck = planckRadianceWavelengthBatch(sys, grid, temperature);
-  const r = synthesizeChecked(sys, grid, planck.values, lines, options);
-  return {
-    flux: r.flux as SpectralRadiancePerWavelengthArray<S>,
-    continuum: planck.values,
-    tau0: r.tau0,
-    invalid: r.invalid,
-  };
+  // the rows without a continuum are the Planck batch's invalid rows: give its reasons
+  const why = new Map(planck.invalid.map((i, k) => [i, planck.reasons[k] as string]));
+  const r = synthesizeOnGrid(sys, gridSI, planck.values, lines, options, (i) => why.get(i) ?? `continuum B_λ is not finite at element ${i}`);
+  return { ...r, flux: r.flux as SpectralRadiancePerWavelengthArray<S>, values: r.flux as SpectralRadiancePerWavelengthArray<S>, continuum: planck.values };
 }
 
 /**
@@ -268,11 +341,9 @@ export function equivalentWidthFromTau0<S extends SystemName>(
   dopplerWidth: Length<NoInfer<S>>,
   lorentzHwhm?: Length<NoInfer<S>>,
 ): Length<S> {
-  requireNonNegative("tau0", tau0, "(dimensionless)");
-  positive(sys, "dopplerWidth", dopplerWidth, L);
-  const g = lorentzHwhm ?? 0;
-  nonNegative(sys, "lorentzHwhm", g, L);
-  return fromSI(sys, equivalentWidthFromTau0SI(tau0, toSI(sys, dopplerWidth, L), toSI(sys, g, L)), L) as Length<S>;
+  return lorentzHwhm === undefined
+    ? widthOfTau0Gaussian(sys, tau0, dopplerWidth)
+    : widthOfTau0(sys, tau0, dopplerWidth, lorentzHwhm);
 }
 
 /**
@@ -291,9 +362,7 @@ export function tau0FromEquivalentWidth<S extends SystemName>(
   dopplerWidth: Length<NoInfer<S>>,
   lorentzHwhm?: Length<NoInfer<S>>,
 ): Dimensionless {
-  nonNegative(sys, "equivalentWidth", equivalentWidth, L);
-  positive(sys, "dopplerWidth", dopplerWidth, L);
-  const g = lorentzHwhm ?? 0;
-  nonNegative(sys, "lorentzHwhm", g, L);
-  return tau0FromEquivalentWidthSI(toSI(sys, equivalentWidth, L), toSI(sys, dopplerWidth, L), toSI(sys, g, L)) as Dimensionless;
+  return lorentzHwhm === undefined
+    ? tau0OfWidthGaussian(sys, equivalentWidth, dopplerWidth)
+    : tau0OfWidth(sys, equivalentWidth, dopplerWidth, lorentzHwhm);
 }

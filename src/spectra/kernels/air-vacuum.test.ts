@@ -82,7 +82,12 @@ describe("properties", () => {
   it("batch matches scalar and reports out-of-range rows", () => {
     const input = Float64Array.of(500e-9, 100e-9, Number.NaN, 2e-6, 1e-3);
     const out = new Float64Array(5);
-    expect(vacuumToAirWavelengthsSI(input, out).invalid).toEqual([1, 2, 4]);
+    const r = vacuumToAirWavelengthsSI(input, out);
+    expect(r.invalid).toEqual([1, 2, 4]);
+    expect(r.values).toBe(out);
+    // each reason is the message the scalar kernel throws for that row
+    expect(() => vacuumToAirWavelengthSI(100e-9)).toThrow(new RangeError(r.reasons[0]));
+    expect(r.reasons[1]).toMatch(/^vacuumWavelengthM must be in .* m \(standard-air formula range, 200 nm to 20 µm in air\); got NaN$/);
     expect(out[0]).toBe(vacuumToAirWavelengthSI(500e-9));
     expect(out[1]).toBeNaN();
     const back = new Float64Array(5);

@@ -31,7 +31,8 @@
  * @packageDocumentation
  */
 
-import type { BatchReport } from "./batch";
+import { show } from "../../internal/checks";
+import { BatchLog, type BatchResult } from "../../law/batch";
 import { requireOutputLength } from "./batch";
 
 /** Shortest air wavelength accepted, m (200 nm). */
@@ -73,23 +74,23 @@ export const VACUUM_WAVELENGTH_MIN_M = solveVacuum(AIR_WAVELENGTH_MIN_M);
 /** Longest vacuum wavelength accepted, m: the vacuum wavelength of 20 µm in air. */
 export const VACUUM_WAVELENGTH_MAX_M = solveVacuum(AIR_WAVELENGTH_MAX_M);
 
-function show(v: number): string {
-  return Object.is(v, -0) ? "-0" : String(v);
+function vacuumRangeReason(vacuumWavelengthM: number): string {
+  return `vacuumWavelengthM must be in [${VACUUM_WAVELENGTH_MIN_M}, ${VACUUM_WAVELENGTH_MAX_M}] m (standard-air formula range, 200 nm to 20 µm in air); got ${show(vacuumWavelengthM)}`;
+}
+
+function airRangeReason(airWavelengthM: number): string {
+  return `airWavelengthM must be in [${AIR_WAVELENGTH_MIN_M}, ${AIR_WAVELENGTH_MAX_M}] m (standard-air formula range); got ${show(airWavelengthM)}`;
 }
 
 function requireVacuum(vacuumWavelengthM: number): void {
   if (!(vacuumWavelengthM >= VACUUM_WAVELENGTH_MIN_M && vacuumWavelengthM <= VACUUM_WAVELENGTH_MAX_M)) {
-    throw new RangeError(
-      `vacuumWavelengthM must be in [${VACUUM_WAVELENGTH_MIN_M}, ${VACUUM_WAVELENGTH_MAX_M}] m (standard-air formula range, 200 nm to 20 µm in air); got ${show(vacuumWavelengthM)}`,
-    );
+    throw new RangeError(vacuumRangeReason(vacuumWavelengthM));
   }
 }
 
 function requireAir(airWavelengthM: number): void {
   if (!(airWavelengthM >= AIR_WAVELENGTH_MIN_M && airWavelengthM <= AIR_WAVELENGTH_MAX_M)) {
-    throw new RangeError(
-      `airWavelengthM must be in [${AIR_WAVELENGTH_MIN_M}, ${AIR_WAVELENGTH_MAX_M}] m (standard-air formula range); got ${show(airWavelengthM)}`,
-    );
+    throw new RangeError(airRangeReason(airWavelengthM));
   }
 }
 
@@ -105,6 +106,11 @@ function requireAir(airWavelengthM: number): void {
  */
 export function airRefractiveIndexSI(vacuumWavelengthM: number): number {
   requireVacuum(vacuumWavelengthM);
+  return airRefractiveIndexUnchecked(vacuumWavelengthM);
+}
+
+/** {@link airRefractiveIndexSI} without the range check (λ in range assumed). @internal */
+export function airRefractiveIndexUnchecked(vacuumWavelengthM: number): number {
   return 1 + refractivity(vacuumWavelengthM);
 }
 
@@ -119,6 +125,11 @@ export function airRefractiveIndexSI(vacuumWavelengthM: number): number {
  */
 export function vacuumToAirWavelengthSI(vacuumWavelengthM: number): number {
   requireVacuum(vacuumWavelengthM);
+  return vacuumToAirWavelengthUnchecked(vacuumWavelengthM);
+}
+
+/** {@link vacuumToAirWavelengthSI} without the range check (λ in range assumed). @internal */
+export function vacuumToAirWavelengthUnchecked(vacuumWavelengthM: number): number {
   return vacuumWavelengthM / (1 + refractivity(vacuumWavelengthM));
 }
 
@@ -136,29 +147,34 @@ export function airToVacuumWavelengthSI(airWavelengthM: number): number {
   return solveVacuum(airWavelengthM);
 }
 
+/** {@link airToVacuumWavelengthSI} without the range check (λ in range assumed). @internal */
+export function airToVacuumWavelengthUnchecked(airWavelengthM: number): number {
+  return solveVacuum(airWavelengthM);
+}
+
 /**
  * Batch vacuum → air over a Float64Array (batch.ts convention: invalid or
- * out-of-range rows become NaN and are reported).
+ * out-of-range rows become NaN and are reported with their reasons).
  *
  * @example
  * ```ts
  * const out = new Float64Array(2);
- * vacuumToAirWavelengthsSI(Float64Array.of(500e-9, 1e-9), out); // { invalid: [1] }
+ * vacuumToAirWavelengthsSI(Float64Array.of(500e-9, 1e-9), out); // { values: out, invalid: [1], reasons: ["vacuumWavelengthM must be in …; got 1e-9"] }
  * ```
  */
-export function vacuumToAirWavelengthsSI(vacuumWavelengthsM: Float64Array, out: Float64Array): BatchReport {
+export function vacuumToAirWavelengthsSI(vacuumWavelengthsM: Float64Array, out: Float64Array): BatchResult<Float64Array> {
   requireOutputLength(vacuumWavelengthsM, out);
-  const invalid: number[] = [];
+  const log = new BatchLog();
   for (let i = 0; i < vacuumWavelengthsM.length; i++) {
     const v = vacuumWavelengthsM[i] as number;
     if (v >= VACUUM_WAVELENGTH_MIN_M && v <= VACUUM_WAVELENGTH_MAX_M) {
       out[i] = v / (1 + refractivity(v));
     } else {
       out[i] = NaN;
-      invalid.push(i);
+      log.add(i, vacuumRangeReason(v));
     }
   }
-  return { invalid };
+  return log.result(out);
 }
 
 /**
@@ -170,17 +186,17 @@ export function vacuumToAirWavelengthsSI(vacuumWavelengthsM: Float64Array, out: 
  * airToVacuumWavelengthsSI(Float64Array.of(589.1583e-9), out); // Na D2
  * ```
  */
-export function airToVacuumWavelengthsSI(airWavelengthsM: Float64Array, out: Float64Array): BatchReport {
+export function airToVacuumWavelengthsSI(airWavelengthsM: Float64Array, out: Float64Array): BatchResult<Float64Array> {
   requireOutputLength(airWavelengthsM, out);
-  const invalid: number[] = [];
+  const log = new BatchLog();
   for (let i = 0; i < airWavelengthsM.length; i++) {
     const a = airWavelengthsM[i] as number;
     if (a >= AIR_WAVELENGTH_MIN_M && a <= AIR_WAVELENGTH_MAX_M) {
       out[i] = solveVacuum(a);
     } else {
       out[i] = NaN;
-      invalid.push(i);
+      log.add(i, airRangeReason(a));
     }
   }
-  return { invalid };
+  return log.result(out);
 }

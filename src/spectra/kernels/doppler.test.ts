@@ -70,6 +70,8 @@ describe("relativistic Doppler", () => {
     const out = new Float64Array(4);
     const r = dopplerShiftWavelengthsSI(lines, 1e5, out);
     expect(r.invalid).toEqual([1, 3]);
+    expect(r.reasons).toEqual(["restWavelengthM must be a finite number > 0 m; got -1", "restWavelengthM must be a finite number > 0 m; got NaN"]);
+    expect(() => relativisticDopplerWavelengthSI(-1, 1e5)).toThrow(new RangeError(r.reasons[0]));
     expect(out[0]).toBe(relativisticDopplerWavelengthSI(656.28e-9, 1e5));
     expect(out[1]).toBeNaN();
     dopplerShiftWavelengthsSI(lines, 1e5, lines);

@@ -19,13 +19,9 @@
  */
 
 import { C } from "../../constants/values";
-import { requireFinite, requirePositive } from "../../internal/checks";
-import type { BatchReport } from "./batch";
+import { requireFinite, requirePositive, show } from "../../internal/checks";
+import { BatchLog, type BatchResult } from "../../law/batch";
 import { requireOutputLength } from "./batch";
-
-function show(v: number): string {
-  return Object.is(v, -0) ? "-0" : String(v);
-}
 
 function requireSubluminal(name: string, vMs: number): number {
   if (!(Math.abs(vMs) < C)) {
@@ -45,6 +41,11 @@ function requireSubluminal(name: string, vMs: number): number {
  */
 export function redshiftFromVelocitySI(radialVelocityMs: number): number {
   requireSubluminal("radialVelocityMs", radialVelocityMs);
+  return redshiftFromVelocityUnchecked(radialVelocityMs);
+}
+
+/** {@link redshiftFromVelocitySI} without the input check (|v| < c assumed). @internal */
+export function redshiftFromVelocityUnchecked(radialVelocityMs: number): number {
   return Math.expm1(Math.atanh(radialVelocityMs / C));
 }
 
@@ -62,6 +63,11 @@ export function velocityFromRedshiftSI(redshift: number): number {
   if (!(redshift > -1)) {
     throw new RangeError(`redshift must be a finite number > -1 (dimensionless); got ${show(redshift)}`);
   }
+  return velocityFromRedshiftUnchecked(redshift);
+}
+
+/** {@link velocityFromRedshiftSI} without the input check (z finite, > −1 assumed). @internal */
+export function velocityFromRedshiftUnchecked(redshift: number): number {
   const q = redshift * (2 + redshift);
   return (C * q) / (2 + q);
 }
@@ -78,6 +84,11 @@ export function velocityFromRedshiftSI(redshift: number): number {
 export function redshiftFromWavelengthsSI(observedWavelengthM: number, restWavelengthM: number): number {
   requirePositive("observedWavelengthM", observedWavelengthM, "m");
   requirePositive("restWavelengthM", restWavelengthM, "m");
+  return redshiftFromWavelengthsUnchecked(observedWavelengthM, restWavelengthM);
+}
+
+/** {@link redshiftFromWavelengthsSI} without the input checks (both finite, > 0 assumed). @internal */
+export function redshiftFromWavelengthsUnchecked(observedWavelengthM: number, restWavelengthM: number): number {
   return (observedWavelengthM - restWavelengthM) / restWavelengthM;
 }
 
@@ -95,6 +106,11 @@ export function observedWavelengthFromRedshiftSI(restWavelengthM: number, redshi
   if (!(redshift > -1)) {
     throw new RangeError(`redshift must be a finite number > -1 (dimensionless); got ${show(redshift)}`);
   }
+  return observedWavelengthFromRedshiftUnchecked(restWavelengthM, redshift);
+}
+
+/** {@link observedWavelengthFromRedshiftSI} without the input checks. @internal */
+export function observedWavelengthFromRedshiftUnchecked(restWavelengthM: number, redshift: number): number {
   return restWavelengthM * (1 + redshift);
 }
 
@@ -112,6 +128,11 @@ export function observedWavelengthFromRedshiftSI(restWavelengthM: number, redshi
 export function relativisticDopplerWavelengthSI(restWavelengthM: number, radialVelocityMs: number): number {
   requirePositive("restWavelengthM", restWavelengthM, "m");
   requireSubluminal("radialVelocityMs", radialVelocityMs);
+  return relativisticDopplerWavelengthUnchecked(restWavelengthM, radialVelocityMs);
+}
+
+/** {@link relativisticDopplerWavelengthSI} without the input checks (λ finite, > 0; |v| < c assumed). @internal */
+export function relativisticDopplerWavelengthUnchecked(restWavelengthM: number, radialVelocityMs: number): number {
   const z = Math.expm1(Math.atanh(radialVelocityMs / C));
   return restWavelengthM + restWavelengthM * z;
 }
@@ -127,9 +148,14 @@ export function relativisticDopplerWavelengthSI(restWavelengthM: number, radialV
  * ```
  */
 export function radialVelocityFromWavelengthsSI(observedWavelengthM: number, restWavelengthM: number): number {
-  const z = redshiftFromWavelengthsSI(observedWavelengthM, restWavelengthM);
-  const q = z * (2 + z);
-  return (C * q) / (2 + q);
+  requirePositive("observedWavelengthM", observedWavelengthM, "m");
+  requirePositive("restWavelengthM", restWavelengthM, "m");
+  return radialVelocityFromWavelengthsUnchecked(observedWavelengthM, restWavelengthM);
+}
+
+/** {@link radialVelocityFromWavelengthsSI} without the input checks. @internal */
+export function radialVelocityFromWavelengthsUnchecked(observedWavelengthM: number, restWavelengthM: number): number {
+  return velocityFromRedshiftUnchecked(redshiftFromWavelengthsUnchecked(observedWavelengthM, restWavelengthM));
 }
 
 /**
@@ -144,6 +170,11 @@ export function radialVelocityFromWavelengthsSI(observedWavelengthM: number, res
 export function classicalDopplerWavelengthSI(restWavelengthM: number, radialVelocityMs: number): number {
   requirePositive("restWavelengthM", restWavelengthM, "m");
   requireSubluminal("radialVelocityMs", radialVelocityMs);
+  return classicalDopplerWavelengthUnchecked(restWavelengthM, radialVelocityMs);
+}
+
+/** {@link classicalDopplerWavelengthSI} without the input checks. @internal */
+export function classicalDopplerWavelengthUnchecked(restWavelengthM: number, radialVelocityMs: number): number {
   return restWavelengthM * (1 + radialVelocityMs / C);
 }
 
@@ -157,6 +188,11 @@ export function classicalDopplerWavelengthSI(restWavelengthM: number, radialVelo
  */
 export function classicalVelocityFromWavelengthsSI(observedWavelengthM: number, restWavelengthM: number): number {
   return C * redshiftFromWavelengthsSI(observedWavelengthM, restWavelengthM);
+}
+
+/** {@link classicalVelocityFromWavelengthsSI} without the input checks. @internal */
+export function classicalVelocityFromWavelengthsUnchecked(observedWavelengthM: number, restWavelengthM: number): number {
+  return C * redshiftFromWavelengthsUnchecked(observedWavelengthM, restWavelengthM);
 }
 
 /**
@@ -175,19 +211,19 @@ export function dopplerShiftWavelengthsSI(
   restWavelengthsM: Float64Array,
   radialVelocityMs: number,
   out: Float64Array,
-): BatchReport {
+): BatchResult<Float64Array> {
   requireSubluminal("radialVelocityMs", radialVelocityMs);
   requireOutputLength(restWavelengthsM, out);
   const z = Math.expm1(Math.atanh(radialVelocityMs / C));
-  const invalid: number[] = [];
+  const log = new BatchLog();
   for (let i = 0; i < restWavelengthsM.length; i++) {
     const l = restWavelengthsM[i] as number;
     if (l > 0 && l !== Infinity) {
       out[i] = l + l * z;
     } else {
       out[i] = NaN;
-      invalid.push(i);
+      log.add(i, `restWavelengthM must be a finite number > 0 m; got ${show(l)}`);
     }
   }
-  return { invalid };
+  return log.result(out);
 }

@@ -21,6 +21,7 @@
  */
 
 import { ALPHA, C, H, M_E, M_P, M_U, RYDBERG } from "../../constants/values";
+import { show } from "../../internal/checks";
 
 /**
  * Alpha-particle (⁴He nucleus) mass, kg. CODATA 2018 (Tiesinga et al.,
@@ -53,10 +54,6 @@ export const HYDROGEN: HydrogenLikeIonSI = Object.freeze({ z: 1, nuclearMassKg: 
 export const DEUTERIUM: HydrogenLikeIonSI = Object.freeze({ z: 1, nuclearMassKg: DEUTERON_MASS_KG });
 /** ⁴He II (He⁺): Z = 2, alpha-particle mass. */
 export const HELIUM_II: HydrogenLikeIonSI = Object.freeze({ z: 2, nuclearMassKg: ALPHA_PARTICLE_MASS_KG });
-
-function show(v: number): string {
-  return Object.is(v, -0) ? "-0" : String(v);
-}
 
 /** Throw a RangeError unless `n` is an integer ≥ 1. @internal */
 export function requireQuantumNumber(name: string, n: number): number {
@@ -93,6 +90,11 @@ export function requireNuclearMass(m: number): number {
  */
 export function reducedMassRatio(nuclearMassKg: number): number {
   requireNuclearMass(nuclearMassKg);
+  return reducedMassRatioUnchecked(nuclearMassKg);
+}
+
+/** {@link reducedMassRatio} without the check (M > 0 or Infinity assumed). @internal */
+export function reducedMassRatioUnchecked(nuclearMassKg: number): number {
   return 1 / (1 + M_E / nuclearMassKg);
 }
 
@@ -106,7 +108,12 @@ export function reducedMassRatio(nuclearMassKg: number): number {
  * ```
  */
 export function reducedMassKg(nuclearMassKg: number): number {
-  return M_E * reducedMassRatio(nuclearMassKg);
+  return reducedMassUnchecked(requireNuclearMass(nuclearMassKg));
+}
+
+/** {@link reducedMassKg} without the check (M > 0 or Infinity assumed). @internal */
+export function reducedMassUnchecked(nuclearMassKg: number): number {
+  return M_E * reducedMassRatioUnchecked(nuclearMassKg);
 }
 
 /**
@@ -151,7 +158,12 @@ export function nuclearMassFromMassNumberKg(massNumber: number, z: number): numb
 export function bohrLevelEnergySI(n: number, z: number, nuclearMassKg: number): number {
   requireQuantumNumber("n", n);
   requireNuclearCharge(z);
-  return (-H * C * RYDBERG * z * z * reducedMassRatio(nuclearMassKg)) / (n * n);
+  return bohrLevelEnergyUnchecked(n, z, requireNuclearMass(nuclearMassKg));
+}
+
+/** {@link bohrLevelEnergySI} without the checks (n, Z and M valid). @internal */
+export function bohrLevelEnergyUnchecked(n: number, z: number, nuclearMassKg: number): number {
+  return (-H * C * RYDBERG * z * z * reducedMassRatioUnchecked(nuclearMassKg)) / (n * n);
 }
 
 /** Throw unless j is a half-integer with ½ ≤ j ≤ n − ½. @internal */
@@ -196,7 +208,12 @@ export function diracLevelEnergySI(n: number, j: number, z: number, nuclearMassK
   requireQuantumNumber("n", n);
   requireJ("j", j, n);
   requireNuclearCharge(z);
-  return reducedMassKg(nuclearMassKg) * C * C * diracFMinusOne(n, j, z);
+  return diracLevelEnergyUnchecked(n, j, z, requireNuclearMass(nuclearMassKg));
+}
+
+/** {@link diracLevelEnergySI} without the checks (n, j, Z and M valid). @internal */
+export function diracLevelEnergyUnchecked(n: number, j: number, z: number, nuclearMassKg: number): number {
+  return reducedMassUnchecked(nuclearMassKg) * C * C * diracFMinusOne(n, j, z);
 }
 
 /**
@@ -214,7 +231,12 @@ export function diracLevelEnergySI(n: number, j: number, z: number, nuclearMassK
 export function diracLevelCentroidEnergySI(n: number, z: number, nuclearMassKg: number): number {
   requireQuantumNumber("n", n);
   requireNuclearCharge(z);
-  const mc2 = reducedMassKg(nuclearMassKg) * C * C;
+  return diracLevelCentroidEnergyUnchecked(n, z, requireNuclearMass(nuclearMassKg));
+}
+
+/** {@link diracLevelCentroidEnergySI} without the checks (n, Z and M valid). @internal */
+export function diracLevelCentroidEnergyUnchecked(n: number, z: number, nuclearMassKg: number): number {
+  const mc2 = reducedMassUnchecked(nuclearMassKg) * C * C;
   let s = 0;
   for (let twoJ = 1; twoJ <= 2 * n - 1; twoJ += 2) {
     const j = twoJ / 2;

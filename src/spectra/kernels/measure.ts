@@ -101,6 +101,15 @@ export function equivalentWidthSI(
   hiM: number,
 ): number {
   const { i0, i1 } = prepare(wavelengthsM, flux, continuum, loM, hiM);
+  return equivalentWidthUnchecked(wavelengthsM, flux, continuum, i0, i1);
+}
+
+/**
+ * {@link equivalentWidthSI} over the grid points i0 … i1 − 1, without the
+ * checks (grid increasing, at least two points, flux finite and continuum
+ * finite and > 0 there). @internal
+ */
+export function equivalentWidthUnchecked(wavelengthsM: Float64Array, flux: Float64Array, continuum: Float64Array, i0: number, i1: number): number {
   let s = 0;
   let prev = 1 - (flux[i0] as number) / (continuum[i0] as number);
   for (let i = i0 + 1; i < i1; i++) {
@@ -129,6 +138,17 @@ export function lineCentroidSI(
   hiM: number,
 ): number {
   const { i0, i1 } = prepare(wavelengthsM, flux, continuum, loM, hiM);
+  const c = lineCentroidUnchecked(wavelengthsM, flux, continuum, i0, i1);
+  if (c !== c) throw new RangeError(`flux has no deficit against continuum in [${loM}, ${hiM}] m: the centroid is undefined`);
+  return c;
+}
+
+/**
+ * {@link lineCentroidSI} over the grid points i0 … i1 − 1, without the
+ * checks ({@link equivalentWidthUnchecked}); NaN when the deficit integrates
+ * to zero. @internal
+ */
+export function lineCentroidUnchecked(wavelengthsM: Float64Array, flux: Float64Array, continuum: Float64Array, i0: number, i1: number): number {
   // Offsets from the window's first point keep λ·d sums well conditioned.
   const ref = wavelengthsM[i0] as number;
   let s0 = 0;
@@ -144,8 +164,7 @@ export function lineCentroidSI(
     prevD = d;
     prevX = x;
   }
-  if (s0 === 0) throw new RangeError(`flux has no deficit against continuum in [${loM}, ${hiM}] m: the centroid is undefined`);
-  return ref + s1 / s0;
+  return s0 === 0 ? NaN : ref + s1 / s0;
 }
 
 /**
@@ -165,6 +184,11 @@ export function lineDepthSI(
   hiM: number,
 ): number {
   const { i0, i1 } = prepare(wavelengthsM, flux, continuum, loM, hiM);
+  return lineDepthUnchecked(flux, continuum, i0, i1);
+}
+
+/** {@link lineDepthSI} over the grid points i0 … i1 − 1, without the checks. @internal */
+export function lineDepthUnchecked(flux: Float64Array, continuum: Float64Array, i0: number, i1: number): number {
   let m = Infinity;
   for (let i = i0; i < i1; i++) m = Math.min(m, (flux[i] as number) / (continuum[i] as number));
   return 1 - m;

@@ -21,7 +21,12 @@ const HC = H * C;
  * ```
  */
 export function photonEnergyFromWavelengthSI(wavelengthM: number): number {
-  return HC / requirePositive("wavelengthM", wavelengthM, "m");
+  return photonEnergyFromWavelengthUnchecked(requirePositive("wavelengthM", wavelengthM, "m"));
+}
+
+/** {@link photonEnergyFromWavelengthSI} without the input check (wavelengthM finite, > 0 assumed). @internal */
+export function photonEnergyFromWavelengthUnchecked(wavelengthM: number): number {
+  return HC / wavelengthM;
 }
 
 /**
@@ -32,7 +37,12 @@ export function photonEnergyFromWavelengthSI(wavelengthM: number): number {
  * ```
  */
 export function wavelengthFromPhotonEnergySI(energyJ: number): number {
-  return HC / requirePositive("energyJ", energyJ, "J");
+  return wavelengthFromPhotonEnergyUnchecked(requirePositive("energyJ", energyJ, "J"));
+}
+
+/** {@link wavelengthFromPhotonEnergySI} without the input check (energyJ finite, > 0 assumed). @internal */
+export function wavelengthFromPhotonEnergyUnchecked(energyJ: number): number {
+  return HC / energyJ;
 }
 
 /**
@@ -43,7 +53,12 @@ export function wavelengthFromPhotonEnergySI(energyJ: number): number {
  * ```
  */
 export function frequencyFromWavelengthSI(wavelengthM: number): number {
-  return C / requirePositive("wavelengthM", wavelengthM, "m");
+  return frequencyFromWavelengthUnchecked(requirePositive("wavelengthM", wavelengthM, "m"));
+}
+
+/** {@link frequencyFromWavelengthSI} without the input check (wavelengthM finite, > 0 assumed). @internal */
+export function frequencyFromWavelengthUnchecked(wavelengthM: number): number {
+  return C / wavelengthM;
 }
 
 /**
@@ -54,7 +69,12 @@ export function frequencyFromWavelengthSI(wavelengthM: number): number {
  * ```
  */
 export function wavelengthFromFrequencySI(frequencyHz: number): number {
-  return C / requirePositive("frequencyHz", frequencyHz, "Hz");
+  return wavelengthFromFrequencyUnchecked(requirePositive("frequencyHz", frequencyHz, "Hz"));
+}
+
+/** {@link wavelengthFromFrequencySI} without the input check (frequencyHz finite, > 0 assumed). @internal */
+export function wavelengthFromFrequencyUnchecked(frequencyHz: number): number {
+  return C / frequencyHz;
 }
 
 /**
@@ -65,7 +85,12 @@ export function wavelengthFromFrequencySI(frequencyHz: number): number {
  * ```
  */
 export function wavenumberFromWavelengthSI(wavelengthM: number): number {
-  return 1 / requirePositive("wavelengthM", wavelengthM, "m");
+  return wavenumberFromWavelengthUnchecked(requirePositive("wavelengthM", wavelengthM, "m"));
+}
+
+/** {@link wavenumberFromWavelengthSI} without the input check (wavelengthM finite, > 0 assumed). @internal */
+export function wavenumberFromWavelengthUnchecked(wavelengthM: number): number {
+  return 1 / wavelengthM;
 }
 
 /**
@@ -76,7 +101,12 @@ export function wavenumberFromWavelengthSI(wavelengthM: number): number {
  * ```
  */
 export function wavelengthFromWavenumberSI(wavenumberPerM: number): number {
-  return 1 / requirePositive("wavenumberPerM", wavenumberPerM, "m^-1");
+  return wavelengthFromWavenumberUnchecked(requirePositive("wavenumberPerM", wavenumberPerM, "m^-1"));
+}
+
+/** {@link wavelengthFromWavenumberSI} without the input check (wavenumberPerM finite, > 0 assumed). @internal */
+export function wavelengthFromWavenumberUnchecked(wavenumberPerM: number): number {
+  return 1 / wavenumberPerM;
 }
 
 /**
@@ -87,7 +117,12 @@ export function wavelengthFromWavenumberSI(wavenumberPerM: number): number {
  * ```
  */
 export function photonEnergyFromFrequencySI(frequencyHz: number): number {
-  return H * requirePositive("frequencyHz", frequencyHz, "Hz");
+  return photonEnergyFromFrequencyUnchecked(requirePositive("frequencyHz", frequencyHz, "Hz"));
+}
+
+/** {@link photonEnergyFromFrequencySI} without the input check (frequencyHz finite, > 0 assumed). @internal */
+export function photonEnergyFromFrequencyUnchecked(frequencyHz: number): number {
+  return H * frequencyHz;
 }
 
 /**
@@ -98,7 +133,12 @@ export function photonEnergyFromFrequencySI(frequencyHz: number): number {
  * ```
  */
 export function frequencyFromPhotonEnergySI(energyJ: number): number {
-  return requirePositive("energyJ", energyJ, "J") / H;
+  return frequencyFromPhotonEnergyUnchecked(requirePositive("energyJ", energyJ, "J"));
+}
+
+/** {@link frequencyFromPhotonEnergySI} without the input check (energyJ finite, > 0 assumed). @internal */
+export function frequencyFromPhotonEnergyUnchecked(energyJ: number): number {
+  return energyJ / H;
 }
 
 /**
@@ -109,7 +149,12 @@ export function frequencyFromPhotonEnergySI(energyJ: number): number {
  * ```
  */
 export function photonEnergyFromWavenumberSI(wavenumberPerM: number): number {
-  return HC * requirePositive("wavenumberPerM", wavenumberPerM, "m^-1");
+  return photonEnergyFromWavenumberUnchecked(requirePositive("wavenumberPerM", wavenumberPerM, "m^-1"));
+}
+
+/** {@link photonEnergyFromWavenumberSI} without the input check (wavenumberPerM finite, > 0 assumed). @internal */
+export function photonEnergyFromWavenumberUnchecked(wavenumberPerM: number): number {
+  return HC * wavenumberPerM;
 }
 
 /**
@@ -120,7 +165,12 @@ export function photonEnergyFromWavenumberSI(wavenumberPerM: number): number {
  * ```
  */
 export function wavenumberFromPhotonEnergySI(energyJ: number): number {
-  return requirePositive("energyJ", energyJ, "J") / HC;
+  return wavenumberFromPhotonEnergyUnchecked(requirePositive("energyJ", energyJ, "J"));
+}
+
+/** {@link wavenumberFromPhotonEnergySI} without the input check (energyJ finite, > 0 assumed). @internal */
+export function wavenumberFromPhotonEnergyUnchecked(energyJ: number): number {
+  return energyJ / HC;
 }
 
 /**
@@ -131,7 +181,12 @@ export function wavenumberFromPhotonEnergySI(energyJ: number): number {
  * ```
  */
 export function frequencyFromWavenumberSI(wavenumberPerM: number): number {
-  return C * requirePositive("wavenumberPerM", wavenumberPerM, "m^-1");
+  return frequencyFromWavenumberUnchecked(requirePositive("wavenumberPerM", wavenumberPerM, "m^-1"));
+}
+
+/** {@link frequencyFromWavenumberSI} without the input check (wavenumberPerM finite, > 0 assumed). @internal */
+export function frequencyFromWavenumberUnchecked(wavenumberPerM: number): number {
+  return C * wavenumberPerM;
 }
 
 /**
@@ -142,5 +197,10 @@ export function frequencyFromWavenumberSI(wavenumberPerM: number): number {
  * ```
  */
 export function wavenumberFromFrequencySI(frequencyHz: number): number {
-  return requirePositive("frequencyHz", frequencyHz, "Hz") / C;
+  return wavenumberFromFrequencyUnchecked(requirePositive("frequencyHz", frequencyHz, "Hz"));
+}
+
+/** {@link wavenumberFromFrequencySI} without the input check (frequencyHz finite, > 0 assumed). @internal */
+export function wavenumberFromFrequencyUnchecked(frequencyHz: number): number {
+  return frequencyHz / C;
 }

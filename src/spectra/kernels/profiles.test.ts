@@ -74,6 +74,7 @@ describe("normalisation and limits", () => {
     const out = new Float64Array(3);
     const r = voigtProfilesSI(Float64Array.of(0.5, Number.NaN, -2), 1, 0.2, out);
     expect(r.invalid).toEqual([1]);
+    expect(() => voigtProfileSI(Number.NaN, 1, 0.2)).toThrow(new RangeError(r.reasons[0]));
     expect(out[0]).toBe(voigtProfileSI(0.5, 1, 0.2));
     expect(out[2]).toBe(voigtProfileSI(-2, 1, 0.2));
   });

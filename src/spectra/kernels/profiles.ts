@@ -17,8 +17,8 @@
  * @packageDocumentation
  */
 
-import { requireFinite, requireNonNegative, requirePositive } from "../../internal/checks";
-import type { BatchReport } from "./batch";
+import { requireFinite, requireNonNegative, requirePositive, show } from "../../internal/checks";
+import { BatchLog, type BatchResult } from "../../law/batch";
 import { requireOutputLength } from "./batch";
 import { faddeeva } from "./faddeeva";
 
@@ -38,6 +38,11 @@ const w = new Float64Array(2);
 export function gaussianProfileSI(offset: number, dopplerWidth: number): number {
   requireFinite("offset", offset, "(unit of the width)");
   requirePositive("dopplerWidth", dopplerWidth, "(unit of the offset)");
+  return gaussianProfileUnchecked(offset, dopplerWidth);
+}
+
+/** {@link gaussianProfileSI} without the input checks (Δ finite, b finite and > 0 assumed). @internal */
+export function gaussianProfileUnchecked(offset: number, dopplerWidth: number): number {
   const u = offset / dopplerWidth;
   return Math.exp(-u * u) / (dopplerWidth * SQRT_PI);
 }
@@ -55,6 +60,11 @@ export function gaussianProfileSI(offset: number, dopplerWidth: number): number 
 export function lorentzianProfileSI(offset: number, lorentzHwhm: number): number {
   requireFinite("offset", offset, "(unit of the width)");
   requirePositive("lorentzHwhm", lorentzHwhm, "(unit of the offset)");
+  return lorentzianProfileUnchecked(offset, lorentzHwhm);
+}
+
+/** {@link lorentzianProfileSI} without the input checks (Δ finite, γ finite and > 0 assumed). @internal */
+export function lorentzianProfileUnchecked(offset: number, lorentzHwhm: number): number {
   const u = offset / lorentzHwhm;
   return 1 / (Math.PI * lorentzHwhm * (1 + u * u));
 }
@@ -76,16 +86,16 @@ export function voigtProfileSI(offset: number, dopplerWidth: number, lorentzHwhm
   requireFinite("offset", offset, "(unit of the widths)");
   requireNonNegative("dopplerWidth", dopplerWidth, "(unit of the offset)");
   requireNonNegative("lorentzHwhm", lorentzHwhm, "(unit of the offset)");
-  if (dopplerWidth === 0) {
-    requirePositive("lorentzHwhm", lorentzHwhm, "(unit of the offset; dopplerWidth is 0)");
-    const u = offset / lorentzHwhm;
-    return 1 / (Math.PI * lorentzHwhm * (1 + u * u));
-  }
+  if (dopplerWidth === 0) requirePositive("lorentzHwhm", lorentzHwhm, "(unit of the offset; dopplerWidth is 0)");
   return voigtProfileUnchecked(offset, dopplerWidth, lorentzHwhm);
 }
 
-/** Voigt profile without validation (b > 0, γ ≥ 0 assumed). @internal */
+/**
+ * {@link voigtProfileSI} without the input checks (Δ finite; b, γ finite
+ * and ≥ 0, not both 0, assumed); b = 0 gives the Lorentzian. @internal
+ */
 export function voigtProfileUnchecked(offset: number, dopplerWidth: number, lorentzHwhm: number): number {
+  if (dopplerWidth === 0) return lorentzianProfileUnchecked(offset, lorentzHwhm);
   const u = offset / dopplerWidth;
   if (lorentzHwhm === 0) return Math.exp(-u * u) / (dopplerWidth * SQRT_PI);
   faddeeva(u, lorentzHwhm / dopplerWidth, w);
@@ -107,23 +117,20 @@ export function voigtProfilesSI(
   dopplerWidth: number,
   lorentzHwhm: number,
   out: Float64Array,
-): BatchReport {
+): BatchResult<Float64Array> {
   requireNonNegative("dopplerWidth", dopplerWidth, "(unit of the offset)");
   requireNonNegative("lorentzHwhm", lorentzHwhm, "(unit of the offset)");
   if (dopplerWidth === 0) requirePositive("lorentzHwhm", lorentzHwhm, "(unit of the offset; dopplerWidth is 0)");
   requireOutputLength(offsets, out);
-  const invalid: number[] = [];
+  const log = new BatchLog();
   for (let i = 0; i < offsets.length; i++) {
     const d = offsets[i] as number;
     if (!Number.isFinite(d)) {
       out[i] = NaN;
-      invalid.push(i);
-    } else if (dopplerWidth === 0) {
-      const u = d / lorentzHwhm;
-      out[i] = 1 / (Math.PI * lorentzHwhm * (1 + u * u));
+      log.add(i, `offset must be a finite number (unit of the widths); got ${show(d)}`);
     } else {
       out[i] = voigtProfileUnchecked(d, dopplerWidth, lorentzHwhm);
     }
   }
-  return { invalid };
+  return log.result(out);
 }

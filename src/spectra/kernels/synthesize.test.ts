@@ -114,13 +114,18 @@ describe("synthesis", () => {
     synthesizeSpectrumSI(g, cont, [line], one);
     const r = synthesizeSpectrumSI(g, cont, [line, line], two);
     expect(r.invalid).toEqual([5]);
+    expect(r.reasons).toEqual(["continuum must be finite; element 5 is NaN"]);
+    expect(r.values).toBe(two);
     expect(two[5]).toBeNaN();
     // exp(−2τ)·2 = (exp(−τ)·2)²/2
     expect(rel(two[50] as number, ((one[50] as number) ** 2) / 2)).toBeLessThan(1e-14);
     // out may alias the continuum
     const c2 = new Float64Array(n).fill(2);
-    synthesizeSpectrumSI(g, c2, [line], c2);
+    c2[7] = Infinity;
+    const r2 = synthesizeSpectrumSI(g, c2, [line], c2);
     expect(c2[50]).toBe(one[50]);
+    // the reason shows the continuum value, read before its row was overwritten
+    expect(r2.reasons).toEqual(["continuum must be finite; element 7 is Infinity"]);
   });
 
   it("bad input → RangeError naming the parameter", () => {

@@ -36,8 +36,8 @@
  * @packageDocumentation
  */
 
-import { requireFinite, requireNonNegative, requirePositive } from "../../internal/checks";
-import type { BatchReport } from "./batch";
+import { requireFinite, requireNonNegative, requirePositive, show } from "../../internal/checks";
+import { BatchLog, type BatchResult } from "../../law/batch";
 import { faddeeva } from "./faddeeva";
 
 const SQRT_PI = Math.sqrt(Math.PI);
@@ -69,8 +69,8 @@ export interface SynthesisOptionsSI {
   readonly tauCutoff?: number;
 }
 
-/** Result of {@link synthesizeSpectrumSI}: batch report plus the τ₀ used for each line. */
-export interface SynthesisReportSI extends BatchReport {
+/** Result of {@link synthesizeSpectrumSI}: the batch result over the grid (`values` is `out`) plus the τ₀ used for each line. */
+export interface SynthesisReportSI extends BatchResult<Float64Array> {
   /** Central optical depth used for each line (solved when W was given). */
   readonly tau0: Float64Array;
 }
@@ -138,6 +138,11 @@ export function equivalentWidthFromTau0SI(tau0: number, dopplerWidthM: number, l
   return curveOfGrowth(tau0, dopplerWidthM, lorentzHwhmM);
 }
 
+/** {@link equivalentWidthFromTau0SI} without the input checks (τ₀ ≥ 0, b > 0, γ ≥ 0, all finite). @internal */
+export function equivalentWidthFromTau0Unchecked(tau0: number, dopplerWidthM: number, lorentzHwhmM: number): number {
+  return curveOfGrowth(tau0, dopplerWidthM, lorentzHwhmM);
+}
+
 function solveTau0(wTarget: number, b: number, gamma: number): number {
   if (wTarget === 0) return 0;
   const a = gamma / b;
@@ -202,12 +207,17 @@ export function tau0FromEquivalentWidthSI(equivalentWidthM: number, dopplerWidth
   return solveTau0(equivalentWidthM, dopplerWidthM, lorentzHwhmM);
 }
 
+/** {@link tau0FromEquivalentWidthSI} without the input checks (W ≥ 0, b > 0, γ ≥ 0, all finite). @internal */
+export function tau0FromEquivalentWidthUnchecked(equivalentWidthM: number, dopplerWidthM: number, lorentzHwhmM: number): number {
+  return solveTau0(equivalentWidthM, dopplerWidthM, lorentzHwhmM);
+}
+
 /** Validate the grid: finite and strictly increasing. @internal */
 export function requireIncreasingGrid(name: string, grid: Float64Array): void {
   for (let i = 0; i < grid.length; i++) {
     const v = grid[i] as number;
     if (!Number.isFinite(v) || (i > 0 && !(v > (grid[i - 1] as number)))) {
-      throw new RangeError(`${name} must be finite and strictly increasing (m); element ${i} is ${String(v)}`);
+      throw new RangeError(`${name} must be finite and strictly increasing (m); element ${i} is ${show(v)}`);
     }
   }
 }
@@ -288,27 +298,76 @@ export function synthesizeSpectrumSI(
   const tauCut = requirePositive("options.tauCutoff", options.tauCutoff ?? 1e-8, "(dimensionless)");
   requireFinite("options.tauCutoff", tauCut, "(dimensionless)");
   const nl = lines.length;
-  const bs = new Float64Array(nl);
-  const gs = new Float64Array(nl);
+  const resolved: ResolvedLinesSI = {
+    centerM: new Float64Array(nl),
+    dopplerWidthM: new Float64Array(nl),
+    lorentzHwhmM: new Float64Array(nl),
+    tau0: new Float64Array(nl),
+  };
   for (let i = 0; i < nl; i++) {
     const r = resolveLine(lines[i] as SynthesisLineSI, i);
-    bs[i] = r.b;
-    gs[i] = r.gamma;
+    resolved.centerM[i] = (lines[i] as SynthesisLineSI).centerM;
+    resolved.dopplerWidthM[i] = r.b;
+    resolved.lorentzHwhmM[i] = r.gamma;
   }
-  const tau0s = new Float64Array(nl);
   for (let i = 0; i < nl; i++) {
     const line = lines[i] as SynthesisLineSI;
-    tau0s[i] = line.tau0 !== undefined ? line.tau0 : solveTau0(line.equivalentWidthM as number, bs[i] as number, gs[i] as number);
+    resolved.tau0[i] =
+      line.tau0 !== undefined ? line.tau0 : solveTau0(line.equivalentWidthM as number, resolved.dopplerWidthM[i] as number, resolved.lorentzHwhmM[i] as number);
   }
+  const log = new BatchLog();
+  synthesizeSpectrumUnchecked(wavelengthsM, continuum, resolved, tauCut, out, (j, c) =>
+    log.add(j, `continuum must be finite; element ${j} is ${show(c)}`),
+  );
+  return { ...log.result(out), tau0: resolved.tau0 };
+}
+
+/**
+ * Lines checked and resolved for {@link synthesizeSpectrumUnchecked}, one
+ * entry per line: centre, Doppler width b (σ already turned into b = √2 σ),
+ * Lorentz HWHM γ (m) and central optical depth τ₀ (W already solved for).
+ *
+ * @internal
+ */
+export interface ResolvedLinesSI {
+  /** Line centres, m (finite, > 0). */
+  readonly centerM: Float64Array;
+  /** Doppler widths b, m (finite, > 0). */
+  readonly dopplerWidthM: Float64Array;
+  /** Lorentz HWHM γ, m (finite, ≥ 0). */
+  readonly lorentzHwhmM: Float64Array;
+  /** Central optical depths τ₀ (finite, ≥ 0). */
+  readonly tau0: Float64Array;
+}
+
+/**
+ * {@link synthesizeSpectrumSI} without the checks: the grid finite and
+ * strictly increasing, `continuum` and `out` at least as long, the lines
+ * resolved and valid, the cutoff `tauCut` finite and > 0. Each row whose
+ * continuum value `c` is not finite is written as NaN and passed to
+ * `bad(j, c)`, in ascending order.
+ *
+ * @internal
+ */
+export function synthesizeSpectrumUnchecked(
+  wavelengthsM: Float64Array,
+  continuum: Float64Array,
+  lines: ResolvedLinesSI,
+  tauCut: number,
+  out: Float64Array,
+  bad: (j: number, c: number) => void,
+): void {
+  const n = wavelengthsM.length;
+  const nl = lines.tau0.length;
   // Optical depth accumulator: `out`, unless it aliases the continuum.
   const tau = out === continuum ? new Float64Array(n) : out;
   tau.fill(0, 0, n);
   for (let i = 0; i < nl; i++) {
-    const t0 = tau0s[i] as number;
+    const t0 = lines.tau0[i] as number;
     if (!(t0 > tauCut)) continue;
-    const b = bs[i] as number;
-    const a = (gs[i] as number) / b;
-    const center = (lines[i] as SynthesisLineSI).centerM;
+    const b = lines.dopplerWidthM[i] as number;
+    const a = (lines.lorentzHwhmM[i] as number) / b;
+    const center = lines.centerM[i] as number;
     const k0 = voigtK(0, a);
     const uCore = Math.sqrt(Math.log(t0 / tauCut));
     const uWing = a > 0 ? Math.sqrt((t0 * a) / (SQRT_PI * k0 * tauCut)) : 0;
@@ -329,15 +388,13 @@ export function synthesizeSpectrumSI(
       }
     }
   }
-  const invalid: number[] = [];
   for (let j = 0; j < n; j++) {
     const c = continuum[j] as number;
     if (Number.isFinite(c)) {
       out[j] = c * Math.exp(-(tau[j] as number));
     } else {
       out[j] = NaN;
-      invalid.push(j);
+      bad(j, c);
     }
   }
-  return { invalid, tau0: tau0s };
 }

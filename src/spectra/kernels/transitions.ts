@@ -12,21 +12,20 @@
  */
 
 import { C, H, RYDBERG } from "../../constants/values";
+import { show } from "../../internal/checks";
 import {
   diracFMinusOne,
-  diracLevelCentroidEnergySI,
-  reducedMassKg,
-  reducedMassRatio,
+  diracLevelCentroidEnergyUnchecked,
+  reducedMassRatioUnchecked,
+  reducedMassUnchecked,
   requireJ,
   requireNuclearCharge,
+  requireNuclearMass,
   requireQuantumNumber,
 } from "./hydrogen-like";
 
-function show(v: number): string {
-  return Object.is(v, -0) ? "-0" : String(v);
-}
-
-function requireOrdered(nLower: number, nUpper: number): void {
+/** Throw a RangeError unless nLower and nUpper are integers ≥ 1 with nLower < nUpper. @internal */
+export function requireOrdered(nLower: number, nUpper: number): void {
   requireQuantumNumber("nLower", nLower);
   requireQuantumNumber("nUpper", nUpper);
   if (!(nLower < nUpper)) {
@@ -50,8 +49,13 @@ function requireOrdered(nLower: number, nUpper: number): void {
 export function transitionWavenumberSI(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
   requireOrdered(nLower, nUpper);
   requireNuclearCharge(z);
+  return transitionWavenumberUnchecked(nLower, nUpper, z, requireNuclearMass(nuclearMassKg));
+}
+
+/** {@link transitionWavenumberSI} without the checks (levels ordered, Z and M valid). @internal */
+export function transitionWavenumberUnchecked(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
   const bracket = ((nUpper - nLower) * (nUpper + nLower)) / (nLower * nLower * nUpper * nUpper);
-  return RYDBERG * z * z * reducedMassRatio(nuclearMassKg) * bracket;
+  return RYDBERG * z * z * reducedMassRatioUnchecked(nuclearMassKg) * bracket;
 }
 
 /**
@@ -67,6 +71,11 @@ export function transitionEnergySI(nLower: number, nUpper: number, z: number, nu
   return H * C * transitionWavenumberSI(nLower, nUpper, z, nuclearMassKg);
 }
 
+/** {@link transitionEnergySI} without the checks. @internal */
+export function transitionEnergyUnchecked(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
+  return H * C * transitionWavenumberUnchecked(nLower, nUpper, z, nuclearMassKg);
+}
+
 /**
  * Frequency of the Bohr transition, ν = c σ, Hz.
  *
@@ -79,6 +88,11 @@ export function transitionFrequencySI(nLower: number, nUpper: number, z: number,
   return C * transitionWavenumberSI(nLower, nUpper, z, nuclearMassKg);
 }
 
+/** {@link transitionFrequencySI} without the checks. @internal */
+export function transitionFrequencyUnchecked(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
+  return C * transitionWavenumberUnchecked(nLower, nUpper, z, nuclearMassKg);
+}
+
 /**
  * Vacuum wavelength of the Bohr transition, λ = 1/σ, m.
  *
@@ -89,6 +103,11 @@ export function transitionFrequencySI(nLower: number, nUpper: number, z: number,
  */
 export function transitionVacuumWavelengthSI(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
   return 1 / transitionWavenumberSI(nLower, nUpper, z, nuclearMassKg);
+}
+
+/** {@link transitionVacuumWavelengthSI} without the checks. @internal */
+export function transitionVacuumWavelengthUnchecked(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
+  return 1 / transitionWavenumberUnchecked(nLower, nUpper, z, nuclearMassKg);
 }
 
 /**
@@ -115,12 +134,29 @@ export function diracTransitionEnergySI(
   requireJ("jLower", jLower, nLower);
   requireJ("jUpper", jUpper, nUpper);
   requireNuclearCharge(z);
+  requireLevelAbove(nLower, jLower, nUpper, jUpper);
+  return diracTransitionEnergyUnchecked(nLower, jLower, nUpper, jUpper, z, requireNuclearMass(nuclearMassKg));
+}
+
+/** Throw a RangeError unless (nUpper, jUpper) is above (nLower, jLower) (both levels already valid). @internal */
+export function requireLevelAbove(nLower: number, jLower: number, nUpper: number, jUpper: number): void {
   if (!(nLower < nUpper || (nLower === nUpper && jLower < jUpper))) {
     throw new RangeError(
       `nUpper, jUpper must name a level above (nLower, jLower) = (${nLower}, ${jLower}); got (${show(nUpper)}, ${show(jUpper)})`,
     );
   }
-  const mc2 = reducedMassKg(nuclearMassKg) * C * C;
+}
+
+/** {@link diracTransitionEnergySI} without the checks. @internal */
+export function diracTransitionEnergyUnchecked(
+  nLower: number,
+  jLower: number,
+  nUpper: number,
+  jUpper: number,
+  z: number,
+  nuclearMassKg: number,
+): number {
+  const mc2 = reducedMassUnchecked(nuclearMassKg) * C * C;
   return mc2 * (diracFMinusOne(nUpper, jUpper, z) - diracFMinusOne(nLower, jLower, z));
 }
 
@@ -136,7 +172,13 @@ export function diracTransitionEnergySI(
  */
 export function diracCentroidTransitionEnergySI(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
   requireOrdered(nLower, nUpper);
-  return diracLevelCentroidEnergySI(nUpper, z, nuclearMassKg) - diracLevelCentroidEnergySI(nLower, z, nuclearMassKg);
+  requireNuclearCharge(z);
+  return diracCentroidTransitionEnergyUnchecked(nLower, nUpper, z, requireNuclearMass(nuclearMassKg));
+}
+
+/** {@link diracCentroidTransitionEnergySI} without the checks. @internal */
+export function diracCentroidTransitionEnergyUnchecked(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
+  return diracLevelCentroidEnergyUnchecked(nUpper, z, nuclearMassKg) - diracLevelCentroidEnergyUnchecked(nLower, z, nuclearMassKg);
 }
 
 /**
@@ -151,7 +193,12 @@ export function diracCentroidTransitionEnergySI(nLower: number, nUpper: number, 
 export function ionizationEnergySI(n: number, z: number, nuclearMassKg: number): number {
   requireQuantumNumber("n", n);
   requireNuclearCharge(z);
-  return (H * C * RYDBERG * z * z * reducedMassRatio(nuclearMassKg)) / (n * n);
+  return ionizationEnergyUnchecked(n, z, requireNuclearMass(nuclearMassKg));
+}
+
+/** {@link ionizationEnergySI} without the checks. @internal */
+export function ionizationEnergyUnchecked(n: number, z: number, nuclearMassKg: number): number {
+  return (H * C * RYDBERG * z * z * reducedMassRatioUnchecked(nuclearMassKg)) / (n * n);
 }
 
 /** Names of the hydrogen series and their lower levels n₁. */
@@ -236,7 +283,12 @@ export function seriesLimitEnergySI(series: SeriesName, z: number, nuclearMassKg
 export function seriesLimitVacuumWavelengthSI(series: SeriesName, z: number, nuclearMassKg: number): number {
   const n1 = seriesLowerLevel(series);
   requireNuclearCharge(z);
-  return (n1 * n1) / (RYDBERG * z * z * reducedMassRatio(nuclearMassKg));
+  return seriesLimitVacuumWavelengthUnchecked(n1, z, requireNuclearMass(nuclearMassKg));
+}
+
+/** {@link seriesLimitVacuumWavelengthSI} for lower level n₁, without the checks. @internal */
+export function seriesLimitVacuumWavelengthUnchecked(n1: number, z: number, nuclearMassKg: number): number {
+  return (n1 * n1) / (RYDBERG * z * z * reducedMassRatioUnchecked(nuclearMassKg));
 }
 
 /**

@@ -27,7 +27,12 @@ import { requireNonNegative, requirePositive } from "../../internal/checks";
  * ```
  */
 export function atomicMassKg(relativeAtomicMass: number): number {
-  return requirePositive("relativeAtomicMass", relativeAtomicMass, "(u)") * M_U;
+  return atomicMassUnchecked(requirePositive("relativeAtomicMass", relativeAtomicMass, "(u)"));
+}
+
+/** {@link atomicMassKg} without the input check. @internal */
+export function atomicMassUnchecked(relativeAtomicMass: number): number {
+  return relativeAtomicMass * M_U;
 }
 
 /**
@@ -46,6 +51,11 @@ export function dopplerVelocityWidthSI(temperatureK: number, massKg: number, mic
   requirePositive("temperatureK", temperatureK, "K");
   requirePositive("massKg", massKg, "kg");
   requireNonNegative("microturbulenceMs", microturbulenceMs, "m s^-1");
+  return dopplerVelocityWidthUnchecked(temperatureK, massKg, microturbulenceMs);
+}
+
+/** {@link dopplerVelocityWidthSI} without the input checks. @internal */
+export function dopplerVelocityWidthUnchecked(temperatureK: number, massKg: number, microturbulenceMs: number): number {
   return Math.sqrt((2 * K_B * temperatureK) / massKg + microturbulenceMs * microturbulenceMs);
 }
 
@@ -64,7 +74,15 @@ export function dopplerWidthWavelengthSI(
   microturbulenceMs: number,
 ): number {
   requirePositive("centerWavelengthM", centerWavelengthM, "m");
-  return (centerWavelengthM * dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs)) / C;
+  return dopplerWidthUnchecked(centerWavelengthM, dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs));
+}
+
+/**
+ * Doppler width x₀ b / c of a line centred at x₀ (a wavelength in m, or a
+ * frequency in Hz) for the velocity width b (m s⁻¹), without checks. @internal
+ */
+export function dopplerWidthUnchecked(center: number, velocityWidthMs: number): number {
+  return (center * velocityWidthMs) / C;
 }
 
 /**
@@ -82,7 +100,7 @@ export function dopplerWidthFrequencySI(
   microturbulenceMs: number,
 ): number {
   requirePositive("centerFrequencyHz", centerFrequencyHz, "Hz");
-  return (centerFrequencyHz * dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs)) / C;
+  return dopplerWidthUnchecked(centerFrequencyHz, dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs));
 }
 
 /**
@@ -94,7 +112,12 @@ export function dopplerWidthFrequencySI(
  * ```
  */
 export function lorentzHwhmFrequencySI(dampingRatePerS: number): number {
-  return requireNonNegative("dampingRatePerS", dampingRatePerS, "s^-1") / (4 * Math.PI);
+  return lorentzHwhmFrequencyUnchecked(requireNonNegative("dampingRatePerS", dampingRatePerS, "s^-1"));
+}
+
+/** {@link lorentzHwhmFrequencySI} without the input check. @internal */
+export function lorentzHwhmFrequencyUnchecked(dampingRatePerS: number): number {
+  return dampingRatePerS / (4 * Math.PI);
 }
 
 /**
@@ -109,6 +132,11 @@ export function lorentzHwhmFrequencySI(dampingRatePerS: number): number {
 export function lorentzHwhmWavelengthSI(centerWavelengthM: number, dampingRatePerS: number): number {
   requirePositive("centerWavelengthM", centerWavelengthM, "m");
   requireNonNegative("dampingRatePerS", dampingRatePerS, "s^-1");
+  return lorentzHwhmWavelengthUnchecked(centerWavelengthM, dampingRatePerS);
+}
+
+/** {@link lorentzHwhmWavelengthSI} without the input checks. @internal */
+export function lorentzHwhmWavelengthUnchecked(centerWavelengthM: number, dampingRatePerS: number): number {
   return (centerWavelengthM * centerWavelengthM * dampingRatePerS) / (4 * Math.PI * C);
 }
 
