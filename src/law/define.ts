@@ -114,6 +114,7 @@ export interface LawDeclaration<A extends readonly LawInput[], R extends Dimensi
  * const lc = luminosity(CGS, CGS.of(1, units.Rsol), SI.of(5772, units.K)); // erg s^-1
  * ```
  */
+/* @__NO_SIDE_EFFECTS__ */
 export function defineLaw<const A extends readonly LawInput[], R extends Dimension>(declaration: LawDeclaration<A, R>): Law<A, R> {
   const inputs = declaration.inputs;
   const output = new LawOutput(declaration.name, declaration.result);

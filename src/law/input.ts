@@ -196,6 +196,7 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
  * const beta = lawInput("beta", kinds.dimensionless, { check: "finite" });
  * ```
  */
+/* @__NO_SIDE_EFFECTS__ */
 export function lawInput<D extends Dimension, V extends boolean = false>(
   name: string,
   kind: Kind<D>,

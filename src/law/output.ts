@@ -58,6 +58,7 @@ export class LawOutput<D extends Dimension = Dimension> {
  * const luminosity = lawOutput("luminosity", kinds.power);
  * ```
  */
+/* @__NO_SIDE_EFFECTS__ */
 export function lawOutput<D extends Dimension>(name: string, kind: Kind<D>): LawOutput<D> {
   return new LawOutput(name, kind);
 }
