@@ -7,8 +7,9 @@
 import { SI, CGS } from "../src/quantity/system";
 import { units } from "../src/quantity/units";
 import { add, div, mul, pow, scale } from "../src/quantity/arithmetic";
-import type { Length, Temperature } from "../src/quantity/aliases";
+import type { Length, Power, Temperature } from "../src/quantity/aliases";
 import { constants } from "../src/constants/index";
+import { kinds } from "../src/quantity/aliases";
 import type { BenchCase } from "./case";
 
 const N = 1_000_000;
@@ -105,6 +106,55 @@ export const cases: BenchCase[] = [
       const kind = { dimension: units.W.dimension };
       for (let i = 0; i < N; i++) s += CGS.from(SI.of(lengths[i] as number, units.W), kind);
       return s;
+    },
+  },
+  {
+    name: "unit conversion out of the loop: SI.converter(nm), SI.reader(Å) over 10⁶ values",
+    items: N,
+    setup,
+    baseline: () => {
+      let s = 0;
+      for (let i = 0; i < N; i++) s += ((lengths[i] as number) / 1e9) * 1e10;
+      return s;
+    },
+    subject: () => {
+      const fromNm = SI.converter(units.nm);
+      const inAngstrom = SI.reader(units.angstrom);
+      let s = 0;
+      for (let i = 0; i < N; i++) s += inAngstrom(fromNm(lengths[i] as number));
+      return s;
+    },
+  },
+  {
+    name: "system conversion out of the loop: CGS.converterFrom(power) over 10⁶ values",
+    items: N,
+    setup,
+    baseline: () => {
+      let s = 0;
+      for (let i = 0; i < N; i++) s += (lengths[i] as number) * 1e7;
+      return s;
+    },
+    subject: () => {
+      const toErgPerS = CGS.converterFrom(kinds.power);
+      let s = 0;
+      for (let i = 0; i < N; i++) s += toErgPerS(lengths[i] as Power<"SI">);
+      return s;
+    },
+  },
+  {
+    name: "arrays: SI.arrayOf(nm) then SI.arrayIn(Å), 10⁶ values",
+    items: N,
+    setup,
+    baseline: () => {
+      const a = new Float64Array(N);
+      for (let i = 0; i < N; i++) a[i] = (lengths[i] as number) / 1e9;
+      const b = new Float64Array(N);
+      for (let i = 0; i < N; i++) b[i] = (a[i] as number) * 1e10;
+      return (b[0] as number) + (b[N - 1] as number);
+    },
+    subject: () => {
+      const b = SI.arrayIn(SI.arrayOf(lengths, units.nm), units.angstrom);
+      return (b[0] as number) + (b[N - 1] as number);
     },
   },
 ];
