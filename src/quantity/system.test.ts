@@ -1,9 +1,10 @@
+import Decimal from "decimal.js";
 import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { constants } from "../constants/index";
 import { kinds } from "./aliases";
 import { CGS, SI } from "./system";
-import { multiplyUnits, powerUnit, prefixed, type Unit } from "./unit";
+import { defineUnit, multiplyUnits, powerUnit, prefixed, type Unit } from "./unit";
 import { units } from "./units";
 
 const ULP = Number.EPSILON;
@@ -140,5 +141,172 @@ describe("formatting", () => {
       }),
       { numRuns: 300 },
     );
+  });
+});
+
+// Exact reference arithmetic. Every double is m × 2^e with integer m, so its
+// exact decimal expansion has at most 767 significant digits; with 1200 digits
+// of working precision the products and quotients by powers of ten below are
+// exact, and Number() of the exact decimal string is the correctly rounded
+// double (ECMAScript's string-to-number conversion rounds correctly).
+const D = Decimal.clone({ precision: 1200, toExpNeg: -9e15, toExpPos: 9e15 });
+function exact(v: number): Decimal {
+  const view = new DataView(new ArrayBuffer(8));
+  view.setFloat64(0, v);
+  const bits = view.getBigUint64(0);
+  const sign = bits >> 63n ? -1 : 1;
+  const biased = Number((bits >> 52n) & 0x7ffn);
+  const frac = bits & 0xfffffffffffffn;
+  const m = biased === 0 ? frac : frac | (1n << 52n);
+  const e = (biased === 0 ? 1 : biased) - 1075;
+  return new D(m.toString()).times(new D(2).pow(e)).times(sign);
+}
+/** The double nearest to the exact value `x` (ties to even), via a correctly rounding parse. */
+const nearest = (x: Decimal): number => Number(x.toString());
+/** The correctly rounded v × 10^n. */
+const roundedTimesPow10 = (v: number, n: number): number => nearest(exact(v).times(new D(10).pow(n)));
+
+/** Units whose size is an exact power of ten in SI (cm, nm, Å, erg, Jy, …), with that power. */
+const decimalUnits = allUnits.filter((u) => /^1e[+-]\d+$/.test(u.mantissa.toExponential()));
+const decimalExp = (u: Unit): number => u.exp10 + Number(u.mantissa.toExponential().slice(2));
+const cgsShift = (u: Unit): number => 2 * u.dimension.length + 3 * u.dimension.mass;
+/**
+ * (system, unit, n) for every decimal unit whose size in that system is 10^n
+ * with |n| ≤ 22, where 10^n is an exact double. Beyond that (the jansky:
+ * 10^-26 W m^-2 Hz^-1, 10^-23 erg s^-1 cm^-2 Hz^-1) no double is 10^n and the
+ * unit converts by its correctly rounded size like any other.
+ */
+const exactCases = [SI, CGS].flatMap((sys) =>
+  decimalUnits
+    .map((u) => [sys, u, decimalExp(u) + (sys === CGS ? cgsShift(u) : 0)] as const)
+    .filter(([, , n]) => Math.abs(n) <= 22),
+);
+/** Any finite double (including subnormals and values that overflow after scaling). */
+const anyDouble = fc.double({ noNaN: true, noDefaultInfinity: true });
+const someDouble = fc.oneof(magnitude, anyDouble);
+
+describe("decimal units convert with one correctly rounded operation (against decimal.js)", () => {
+  test("the catalogue has decimal units in both directions of the shift", () => {
+    // guards the properties below against passing on an empty list
+    expect(decimalUnits.map((u) => u.symbol)).toEqual(expect.arrayContaining(["cm", "nm", "Å", "km", "erg", "Jy"]));
+    expect(exactCases.filter(([sys]) => sys === SI).map(([, u]) => u.symbol)).toEqual(expect.arrayContaining(["cm", "nm", "Å", "km", "erg"]));
+    expect(exactCases.filter(([sys]) => sys === CGS).map(([, u]) => u.symbol)).toEqual(expect.arrayContaining(["m", "nm", "Å", "J", "W"]));
+    expect(exactCases.some(([, , n]) => n < 0) && exactCases.some(([, , n]) => n > 0)).toBe(true);
+  });
+  test("property: of / valueIn of a decimal unit are the correctly rounded v × 10^±n (|n| ≤ 22), both systems", () => {
+    fc.assert(
+      fc.property(someDouble, fc.constantFrom(...exactCases), (v, [sys, u, n]) => {
+        expect(sys.of(v, u) as number).toBe(roundedTimesPow10(v, n));
+        expect(sys.valueIn(v as never, u)).toBe(roundedTimesPow10(v, -n));
+      }),
+      { numRuns: 600 },
+    );
+  });
+  test("property: SI ↔ CGS for every kind is the correctly rounded v × 10^±(2L + 3M)", () => {
+    const kindList = Object.values(kinds);
+    fc.assert(
+      fc.property(someDouble, fc.constantFrom(...kindList), (v, kind) => {
+        const n = 2 * kind.dimension.length + 3 * kind.dimension.mass;
+        expect(CGS.from(v as never, kind as never) as number).toBe(roundedTimesPow10(v, n));
+        expect(SI.from(v as never, kind as never) as number).toBe(roundedTimesPow10(v, -n));
+      }),
+      { numRuns: 400 },
+    );
+  });
+  test("a power-of-ten mantissa other than 1 is folded into the exponent (0.001 m converts exactly)", () => {
+    const milli = defineUnit("mm'", "millimetre written as 0.001 m", kinds.length.dimension, 0.001);
+    fc.assert(
+      fc.property(someDouble, (v) => {
+        expect(SI.of(v, milli) as number).toBe(roundedTimesPow10(v, -3));
+        expect(SI.valueIn(v as never, milli)).toBe(roundedTimesPow10(v, 3));
+        expect(CGS.of(v, milli) as number).toBe(roundedTimesPow10(v, -1));
+      }),
+      { numRuns: 200 },
+    );
+    // 9 × 0.001 is 0.009000000000000001 (two roundings): the folding is what makes this exact
+    expect(SI.of(9, milli) as number).toBe(0.009);
+    expect(9 * 0.001).not.toBe(0.009);
+  });
+  test("property: every other unit multiplies by its correctly rounded size and divides by it, both systems", () => {
+    const others = [SI, CGS].flatMap((sys) =>
+      allUnits
+        .filter((u) => !exactCases.some(([s2, u2]) => s2 === sys && u2 === u))
+        .map((u) => [sys, u, u.exp10 + (sys === CGS ? cgsShift(u) : 0)] as const),
+    );
+    expect(others.length).toBeGreaterThan(20);
+    expect(others.some(([sys, u]) => sys === SI && u === units.Jy)).toBe(true);
+    fc.assert(
+      fc.property(someDouble, fc.constantFrom(...others), (v, [sys, u, e]) => {
+        const size = nearest(new D(String(u.mantissa)).times(new D(10).pow(e)));
+        if (sys === SI) expect(u.factor).toBe(size);
+        expect(sys.of(v, u) as number).toBe(v * size);
+        expect(sys.valueIn(v as never, u)).toBe(v / size);
+      }),
+      { numRuns: 400 },
+    );
+  });
+});
+
+describe("converters (loop-speed forms)", () => {
+  const systems = [SI, CGS] as const;
+  test("property: converter / reader agree bit-for-bit with of / valueIn, every unit, both systems", () => {
+    fc.assert(
+      fc.property(someDouble, fc.constantFrom(...allUnits), fc.constantFrom(...systems), (v, u, sys) => {
+        expect(Object.is(sys.converter(u)(v), sys.of(v, u))).toBe(true);
+        expect(Object.is(sys.reader(u)(v as never), sys.valueIn(v as never, u))).toBe(true);
+      }),
+      { numRuns: 500 },
+    );
+  });
+  test("property: converterFrom agrees bit-for-bit with from, every kind, both directions", () => {
+    const kindList = Object.values(kinds);
+    fc.assert(
+      fc.property(someDouble, fc.constantFrom(...kindList), (v, kind) => {
+        expect(Object.is(CGS.converterFrom(kind as never)(v as never), CGS.from(v as never, kind as never))).toBe(true);
+        expect(Object.is(SI.converterFrom(kind as never)(v as never), SI.from(v as never, kind as never))).toBe(true);
+      }),
+      { numRuns: 300 },
+    );
+  });
+  test("property: arrayOf / arrayIn agree element by element with of / valueIn (typed and plain arrays)", () => {
+    fc.assert(
+      fc.property(fc.array(someDouble, { maxLength: 20 }), fc.constantFrom(...allUnits), fc.constantFrom(...systems), (xs, u, sys) => {
+        const typed = Float64Array.from(xs);
+        const fromPlain = sys.arrayOf(xs, u);
+        const fromTyped = sys.arrayOf(typed, u);
+        const back = sys.arrayIn(typed as never, u);
+        expect(fromPlain.length).toBe(xs.length);
+        expect(back.length).toBe(xs.length);
+        xs.forEach((x, i) => {
+          expect(Object.is(fromPlain[i], sys.of(x, u))).toBe(true);
+          expect(Object.is(fromTyped[i], sys.of(x, u))).toBe(true);
+          expect(Object.is(back[i], sys.valueIn(x as never, u))).toBe(true);
+        });
+      }),
+      { numRuns: 300 },
+    );
+  });
+  test("property: reader(u)(converter(u)(x)) ≈ x within 2 ulp for every unit, both systems", () => {
+    fc.assert(
+      fc.property(magnitude, fc.constantFrom(...allUnits), fc.constantFrom(...systems), (x, u, sys) => {
+        const read = sys.reader(u) as (q: number) => number;
+        return rel(read(sys.converter(u)(x)), x) <= 2 * ULP;
+      }),
+      { numRuns: 500 },
+    );
+  });
+  test("worked values: nm → Å, W → erg s⁻¹, m → cm", () => {
+    expect(CGS.reader(units.angstrom)(CGS.converter(units.nm)(656.28))).toBe(6562.8);
+    expect(CGS.converter(units.W)(1) as number).toBe(1e7);
+    expect(CGS.converterFrom(kinds.power)(SI.of(1, units.Lsol)) as number).toBe(3.828e33);
+    expect(SI.converterFrom(kinds.length)(CGS.of(1, units.m)) as number).toBe(1);
+    expect(SI.converterFrom(kinds.wavenumber)(CGS.of(1, units.per_cm)) as number).toBe(100);
+  });
+  test("a converter is decided once: the same function for every call, none for kinds beyond the table", () => {
+    expect(SI.converter(units.nm)).toBe(SI.converter(units.nm));
+    expect(CGS.converterFrom(kinds.power)).toBe(CGS.converterFrom(units.W));
+  });
+  test("unit objects carry no enumerable scale fields", () => {
+    expect(Object.keys(units.nm).sort()).toEqual(["dimension", "exp10", "factor", "mantissa", "name", "prefixable", "symbol"]);
   });
 });

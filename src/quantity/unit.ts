@@ -1,7 +1,11 @@
 /**
  * Units: named scales of a dimension. A unit knows its dimension and its size
  * in SI base units, stored as `mantissa × 10^exp10` so that decimal units
- * (cm, nm, erg, Jy, …) convert with one correctly rounded operation.
+ * (cm, nm, Å, km, erg, …) convert with one correctly rounded operation: a
+ * multiplication or division by an exact power of ten, chosen once when the
+ * unit is defined, for each system. (A power beyond 10^±22 is not a double:
+ * such a unit, like the jansky at 10⁻²⁶ W m⁻² Hz⁻¹, converts by its correctly
+ * rounded size, as units such as the parsec do.)
  *
  * @module
  */
@@ -16,6 +20,7 @@ import {
   type Dimension,
   type PowerExponent,
 } from "./dimension";
+import { factorScaling, inCGS, inSI, pow10Scaling, type Scaling } from "./converter";
 
 /**
  * A unit of dimension `D`.
@@ -43,32 +48,22 @@ export interface Unit<D extends Dimension = Dimension> {
   /** Whether SI prefixes may be attached to the symbol when parsing (`k`, `M`, `µ`, …). */
   readonly prefixable: boolean;
   /**
-   * Precomputed scales (internal): one unit in the SI and in the CGS coherent
-   * unit of its dimension, as a power-of-ten shift (the exact path, used when
-   * the mantissa is 1) and as a correctly rounded factor.
+   * How a value in this unit becomes a value in SI base units and back,
+   * decided when the unit is defined (see `converter.ts`).
    * @internal
    */
-  readonly scales: UnitScales;
-}
-
-/**
- * Precomputed scales of a unit in each system (internal). A value `v` in the
- * unit is `(v * mul) / div` in the system's coherent unit. For a pure power of
- * ten one of the two is 1 and the other an exact power of ten (≤ 10^22), so
- * the conversion is a single correctly rounded operation; otherwise `mul` is
- * the correctly rounded factor and `div` is 1. Branch-free either way.
- * @internal
- */
-export interface UnitScales {
-  readonly mulSI: number;
-  readonly divSI: number;
-  readonly mulCGS: number;
-  readonly divCGS: number;
+  readonly [inSI]: Scaling;
+  /**
+   * How a value in this unit becomes a value in CGS base units and back.
+   * @internal
+   */
+  readonly [inCGS]: Scaling;
 }
 
 // MUL[n + 22] / DIV[n + 22] = 10^n for |n| ≤ 22, one of the two being 1 and
-// the other an exact power of ten, so that times10 is one correctly rounded,
-// branch-free operation.
+// the other an exact power of ten, so that times10 is one correctly rounded
+// operation. (Units and systems use the ready converters of converter.ts;
+// times10 serves code that computes n at run time.)
 const MUL = new Float64Array(45);
 const DIV = new Float64Array(45);
 for (let n = -22; n <= 22; n++) {
@@ -93,13 +88,13 @@ export function times10(v: number, n: number): number {
   return v * Number(`1e${n}`);
 }
 
-/** `[mul, div]` with `mantissa × 10^exp = mul / div`, one of them 1 (see {@link UnitScales}). */
-function mulDiv(mantissa: number, exp: number): [number, number] {
-  if (mantissa === 1 && exp >= -22 && exp <= 22) {
-    const p = Number(`1e${Math.abs(exp)}`);
-    return exp >= 0 ? [p, 1] : [1, p];
-  }
-  return [decimalScale(mantissa, exp), 1];
+/**
+ * The exponent k when `mantissa` is exactly 10^k in its shortest decimal form
+ * (1, 1000, 0.001 …), else undefined.
+ */
+function decimalPowerOf(mantissa: number): number | undefined {
+  const m = /^1e([+-]\d+)$/.exec(mantissa.toExponential());
+  return m === null ? undefined : Number(m[1]);
 }
 
 /** `mantissa × 10^exp`, correctly rounded from the mantissa's shortest decimal form. */
@@ -115,7 +110,12 @@ export function decimalScale(mantissa: number, exp: number): number {
 
 /**
  * Define a unit. `mantissa × 10^exp10` is the size of one unit in SI base
- * units (m, kg, s, K, mol, rad, sr).
+ * units (m, kg, s, K, mol, rad, sr). How the unit converts in each system
+ * is decided here, once: when the size is 10ⁿ (a mantissa that is itself a
+ * power of ten, such as 1 or 0.001, is folded into n) and |n| ≤ 22, by one
+ * multiplication or division by the exact double 10^|n|; otherwise by
+ * multiplying by the correctly rounded size (and dividing by it to read
+ * values back).
  *
  * @example
  * ```ts
@@ -135,10 +135,24 @@ export function defineUnit<D extends Dimension>(
     throw new RangeError(`unit ${symbol}: mantissa must be a finite number > 0; got ${mantissa}`);
   }
   const cgsShift = exp10 + 2 * dimension.length + 3 * dimension.mass;
-  const [mulSI, divSI] = mulDiv(mantissa, exp10);
-  const [mulCGS, divCGS] = mulDiv(mantissa, cgsShift);
-  const scales: UnitScales = { mulSI, divSI, mulCGS, divCGS };
-  return Object.freeze({ symbol, name, dimension, mantissa, exp10, factor: decimalScale(mantissa, exp10), prefixable, scales: Object.freeze(scales) });
+  // Decided once: a decimal unit (a power of ten, once the mantissa's own
+  // power of ten is folded in) converts by one multiplication or division by
+  // an exact power of ten; any other unit by its correctly rounded factor.
+  const k = decimalPowerOf(mantissa);
+  const si = k !== undefined ? pow10Scaling(k + exp10) : factorScaling(decimalScale(mantissa, exp10));
+  const cgs = k !== undefined ? pow10Scaling(k + cgsShift) : factorScaling(decimalScale(mantissa, cgsShift));
+  const unit: Unit<D> = {
+    symbol,
+    name,
+    dimension,
+    mantissa,
+    exp10,
+    factor: decimalScale(mantissa, exp10),
+    prefixable,
+    [inSI]: si,
+    [inCGS]: cgs,
+  };
+  return Object.freeze(unit);
 }
 
 /** An SI prefix. */
