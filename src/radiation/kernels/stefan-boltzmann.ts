@@ -43,10 +43,9 @@ const SQRT_4PI_SIGMA = Math.sqrt(FOUR_PI * SIGMA);
 const QRT_SIGMA = Math.sqrt(Math.sqrt(SIGMA));
 const NORMAL_MIN = 2.2250738585072014e-308;
 
-/** A core's value, or the overflow RangeError of the checked kernels when it is +Infinity. */
-function finiteOr(v: number, what: string, args: string): number {
-  if (v === Infinity) throw new RangeError(`${what} overflows the double range for ${args}`);
-  return v;
+/** The checked kernels' RangeError for a true result beyond the double range. */
+function overflow(what: string, args: string): RangeError {
+  return new RangeError(`${what} overflows the double range for ${args}`);
 }
 
 function normal(v: number): boolean {
@@ -118,7 +117,9 @@ export function photonEmissionRateUnchecked(radiusM: number, temperatureK: numbe
  */
 export function stefanBoltzmannExitanceSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finiteOr(stefanBoltzmannExitanceUnchecked(temperatureK), "exitance σT⁴", `temperature=${temperatureK} K`);
+  const v = stefanBoltzmannExitanceUnchecked(temperatureK);
+  if (v === Infinity) throw overflow("exitance σT⁴", `temperature=${temperatureK} K`);
+  return v;
 }
 
 /**
@@ -153,11 +154,9 @@ export function temperatureFromExitanceSI(exitanceWm2: number): number {
 export function luminosityFromRadiusTemperatureSI(radiusM: number, temperatureK: number): number {
   requirePositive("radius", radiusM, "m");
   requirePositive("temperature", temperatureK, "K");
-  return finiteOr(
-    luminosityFromRadiusTemperatureUnchecked(radiusM, temperatureK),
-    "luminosity 4πR²σT⁴",
-    `radius=${radiusM} m, temperature=${temperatureK} K`,
-  );
+  const v = luminosityFromRadiusTemperatureUnchecked(radiusM, temperatureK);
+  if (v === Infinity) throw overflow("luminosity 4πR²σT⁴", `radius=${radiusM} m, temperature=${temperatureK} K`);
+  return v;
 }
 
 /**
@@ -176,11 +175,9 @@ export function luminosityFromRadiusTemperatureSI(radiusM: number, temperatureK:
 export function radiusFromLuminosityTemperatureSI(luminosityW: number, temperatureK: number): number {
   requirePositive("luminosity", luminosityW, "W");
   requirePositive("temperature", temperatureK, "K");
-  return finiteOr(
-    radiusFromLuminosityTemperatureUnchecked(luminosityW, temperatureK),
-    "radius",
-    `luminosity=${luminosityW} W, temperature=${temperatureK} K`,
-  );
+  const v = radiusFromLuminosityTemperatureUnchecked(luminosityW, temperatureK);
+  if (v === Infinity) throw overflow("radius", `luminosity=${luminosityW} W, temperature=${temperatureK} K`);
+  return v;
 }
 
 /**
@@ -218,7 +215,9 @@ export function temperatureFromLuminosityRadiusSI(luminosityW: number, radiusM: 
  */
 export function photonExitanceSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finiteOr(photonExitanceUnchecked(temperatureK), "photon exitance", `temperature=${temperatureK} K`);
+  const v = photonExitanceUnchecked(temperatureK);
+  if (v === Infinity) throw overflow("photon exitance", `temperature=${temperatureK} K`);
+  return v;
 }
 
 /**
@@ -236,9 +235,7 @@ export function photonExitanceSI(temperatureK: number): number {
 export function photonEmissionRateSI(radiusM: number, temperatureK: number): number {
   requirePositive("radius", radiusM, "m");
   requirePositive("temperature", temperatureK, "K");
-  return finiteOr(
-    photonEmissionRateUnchecked(radiusM, temperatureK),
-    "photon emission rate",
-    `radius=${radiusM} m, temperature=${temperatureK} K`,
-  );
+  const v = photonEmissionRateUnchecked(radiusM, temperatureK);
+  if (v === Infinity) throw overflow("photon emission rate", `radius=${radiusM} m, temperature=${temperatureK} K`);
+  return v;
 }

@@ -143,9 +143,10 @@ export function temperatureFromPhotonPeakWavenumberUnchecked(peakWavenumberPerM:
   return peakWavenumberPerM / WIEN_B_PHOTON_WAVENUMBER;
 }
 
-function finite(v: number, what: string, arg: string): number {
+/** `v`, or the checked kernels' RangeError when it left the double range (the message is built only then). */
+function finite(v: number, what: string, name: string, value: number, unit: string): number {
   if (v === Infinity || v === 0) {
-    throw new RangeError(`${what} is outside the double range for ${arg}`);
+    throw new RangeError(`${what} is outside the double range for ${name}=${value} ${unit}`);
   }
   return v;
 }
@@ -164,7 +165,7 @@ function finite(v: number, what: string, arg: string): number {
  */
 export function wienPeakWavelengthSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(wienPeakWavelengthUnchecked(temperatureK), "peak wavelength", `temperature=${temperatureK} K`);
+  return finite(wienPeakWavelengthUnchecked(temperatureK), "peak wavelength", "temperature", temperatureK, "K");
 }
 
 /**
@@ -182,7 +183,7 @@ export function wienPeakWavelengthSI(temperatureK: number): number {
  */
 export function wienPeakFrequencySI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(wienPeakFrequencyUnchecked(temperatureK), "peak frequency", `temperature=${temperatureK} K`);
+  return finite(wienPeakFrequencyUnchecked(temperatureK), "peak frequency", "temperature", temperatureK, "K");
 }
 
 /**
@@ -200,7 +201,7 @@ export function wienPeakFrequencySI(temperatureK: number): number {
  */
 export function wienPeakWavenumberSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(wienPeakWavenumberUnchecked(temperatureK), "peak wavenumber", `temperature=${temperatureK} K`);
+  return finite(wienPeakWavenumberUnchecked(temperatureK), "peak wavenumber", "temperature", temperatureK, "K");
 }
 
 /**
@@ -217,7 +218,7 @@ export function wienPeakWavenumberSI(temperatureK: number): number {
  */
 export function wienPhotonPeakWavelengthSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(wienPhotonPeakWavelengthUnchecked(temperatureK), "photon peak wavelength", `temperature=${temperatureK} K`);
+  return finite(wienPhotonPeakWavelengthUnchecked(temperatureK), "photon peak wavelength", "temperature", temperatureK, "K");
 }
 
 /**
@@ -234,7 +235,7 @@ export function wienPhotonPeakWavelengthSI(temperatureK: number): number {
  */
 export function wienPhotonPeakFrequencySI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(wienPhotonPeakFrequencyUnchecked(temperatureK), "photon peak frequency", `temperature=${temperatureK} K`);
+  return finite(wienPhotonPeakFrequencyUnchecked(temperatureK), "photon peak frequency", "temperature", temperatureK, "K");
 }
 
 /**
@@ -251,7 +252,7 @@ export function wienPhotonPeakFrequencySI(temperatureK: number): number {
  */
 export function wienPhotonPeakWavenumberSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(wienPhotonPeakWavenumberUnchecked(temperatureK), "photon peak wavenumber", `temperature=${temperatureK} K`);
+  return finite(wienPhotonPeakWavenumberUnchecked(temperatureK), "photon peak wavenumber", "temperature", temperatureK, "K");
 }
 
 /**
@@ -268,7 +269,7 @@ export function wienPhotonPeakWavenumberSI(temperatureK: number): number {
  */
 export function temperatureFromPeakWavelengthSI(peakWavelengthM: number): number {
   requirePositive("peakWavelength", peakWavelengthM, "m");
-  return finite(temperatureFromPeakWavelengthUnchecked(peakWavelengthM), "temperature", `peakWavelength=${peakWavelengthM} m`);
+  return finite(temperatureFromPeakWavelengthUnchecked(peakWavelengthM), "temperature", "peakWavelength", peakWavelengthM, "m");
 }
 
 /**
@@ -285,7 +286,7 @@ export function temperatureFromPeakWavelengthSI(peakWavelengthM: number): number
  */
 export function temperatureFromPeakFrequencySI(peakFrequencyHz: number): number {
   requirePositive("peakFrequency", peakFrequencyHz, "Hz");
-  return finite(temperatureFromPeakFrequencyUnchecked(peakFrequencyHz), "temperature", `peakFrequency=${peakFrequencyHz} Hz`);
+  return finite(temperatureFromPeakFrequencyUnchecked(peakFrequencyHz), "temperature", "peakFrequency", peakFrequencyHz, "Hz");
 }
 
 /**
@@ -302,7 +303,7 @@ export function temperatureFromPeakFrequencySI(peakFrequencyHz: number): number 
  */
 export function temperatureFromPeakWavenumberSI(peakWavenumberPerM: number): number {
   requirePositive("peakWavenumber", peakWavenumberPerM, "m^-1");
-  return finite(temperatureFromPeakWavenumberUnchecked(peakWavenumberPerM), "temperature", `peakWavenumber=${peakWavenumberPerM} m^-1`);
+  return finite(temperatureFromPeakWavenumberUnchecked(peakWavenumberPerM), "temperature", "peakWavenumber", peakWavenumberPerM, "m^-1");
 }
 
 /**
@@ -318,7 +319,7 @@ export function temperatureFromPeakWavenumberSI(peakWavenumberPerM: number): num
  */
 export function temperatureFromPhotonPeakWavelengthSI(peakWavelengthM: number): number {
   requirePositive("peakWavelength", peakWavelengthM, "m");
-  return finite(temperatureFromPhotonPeakWavelengthUnchecked(peakWavelengthM), "temperature", `peakWavelength=${peakWavelengthM} m`);
+  return finite(temperatureFromPhotonPeakWavelengthUnchecked(peakWavelengthM), "temperature", "peakWavelength", peakWavelengthM, "m");
 }
 
 /**
@@ -334,7 +335,7 @@ export function temperatureFromPhotonPeakWavelengthSI(peakWavelengthM: number): 
  */
 export function temperatureFromPhotonPeakFrequencySI(peakFrequencyHz: number): number {
   requirePositive("peakFrequency", peakFrequencyHz, "Hz");
-  return finite(temperatureFromPhotonPeakFrequencyUnchecked(peakFrequencyHz), "temperature", `peakFrequency=${peakFrequencyHz} Hz`);
+  return finite(temperatureFromPhotonPeakFrequencyUnchecked(peakFrequencyHz), "temperature", "peakFrequency", peakFrequencyHz, "Hz");
 }
 
 /**
@@ -350,9 +351,5 @@ export function temperatureFromPhotonPeakFrequencySI(peakFrequencyHz: number): n
  */
 export function temperatureFromPhotonPeakWavenumberSI(peakWavenumberPerM: number): number {
   requirePositive("peakWavenumber", peakWavenumberPerM, "m^-1");
-  return finite(
-    temperatureFromPhotonPeakWavenumberUnchecked(peakWavenumberPerM),
-    "temperature",
-    `peakWavenumber=${peakWavenumberPerM} m^-1`,
-  );
+  return finite(temperatureFromPhotonPeakWavenumberUnchecked(peakWavenumberPerM), "temperature", "peakWavenumber", peakWavenumberPerM, "m^-1");
 }
