@@ -126,7 +126,11 @@ describe("invalid curves: RangeError naming the field, the index and the caller'
     );
     // 1e-322 and 1.5e-322 cm are distinct subnormals but both round to 0 m
     expect(() => bandMeanRadiance(CGS, { wavelengths: grid([1e-322, 1.5e-322]), response: [1, 1] }, T(300))).toThrow(
-      /curve.wavelengths\[0\] = 1e-322 cm is outside the double range, or not distinct from its neighbour, once converted to m/,
+      "curve.wavelengths[0] = 1e-322 cm is outside the double range once converted to SI (0 m)",
+    );
+    // 3e-322 and 3.5e-322 cm are distinct and > 0, but both round to the smallest subnormal, 5e-324 m
+    expect(() => bandMeanRadiance(CGS, { wavelengths: grid([3e-322, 3.5e-322]), response: [1, 1] }, T(300))).toThrow(
+      "curve.wavelengths[1] = 3.5e-322 cm is not distinct from curve.wavelengths[0] once converted to SI (both 5e-324 m)",
     );
   });
 });
