@@ -101,6 +101,19 @@ describe("band-mean radiance through a typed response curve", () => {
   });
 });
 
+describe("a band mean beyond the double range in CGS only", () => {
+  it("names the temperature and the CGS unit of the result", () => {
+    // Rayleigh–Jeans side at λ ≈ 1e-12 m: B_λ ≈ 2ckT/λ⁴ ≈ 5e307 W m⁻² sr⁻¹ m⁻¹ (finite); ×10 into CGS overflows.
+    const t = 5e307 / ((2 * 299792458 * 1.380649e-23) / 1e-48);
+    const grid = (xs: number[]) => assumeArray<LengthArray<"CGS">>(new Float64Array(xs));
+    const curveSI = { wavelengths: assumeArray<LengthArray<"SI">>(new Float64Array([1e-12, 1.001e-12])), response: [1, 1] };
+    expect(Number.isFinite(bandMeanRadiance(SI, curveSI, T(t)))).toBe(true);
+    expect(() => bandMeanRadiance(CGS, { wavelengths: grid([1e-10, 1.001e-10]), response: [1, 1] }, T(t))).toThrow(
+      `the band-mean radiance overflows the double range in cm^-1 g s^-3 sr^-1 for temperature=${String(t)} K`,
+    );
+  });
+});
+
 describe("invalid curves: RangeError naming the field, the index and the caller's unit", () => {
   const grid = (xs: number[]) => assumeArray<LengthArray<"CGS">>(new Float64Array(xs));
   it("CGS curves are reported in cm", () => {
