@@ -28,7 +28,6 @@ import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type {
   Frequency,
-  Length,
   SpectralPhotonRadiancePerFrequency,
   SpectralPhotonRadiancePerWavelength,
   SpectralPhotonRadiancePerWavenumber,
