@@ -20,35 +20,73 @@
  * @module
  */
 import type { NotAirWavelength } from "../quantity/medium";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type {
   Dimensionless,
   Frequency,
-  Length,
   SpectralRadiancePerFrequency,
   SpectralRadiancePerWavelength,
   Temperature,
 } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import {
-  rayleighJeansRadianceFrequencySI,
-  rayleighJeansRadianceWavelengthSI,
-  rayleighJeansRelativeErrorFrequencySI,
-  rayleighJeansRelativeErrorWavelengthSI,
-  wienRadianceFrequencySI,
-  wienRadianceWavelengthSI,
-  wienRelativeErrorFrequencySI,
-  wienRelativeErrorWavelengthSI,
-} from "./kernels/approximations";
-import { eval2 } from "./internal";
+import { rayleighJeansRelativeErrorUnchecked, wienRelativeErrorUnchecked } from "./kernels/approximations";
+import { FORM_LAMBDA_ENERGY, FORM_NU_ENERGY, SHAPE_RJ, SHAPE_WIEN, spectralCore } from "./kernels/planck-core";
 
-const L = kinds.length.dimension;
-const F = kinds.frequency.dimension;
-const T = kinds.temperature.dimension;
-const ONE = kinds.dimensionless.dimension;
-const BL = kinds.spectralRadiancePerWavelength.dimension;
-const BN = kinds.spectralRadiancePerFrequency.dimension;
+const wavelength = lawInput("wavelength", kinds.length, { vacuum: true });
+const frequency = lawInput("frequency", kinds.frequency);
+const temperature = lawInput("temperature", kinds.temperature);
+
+const rjLambda = defineLaw({
+  name: "Rayleigh–Jeans B_λ",
+  inputs: [wavelength, temperature],
+  result: kinds.spectralRadiancePerWavelength,
+  kernel: (l, t) => spectralCore(SHAPE_RJ, FORM_LAMBDA_ENERGY, l, t),
+});
+const rjNu = defineLaw({
+  name: "Rayleigh–Jeans B_ν",
+  inputs: [frequency, temperature],
+  result: kinds.spectralRadiancePerFrequency,
+  kernel: (f, t) => spectralCore(SHAPE_RJ, FORM_NU_ENERGY, f, t),
+});
+const wienLambda = defineLaw({
+  name: "Wien B_λ",
+  inputs: [wavelength, temperature],
+  result: kinds.spectralRadiancePerWavelength,
+  kernel: (l, t) => spectralCore(SHAPE_WIEN, FORM_LAMBDA_ENERGY, l, t),
+});
+const wienNu = defineLaw({
+  name: "Wien B_ν",
+  inputs: [frequency, temperature],
+  result: kinds.spectralRadiancePerFrequency,
+  kernel: (f, t) => spectralCore(SHAPE_WIEN, FORM_NU_ENERGY, f, t),
+});
+const rjErrorLambda = defineLaw({
+  name: "the Rayleigh–Jeans relative error",
+  inputs: [wavelength, temperature],
+  result: kinds.dimensionless,
+  kernel: (l, t) => rayleighJeansRelativeErrorUnchecked(FORM_LAMBDA_ENERGY, l, t),
+});
+const rjErrorNu = defineLaw({
+  name: "the Rayleigh–Jeans relative error",
+  inputs: [frequency, temperature],
+  result: kinds.dimensionless,
+  kernel: (f, t) => rayleighJeansRelativeErrorUnchecked(FORM_NU_ENERGY, f, t),
+});
+const wienErrorLambda = defineLaw({
+  name: "the Wien relative error",
+  inputs: [wavelength, temperature],
+  result: kinds.dimensionless,
+  kernel: (l, t) => wienRelativeErrorUnchecked(FORM_LAMBDA_ENERGY, l, t),
+});
+const wienErrorNu = defineLaw({
+  name: "the Wien relative error",
+  inputs: [frequency, temperature],
+  result: kinds.dimensionless,
+  kernel: (f, t) => wienRelativeErrorUnchecked(FORM_NU_ENERGY, f, t),
+});
 
 /**
  * Rayleigh–Jeans spectral radiance per unit wavelength, B_λ ≈ 2ckT/λ⁴.
@@ -68,7 +106,7 @@ export function rayleighJeansRadianceWavelength<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralRadiancePerWavelength<S> {
-  return eval2(sys, rayleighJeansRadianceWavelengthSI, "Rayleigh–Jeans B_λ", BL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralRadiancePerWavelength<S>;
+  return rjLambda(sys, wavelength, temperature);
 }
 
 /**
@@ -89,7 +127,7 @@ export function rayleighJeansRadianceFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): SpectralRadiancePerFrequency<S> {
-  return eval2(sys, rayleighJeansRadianceFrequencySI, "Rayleigh–Jeans B_ν", BN, "frequency", frequency, F, "temperature", temperature, T) as SpectralRadiancePerFrequency<S>;
+  return rjNu(sys, frequency, temperature);
 }
 
 /**
@@ -111,7 +149,7 @@ export function wienRadianceWavelength<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): SpectralRadiancePerWavelength<S> {
-  return eval2(sys, wienRadianceWavelengthSI, "Wien B_λ", BL, "wavelength", wavelength, L, "temperature", temperature, T) as SpectralRadiancePerWavelength<S>;
+  return wienLambda(sys, wavelength, temperature);
 }
 
 /**
@@ -132,7 +170,7 @@ export function wienRadianceFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): SpectralRadiancePerFrequency<S> {
-  return eval2(sys, wienRadianceFrequencySI, "Wien B_ν", BN, "frequency", frequency, F, "temperature", temperature, T) as SpectralRadiancePerFrequency<S>;
+  return wienNu(sys, frequency, temperature);
 }
 
 /**
@@ -156,7 +194,7 @@ export function rayleighJeansRelativeErrorWavelength<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, rayleighJeansRelativeErrorWavelengthSI, "the Rayleigh–Jeans relative error", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;
+  return rjErrorLambda(sys, wavelength, temperature);
 }
 
 /**
@@ -178,7 +216,7 @@ export function rayleighJeansRelativeErrorFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, rayleighJeansRelativeErrorFrequencySI, "the Rayleigh–Jeans relative error", ONE, "frequency", frequency, F, "temperature", temperature, T) as Dimensionless;
+  return rjErrorNu(sys, frequency, temperature);
 }
 
 /**
@@ -201,7 +239,7 @@ export function wienRelativeErrorWavelength<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, wienRelativeErrorWavelengthSI, "the Wien relative error", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;
+  return wienErrorLambda(sys, wavelength, temperature);
 }
 
 /**
@@ -223,5 +261,5 @@ export function wienRelativeErrorFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, wienRelativeErrorFrequencySI, "the Wien relative error", ONE, "frequency", frequency, F, "temperature", temperature, T) as Dimensionless;
+  return wienErrorNu(sys, frequency, temperature);
 }

@@ -168,6 +168,19 @@ describe("errors name the caller's unit", () => {
     expect(() => bandRadianceWavelength(CGS, cm(1), cm(v), T(5772))).toThrow(/^wavelength2 must be a finite number > 0 cm; got/);
     expect(() => bandPhotonRadianceWavelength(CGS, cm(1), cm(2), T(v))).toThrow(/^temperature must be a finite number > 0 K; got/);
   });
+  it("a band radiance finite in W m⁻² sr⁻¹ but beyond the double range in erg s⁻¹ cm⁻² sr⁻¹ names the CGS arguments", () => {
+    // T = 2e78 K: σT⁴ ≈ 9.1e305 W m⁻², so ∫B_λ dλ over a band holding all of it (x from ≈ 144 down to ≈ 1e-10) is
+    // ≈ 2.9e305 W m⁻² sr⁻¹, finite; ×10³ into CGS overflows.
+    expect(Number.isFinite(bandRadianceWavelength(SI, m(5e-83), m(5e-71), T(2e78)))).toBe(true);
+    expect(() => bandRadianceWavelength(CGS, cm(5e-81), cm(5e-69), T(2e78))).toThrow(
+      "the band radiance overflows the double range in g s^-3 sr^-1 for wavelength1=5e-81 cm, wavelength2=5e-69 cm, temperature=2e+78 K",
+    );
+  });
+  it("reversed edges are reported after each edge's own check, as the scalar checks run", () => {
+    expect(() => bandRadianceWavelength(CGS, cm(Infinity), cm(1), T(5772))).toThrow("wavelength1 must be a finite number > 0 cm; got Infinity");
+    expect(() => bandRadianceWavelength(CGS, cm(2), cm(1), T(-1))).toThrow("temperature must be a finite number > 0 K; got -1");
+    expect(() => bandPhotonRadianceWavelength(SI, m(2e-6), m(1e-6), T(5772))).toThrow("wavelength2 must be >= wavelength1 (0.000002 m); got 0.000001");
+  });
   it("reversed band edges name both in the caller's unit", () => {
     expect(() => blackbodyFractionBetweenWavelengths(CGS, cm(2e-4), cm(1e-4), T(5772))).toThrow(
       "wavelength2 must be >= wavelength1 (0.0002 cm); got 0.0001",

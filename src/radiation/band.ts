@@ -28,32 +28,126 @@
  */
 import type { NotAirWavelength } from "../quantity/medium";
 import { C } from "../constants/values";
+import { show } from "../internal/checks";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
-import type { Dimensionless, Frequency, Length, PhotonRadiance, Radiance, Temperature } from "../quantity/aliases";
+import type { Dimensionless, Frequency, PhotonRadiance, Radiance, Temperature } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
 import {
-  bandPhotonRadianceWavelengthSI,
-  bandRadianceWavelengthSI,
-  blackbodyFractionAboveFrequencySI,
-  blackbodyFractionAboveWavelengthSI,
-  blackbodyFractionBelowFrequencySI,
-  blackbodyFractionBelowWavelengthSI,
-  blackbodyFractionBetweenWavelengthsSI,
-  blackbodyPhotonFractionAboveFrequencySI,
-  blackbodyPhotonFractionAboveWavelengthSI,
-  blackbodyPhotonFractionBelowWavelengthSI,
-  blackbodyPhotonFractionBetweenWavelengthsSI,
+  bandPhotonRadianceWavelengthUnchecked,
+  bandRadianceWavelengthUnchecked,
+  fractionAboveFrequencyUnchecked,
+  fractionAboveWavelengthUnchecked,
+  fractionBelowFrequencyUnchecked,
+  fractionBelowWavelengthUnchecked,
+  fractionBetweenWavelengthsUnchecked,
 } from "./kernels/band-fraction";
-import { eval2, kernelError, overflowIn, positiveSI, type Arg } from "./internal";
-import { fromSI } from "../internal/typed";
 
-const L = kinds.length.dimension;
-const F = kinds.frequency.dimension;
-const T = kinds.temperature.dimension;
-const ONE = kinds.dimensionless.dimension;
-const R = kinds.radiance.dimension;
-const NR = kinds.photonRadiance.dimension;
+const wavelength = lawInput("wavelength", kinds.length, { vacuum: true });
+const wavelength1 = lawInput("wavelength1", kinds.length, { vacuum: true });
+const wavelength2 = lawInput("wavelength2", kinds.length, { vacuum: true });
+const frequency = lawInput("frequency", kinds.frequency);
+const temperature = lawInput("temperature", kinds.temperature);
+
+const FRACTION = "the band fraction";
+const PHOTON_FRACTION = "the photon band fraction";
+
+const belowWavelength = defineLaw({
+  name: FRACTION,
+  inputs: [wavelength, temperature],
+  result: kinds.dimensionless,
+  kernel: (l, t) => fractionBelowWavelengthUnchecked(3, l, t),
+});
+const aboveWavelength = defineLaw({
+  name: FRACTION,
+  inputs: [wavelength, temperature],
+  result: kinds.dimensionless,
+  kernel: (l, t) => fractionAboveWavelengthUnchecked(3, l, t),
+});
+const betweenWavelengths = defineLaw({
+  name: FRACTION,
+  inputs: [wavelength1, wavelength2, temperature],
+  result: kinds.dimensionless,
+  kernel: (l1, l2, t) => fractionBetweenWavelengthsUnchecked(3, l1, l2, t),
+});
+const aboveFrequency = defineLaw({
+  name: FRACTION,
+  inputs: [frequency, temperature],
+  result: kinds.dimensionless,
+  kernel: (f, t) => fractionAboveFrequencyUnchecked(3, f, t),
+});
+const belowFrequency = defineLaw({
+  name: FRACTION,
+  inputs: [frequency, temperature],
+  result: kinds.dimensionless,
+  kernel: (f, t) => fractionBelowFrequencyUnchecked(3, f, t),
+});
+const photonBelowWavelength = defineLaw({
+  name: PHOTON_FRACTION,
+  inputs: [wavelength, temperature],
+  result: kinds.dimensionless,
+  kernel: (l, t) => fractionBelowWavelengthUnchecked(2, l, t),
+});
+const photonAboveWavelength = defineLaw({
+  name: PHOTON_FRACTION,
+  inputs: [wavelength, temperature],
+  result: kinds.dimensionless,
+  kernel: (l, t) => fractionAboveWavelengthUnchecked(2, l, t),
+});
+const photonBetweenWavelengths = defineLaw({
+  name: PHOTON_FRACTION,
+  inputs: [wavelength1, wavelength2, temperature],
+  result: kinds.dimensionless,
+  kernel: (l1, l2, t) => fractionBetweenWavelengthsUnchecked(2, l1, l2, t),
+});
+const photonAboveFrequency = defineLaw({
+  name: PHOTON_FRACTION,
+  inputs: [frequency, temperature],
+  result: kinds.dimensionless,
+  kernel: (f, t) => fractionAboveFrequencyUnchecked(2, f, t),
+});
+const photonBelowFrequency = defineLaw({
+  name: PHOTON_FRACTION,
+  inputs: [frequency, temperature],
+  result: kinds.dimensionless,
+  kernel: photonFractionBelowFrequencyUnchecked,
+});
+const bandRadiance = defineLaw({
+  name: "the band radiance",
+  inputs: [wavelength1, wavelength2, temperature],
+  result: kinds.radiance,
+  kernel: bandRadianceWavelengthUnchecked,
+});
+const bandPhotonRadiance = defineLaw({
+  name: "the band photon radiance",
+  inputs: [wavelength1, wavelength2, temperature],
+  result: kinds.photonRadiance,
+  kernel: bandPhotonRadianceWavelengthUnchecked,
+});
+
+/** Photon fraction below ν, as the photon fraction above λ = c/ν (SI core, no checks). */
+function photonFractionBelowFrequencyUnchecked(frequencyHz: number, temperatureK: number): number {
+  const lambda = C / frequencyHz;
+  // c/ν overflows only for ν < c/MAX ≈ 1.7e-300 Hz, where x = hν/kT underflows for every
+  // finite T and the fraction (≈ x²/(4ζ(3))) is 0 to double precision.
+  if (lambda === Infinity) return 0;
+  return fractionAboveWavelengthUnchecked(2, lambda, temperatureK);
+}
+
+/**
+ * The RangeError for band edges given in the wrong order (λ₂ < λ₁ in the
+ * caller's unit). Each input is checked first, so a value that is invalid on
+ * its own is reported as such, as the law would.
+ */
+function reversedBand(sys: UnitSystem<SystemName>, l1: number, l2: number, t: number): never {
+  wavelength1.toSI(sys, l1);
+  wavelength2.toSI(sys, l2);
+  temperature.toSI(sys, t);
+  const unit = sys.coherentUnit(kinds.length.dimension);
+  throw new RangeError(`wavelength2 must be >= wavelength1 (${show(l1)} ${unit}); got ${show(l2)}`);
+}
 
 /**
  * Fraction of a blackbody's exitance emitted at wavelengths below λ,
@@ -76,7 +170,7 @@ export function blackbodyFractionBelowWavelength<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, blackbodyFractionBelowWavelengthSI, "the band fraction", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;
+  return belowWavelength(sys, wavelength, temperature);
 }
 
 /**
@@ -99,7 +193,7 @@ export function blackbodyFractionAboveWavelength<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, blackbodyFractionAboveWavelengthSI, "the band fraction", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;
+  return aboveWavelength(sys, wavelength, temperature);
 }
 
 /**
@@ -124,7 +218,8 @@ export function blackbodyFractionBetweenWavelengths<S extends SystemName>(
   wavelength2: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
-  return between(sys, blackbodyFractionBetweenWavelengthsSI, "the band fraction", ONE, wavelength1, wavelength2, temperature) as Dimensionless;
+  if (wavelength2 < wavelength1) reversedBand(sys, wavelength1, wavelength2, temperature);
+  return betweenWavelengths(sys, wavelength1, wavelength2, temperature);
 }
 
 /**
@@ -148,7 +243,7 @@ export function blackbodyFractionAboveFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, blackbodyFractionAboveFrequencySI, "the band fraction", ONE, "frequency", frequency, F, "temperature", temperature, T) as Dimensionless;
+  return aboveFrequency(sys, frequency, temperature);
 }
 
 /**
@@ -170,7 +265,7 @@ export function blackbodyFractionBelowFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, blackbodyFractionBelowFrequencySI, "the band fraction", ONE, "frequency", frequency, F, "temperature", temperature, T) as Dimensionless;
+  return belowFrequency(sys, frequency, temperature);
 }
 
 /**
@@ -193,7 +288,7 @@ export function blackbodyPhotonFractionBelowWavelength<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, blackbodyPhotonFractionBelowWavelengthSI, "the photon band fraction", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;
+  return photonBelowWavelength(sys, wavelength, temperature);
 }
 
 /**
@@ -215,7 +310,7 @@ export function blackbodyPhotonFractionAboveWavelength<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, blackbodyPhotonFractionAboveWavelengthSI, "the photon band fraction", ONE, "wavelength", wavelength, L, "temperature", temperature, T) as Dimensionless;
+  return photonAboveWavelength(sys, wavelength, temperature);
 }
 
 /**
@@ -239,7 +334,8 @@ export function blackbodyPhotonFractionBetweenWavelengths<S extends SystemName>(
   wavelength2: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Dimensionless {
-  return between(sys, blackbodyPhotonFractionBetweenWavelengthsSI, "the photon band fraction", ONE, wavelength1, wavelength2, temperature) as Dimensionless;
+  if (wavelength2 < wavelength1) reversedBand(sys, wavelength1, wavelength2, temperature);
+  return photonBetweenWavelengths(sys, wavelength1, wavelength2, temperature);
 }
 
 /**
@@ -262,16 +358,7 @@ export function blackbodyPhotonFractionAboveFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, blackbodyPhotonFractionAboveFrequencySI, "the photon band fraction", ONE, "frequency", frequency, F, "temperature", temperature, T) as Dimensionless;
-}
-
-/** Photon fraction below ν, as the photon fraction above λ = c/ν (SI kernel form). */
-function photonFractionBelowFrequencySI(frequencyHz: number, temperatureK: number): number {
-  const lambda = C / frequencyHz;
-  // c/ν overflows only for ν < c/MAX ≈ 1.7e-300 Hz, where x = hν/kT underflows for every
-  // finite T and the fraction (≈ x²/(4ζ(3))) is 0 to double precision.
-  if (lambda === Infinity) return 0;
-  return blackbodyPhotonFractionAboveWavelengthSI(lambda, temperatureK);
+  return photonAboveFrequency(sys, frequency, temperature);
 }
 
 /**
@@ -296,7 +383,7 @@ export function blackbodyPhotonFractionBelowFrequency<S extends SystemName>(
   frequency: Frequency,
   temperature: Temperature,
 ): Dimensionless {
-  return eval2(sys, photonFractionBelowFrequencySI, "the photon band fraction", ONE, "frequency", frequency, F, "temperature", temperature, T) as Dimensionless;
+  return photonBelowFrequency(sys, frequency, temperature);
 }
 
 /**
@@ -321,7 +408,8 @@ export function bandRadianceWavelength<S extends SystemName>(
   wavelength2: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): Radiance<S> {
-  return between(sys, bandRadianceWavelengthSI, "the band radiance", R, wavelength1, wavelength2, temperature) as Radiance<S>;
+  if (wavelength2 < wavelength1) reversedBand(sys, wavelength1, wavelength2, temperature);
+  return bandRadiance(sys, wavelength1, wavelength2, temperature);
 }
 
 /**
@@ -345,37 +433,6 @@ export function bandPhotonRadianceWavelength<S extends SystemName>(
   wavelength2: NotAirWavelength<NoInfer<S>>,
   temperature: Temperature,
 ): PhotonRadiance<S> {
-  return between(sys, bandPhotonRadianceWavelengthSI, "the band photon radiance", NR, wavelength1, wavelength2, temperature) as PhotonRadiance<S>;
-}
-
-/** Validate (λ₁, λ₂, T) in the caller's units, run a between-wavelengths kernel, convert the result. */
-function between(
-  sys: UnitSystem<SystemName>,
-  kernel: (l1: number, l2: number, t: number) => number,
-  what: string,
-  out: typeof ONE | typeof R | typeof NR,
-  wavelength1: number,
-  wavelength2: number,
-  temperature: number,
-): number {
-  const l1 = positiveSI(sys, "wavelength1", wavelength1, L);
-  const l2 = positiveSI(sys, "wavelength2", wavelength2, L);
-  positiveSI(sys, "temperature", temperature, T);
-  if (wavelength2 < wavelength1) {
-    throw new RangeError(`wavelength2 must be >= wavelength1 (${wavelength1} ${sys.coherentUnit(L)}); got ${wavelength2}`);
-  }
-  const args: readonly Arg[] = [
-    ["wavelength1", wavelength1, L],
-    ["wavelength2", wavelength2, L],
-    ["temperature", temperature, T],
-  ];
-  let v: number;
-  try {
-    v = kernel(l1, l2, temperature);
-  } catch (e) {
-    throw kernelError(sys, e, what, args);
-  }
-  const r = fromSI(sys, v, out);
-  if (r === Infinity) throw overflowIn(sys, what, out, args);
-  return r;
+  if (wavelength2 < wavelength1) reversedBand(sys, wavelength1, wavelength2, temperature);
+  return bandPhotonRadiance(sys, wavelength1, wavelength2, temperature);
 }

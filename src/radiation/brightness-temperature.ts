@@ -26,29 +26,48 @@
  * @module
  */
 import type { NotAirWavelength } from "../quantity/medium";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
-import type {
-  Frequency,
-  Length,
-  SpectralRadiancePerFrequency,
-  SpectralRadiancePerWavelength,
-  Temperature,
-} from "../quantity/aliases";
+import type { Frequency, SpectralRadiancePerFrequency, SpectralRadiancePerWavelength, Temperature } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
 import {
-  brightnessTemperatureFrequencySI,
-  brightnessTemperatureWavelengthSI,
-  rayleighJeansBrightnessTemperatureFrequencySI,
-  rayleighJeansBrightnessTemperatureWavelengthSI,
+  brightnessTemperatureFrequencyUnchecked,
+  brightnessTemperatureWavelengthUnchecked,
+  rayleighJeansBrightnessTemperatureFrequencyUnchecked,
+  rayleighJeansBrightnessTemperatureWavelengthUnchecked,
 } from "./kernels/brightness-temperature";
-import { eval2 } from "./internal";
 
-const L = kinds.length.dimension;
-const F = kinds.frequency.dimension;
-const T = kinds.temperature.dimension;
-const BL = kinds.spectralRadiancePerWavelength.dimension;
-const BN = kinds.spectralRadiancePerFrequency.dimension;
+const wavelength = lawInput("wavelength", kinds.length, { vacuum: true });
+const frequency = lawInput("frequency", kinds.frequency);
+const radianceLambda = lawInput("radiance", kinds.spectralRadiancePerWavelength);
+const radianceNu = lawInput("radiance", kinds.spectralRadiancePerFrequency);
+
+const tbLambda = defineLaw({
+  name: "the brightness temperature",
+  inputs: [wavelength, radianceLambda],
+  result: kinds.temperature,
+  kernel: brightnessTemperatureWavelengthUnchecked,
+});
+const tbNu = defineLaw({
+  name: "the brightness temperature",
+  inputs: [frequency, radianceNu],
+  result: kinds.temperature,
+  kernel: brightnessTemperatureFrequencyUnchecked,
+});
+const trjLambda = defineLaw({
+  name: "the Rayleigh–Jeans brightness temperature",
+  inputs: [wavelength, radianceLambda],
+  result: kinds.temperature,
+  kernel: rayleighJeansBrightnessTemperatureWavelengthUnchecked,
+});
+const trjNu = defineLaw({
+  name: "the Rayleigh–Jeans brightness temperature",
+  inputs: [frequency, radianceNu],
+  result: kinds.temperature,
+  kernel: rayleighJeansBrightnessTemperatureFrequencyUnchecked,
+});
 
 /**
  * Brightness temperature of a monochromatic radiance per unit wavelength,
@@ -71,7 +90,7 @@ export function brightnessTemperatureWavelength<S extends SystemName>(
   wavelength: NotAirWavelength<NoInfer<S>>,
   radiance: SpectralRadiancePerWavelength<NoInfer<S>>,
 ): Temperature {
-  return eval2(sys, brightnessTemperatureWavelengthSI, "the brightness temperature", T, "wavelength", wavelength, L, "radiance", radiance, BL) as Temperature;
+  return tbLambda(sys, wavelength, radiance);
 }
 
 /**
@@ -94,7 +113,7 @@ export function brightnessTemperatureFrequency<S extends SystemName>(
   frequency: Frequency,
   radiance: SpectralRadiancePerFrequency<NoInfer<S>>,
 ): Temperature {
-  return eval2(sys, brightnessTemperatureFrequencySI, "the brightness temperature", T, "frequency", frequency, F, "radiance", radiance, BN) as Temperature;
+  return tbNu(sys, frequency, radiance);
 }
 
 /**
@@ -118,7 +137,7 @@ export function rayleighJeansBrightnessTemperatureWavelength<S extends SystemNam
   wavelength: NotAirWavelength<NoInfer<S>>,
   radiance: SpectralRadiancePerWavelength<NoInfer<S>>,
 ): Temperature {
-  return eval2(sys, rayleighJeansBrightnessTemperatureWavelengthSI, "the Rayleigh–Jeans brightness temperature", T, "wavelength", wavelength, L, "radiance", radiance, BL) as Temperature;
+  return trjLambda(sys, wavelength, radiance);
 }
 
 /**
@@ -141,5 +160,5 @@ export function rayleighJeansBrightnessTemperatureFrequency<S extends SystemName
   frequency: Frequency,
   radiance: SpectralRadiancePerFrequency<NoInfer<S>>,
 ): Temperature {
-  return eval2(sys, rayleighJeansBrightnessTemperatureFrequencySI, "the Rayleigh–Jeans brightness temperature", T, "frequency", frequency, F, "radiance", radiance, BN) as Temperature;
+  return trjNu(sys, frequency, radiance);
 }

@@ -29,28 +29,34 @@
  * @module
  */
 import type { NotAirWavelength } from "../quantity/medium";
+import { show } from "../internal/checks";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
-import type {
-  Length,
-  SpectralFluxPerWavelength,
-  SpectralRadiancePerWavelength,
-  Temperature,
-} from "../quantity/aliases";
+import type { SpectralFluxPerWavelength, SpectralRadiancePerWavelength, Temperature } from "../quantity/aliases";
 import type { Pure, SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import { requirePositive } from "../internal/checks";
-import { lnBandMeanUnchecked, responseWeights, type ResponseConvention } from "./kernels/band-response";
+import { lnBandMeanUnchecked, trapezoidWeights, type ResponseConvention } from "./kernels/band-response";
 import {
   COLOUR_TEMPERATURE_MAX_K,
   COLOUR_TEMPERATURE_MIN_K,
-  colourTemperatureFromBandRatioSI,
-  colourTemperatureFromRatioSI,
+  solveColourTemperatureUnchecked,
+  unreachableRatioError,
 } from "./kernels/colour-temperature";
 import { lnPlanckLambdaUnchecked } from "./kernels/planck";
-import { positiveSI, responseCurveSI } from "./internal";
 import type { ResponseCurve } from "./response";
+import { responseCurveSI } from "./response-check";
 
-const L = kinds.length.dimension;
+const wavelength1Input = lawInput("wavelength1", kinds.length, { vacuum: true });
+const wavelength2Input = lawInput("wavelength2", kinds.length, { vacuum: true });
+const ratioInput = lawInput("ratio", kinds.dimensionless);
+/** A density per unit wavelength (F_λ, or B_λ = F_λ per sr): only its check is used, the unit differs by sr. */
+const densityInput = lawInput("density", kinds.spectralFluxPerWavelength);
+
+/** The RangeError for a density that is not finite and > 0, naming both units it may have in `sys`. */
+function badDensity(sys: UnitSystem<SystemName>, name: string, value: number): RangeError {
+  const u = sys.coherentUnit(kinds.spectralFluxPerWavelength.dimension);
+  return new RangeError(`${name} must be a finite number > 0 ${u} (or ${u} sr^-1); got ${show(value)}`);
+}
 
 /**
  * The temperature range the colour-temperature solvers search (both ends
@@ -71,26 +77,6 @@ export const colourTemperatureRange: {
   min: COLOUR_TEMPERATURE_MIN_K as Temperature,
   max: COLOUR_TEMPERATURE_MAX_K as Temperature,
 });
-
-/**
- * Throw, in the caller's terms, when `lnTarget` lies outside the range of
- * `lnRatioAt` over the search bracket. Mirrors the kernel's bracket test
- * (same end points, same arithmetic), so a ratio accepted here is accepted
- * by the kernel.
- */
-function requireReachable(lnRatioAt: (T: number) => number, lnTarget: number, ratio: number, what: string): void {
-  const t0 = Math.exp(Math.log(COLOUR_TEMPERATURE_MIN_K));
-  const t1 = Math.exp(Math.log(COLOUR_TEMPERATURE_MAX_K));
-  const f0 = lnRatioAt(t0) - lnTarget;
-  const f1 = lnRatioAt(t1) - lnTarget;
-  if ((f0 <= 0 && f1 >= 0) || (f0 >= 0 && f1 <= 0)) return;
-  const r0 = Math.exp(f0 + lnTarget);
-  const r1 = Math.exp(f1 + lnTarget);
-  throw new RangeError(
-    `ratio ${ratio} is not produced by any blackbody between ${COLOUR_TEMPERATURE_MIN_K} K and ${COLOUR_TEMPERATURE_MAX_K} K: ` +
-      `${what} ranges from ${r0} (at ${COLOUR_TEMPERATURE_MIN_K} K) to ${r1} (at ${COLOUR_TEMPERATURE_MAX_K} K)`,
-  );
-}
 
 /**
  * Colour temperature from the ratio of two monochromatic spectral densities
@@ -115,22 +101,21 @@ export function colourTemperatureFromRatio<S extends SystemName>(
   wavelength2: NotAirWavelength<NoInfer<S>>,
   ratio: Pure,
 ): Temperature {
-  const l1 = positiveSI(sys, "wavelength1", wavelength1, L);
-  const l2 = positiveSI(sys, "wavelength2", wavelength2, L);
-  requirePositive("ratio", ratio, "(dimensionless)");
-  const unit = sys.coherentUnit(L);
+  const l1 = wavelength1Input.toSI(sys, wavelength1);
+  const l2 = wavelength2Input.toSI(sys, wavelength2);
+  const lnTarget = Math.log(ratioInput.toSI(sys, ratio));
   if (l1 === l2) {
+    const unit = sys.coherentUnit(kinds.length.dimension);
     throw new RangeError(
-      `wavelength2 must differ from wavelength1 (${wavelength1} ${unit}); got ${wavelength2} ${unit}, where the ratio is always 1`,
+      `wavelength2 must differ from wavelength1 (${show(wavelength1)} ${unit}); got ${show(wavelength2)} ${unit}, where the ratio is always 1`,
     );
   }
-  requireReachable(
-    (t) => lnPlanckLambdaUnchecked(l1, t) - lnPlanckLambdaUnchecked(l2, t),
-    Math.log(ratio),
-    ratio,
-    `B_λ(${wavelength1} ${unit})/B_λ(${wavelength2} ${unit})`,
-  );
-  return colourTemperatureFromRatioSI(l1, l2, ratio) as Temperature;
+  const t = solveColourTemperatureUnchecked((T) => lnPlanckLambdaUnchecked(l1, T) - lnPlanckLambdaUnchecked(l2, T), lnTarget);
+  if (t !== t) {
+    const unit = sys.coherentUnit(kinds.length.dimension);
+    throw unreachableRatioError(ratio, `B_λ(${show(wavelength1)} ${unit})/B_λ(${show(wavelength2)} ${unit})`);
+  }
+  return t as Temperature;
 }
 
 /**
@@ -164,14 +149,11 @@ export function colourTemperatureFromSpectralDensities<
   wavelength2: NotAirWavelength<NoInfer<S>>,
   density2: NoInfer<Q>,
 ): Temperature {
-  // F_λ or B_λ (= F_λ per sr): the message names both units of the caller's system.
-  const u = sys.coherentUnit(kinds.spectralFluxPerWavelength.dimension);
-  const unit = `${u} (or ${u} sr^-1)`;
-  requirePositive("density1", density1, unit);
-  requirePositive("density2", density2, unit);
+  if (!densityInput.passes(density1)) throw badDensity(sys, "density1", density1);
+  if (!densityInput.passes(density2)) throw badDensity(sys, "density2", density2);
   const ratio = density1 / density2;
   if (!(ratio > 0) || ratio === Infinity) {
-    throw new RangeError(`density1/density2 = ${density1}/${density2} is outside the double range`);
+    throw new RangeError(`density1/density2 = ${show(density1)}/${show(density2)} is outside the double range`);
   }
   return colourTemperatureFromRatio(sys, wavelength1, wavelength2, ratio);
 }
@@ -205,16 +187,17 @@ export function colourTemperatureFromBandRatio<S extends SystemName>(
   ratio: Pure,
   convention: ResponseConvention = "energy",
 ): Temperature {
-  requirePositive("ratio", ratio, "(dimensionless)");
+  const lnTarget = Math.log(ratioInput.toSI(sys, ratio));
   const c1 = responseCurveSI(sys, band1, "band1");
   const c2 = responseCurveSI(sys, band2, "band2");
-  const w1 = responseWeights(c1, convention);
-  const w2 = responseWeights(c2, convention);
-  requireReachable(
-    (t) => lnBandMeanUnchecked(c1.wavelengthsM, w1, t) - lnBandMeanUnchecked(c2.wavelengthsM, w2, t),
-    Math.log(ratio),
-    ratio,
-    `⟨B_λ⟩(band1)/⟨B_λ⟩(band2) (${convention} counting)`,
-  );
-  return colourTemperatureFromBandRatioSI(c1, c2, ratio, convention) as Temperature;
+  if (convention !== "energy" && convention !== "photon") {
+    throw new RangeError(`convention must be "energy" or "photon"; got ${String(convention)}`);
+  }
+  const l1 = c1.wavelengthsM;
+  const l2 = c2.wavelengthsM;
+  const w1 = trapezoidWeights(l1, c1.response, convention);
+  const w2 = trapezoidWeights(l2, c2.response, convention);
+  const t = solveColourTemperatureUnchecked((T) => lnBandMeanUnchecked(l1, w1, T) - lnBandMeanUnchecked(l2, w2, T), lnTarget);
+  if (t !== t) throw unreachableRatioError(ratio, `⟨B_λ⟩(band1)/⟨B_λ⟩(band2) (${convention} counting)`);
+  return t as Temperature;
 }

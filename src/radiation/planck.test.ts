@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { constants } from "../constants/index";
 import { CGS, SI } from "../quantity/system";
 import { units } from "../quantity/units";
-import type { LengthArray, Temperature, TemperatureArray } from "../quantity/aliases";
+import type { Flux, LengthArray, SpectralRadiancePerWavelength, Temperature, TemperatureArray } from "../quantity/aliases";
 import { assume, assumeArray, kinds, type Length } from "../quantity/index";
 import * as K from "./kernels/planck";
 import {
@@ -101,6 +101,20 @@ describe("Lambertian exitance puts the π back", () => {
     // π·b/π: two roundings → within 1 ulp
     expect(Math.abs(lambertianRadiance(lambertianExitance(b)) / b - 1)).toBeLessThanOrEqual(Number.EPSILON);
   });
+
+  it("0 is a valid radiance and exitance (an underflowed B_λ)", () => {
+    const zero = planckRadianceWavelength(SI, m(1e-12), T(1e-2)); // underflows to exactly 0 (kernels/planck.test.ts)
+    expect(zero).toBe(0);
+    expect(lambertianExitance(zero)).toBe(0);
+    expect(lambertianRadiance(lambertianExitance(zero))).toBe(0);
+  });
+
+  it.each([-1, -Number.MIN_VALUE, NaN, Infinity, -Infinity])("%s is rejected with the standard RangeError (no unit: any system)", (v) => {
+    const radiance = assume<SpectralRadiancePerWavelength<"CGS">>(v);
+    expect(() => lambertianExitance(radiance)).toThrow(RangeError);
+    expect(() => lambertianExitance(radiance)).toThrow(`radiance must be a finite number >= 0; got ${String(v)}`);
+    expect(() => lambertianRadiance(assume<Flux<"SI">>(v))).toThrow(`exitance must be a finite number >= 0; got ${String(v)}`);
+  });
 });
 
 describe("batch forms", () => {
@@ -148,6 +162,40 @@ describe("batch forms", () => {
     const cg = planckRadianceTemperatureBatch(CGS, cm(2.2e-4), ts);
     expect(cg.invalid).toEqual([1, 3]);
     for (const i of [0, 2, 4]) expect(cg.values[i]).toBe(K.planckRadianceWavelengthSI(2.2e-4 / 100, ts[i] as number) * 10);
+  });
+
+  it("reasons: each invalid row's reason is the sentence its scalar call throws, in the caller's unit", () => {
+    // SI grid: the reasons name m and show the value the caller gave
+    const grid = SI.arrayOf([500, -1, NaN, 600, 0], units.nm);
+    const si = planckRadianceWavelengthBatch(SI, grid, T(5772));
+    expect(si.invalid).toEqual([1, 2, 4]);
+    expect(si.reasons).toEqual([
+      "wavelength must be a finite number > 0 m; got -1e-9",
+      "wavelength must be a finite number > 0 m; got NaN",
+      "wavelength must be a finite number > 0 m; got 0",
+    ]);
+    // CGS: an input refused in cm, and a row finite in SI whose ×10 overflows, named in the CGS unit
+    const l = 1e-12;
+    const t = 5e307 / ((2 * 299792458 * 1.380649e-23) / l ** 4); // B_λ(SI) ≈ 5e307 (Rayleigh–Jeans side), as above
+    const cgsGrid = assumeArray<LengthArray<"CGS">>(new Float64Array([-1, l * 100, 1, Infinity]));
+    const cg = planckRadianceWavelengthBatch(CGS, cgsGrid, T(t));
+    expect(cg.invalid).toEqual([0, 1, 3]);
+    expect(cg.reasons).toEqual([
+      "wavelength must be a finite number > 0 cm; got -1",
+      `B_λ overflows the double range in cm^-1 g s^-3 sr^-1 for wavelength=1e-10 cm, temperature=${String(t)} K`,
+      "wavelength must be a finite number > 0 cm; got Infinity",
+    ]);
+    cg.invalid.forEach((i, k) => {
+      expect(() => planckRadianceWavelength(CGS, cm(cgsGrid[i] as number), T(t))).toThrow(cg.reasons[k] as string);
+    });
+    // temperature rows
+    const tb = planckRadianceTemperatureBatch(CGS, cm(5e-5), temps([5772, -3, 0]));
+    expect(tb.invalid).toEqual([1, 2]);
+    expect(tb.reasons).toEqual(["temperature must be a finite number > 0 K; got -3", "temperature must be a finite number > 0 K; got 0"]);
+    // no invalid rows: both lists empty
+    const ok = planckRadianceWavelengthBatch(SI, SI.arrayOf([400, 500], units.nm), T(5772));
+    expect(ok.invalid).toEqual([]);
+    expect(ok.reasons).toEqual([]);
   });
 
   it("a bad shared argument throws before any row is written, in the caller's unit", () => {

@@ -28,7 +28,6 @@ import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type {
   Frequency,
-  Length,
   SpectralPhotonRadiancePerFrequency,
   SpectralPhotonRadiancePerWavelength,
   SpectralPhotonRadiancePerWavenumber,
@@ -373,11 +372,20 @@ export type PerSteradian = AnyQuantity &
   >;
 
 /**
+ * The checks of the Lambertian helpers: finite and ≥ 0. They take any
+ * radiance-like quantity in either system and no system argument, so their
+ * message names the value but no unit.
+ */
+const lambertianRadianceInput = lawInput("radiance", kinds.dimensionless, { check: "nonNegative" });
+const lambertianExitanceInput = lawInput("exitance", kinds.dimensionless, { check: "nonNegative" });
+
+/**
  * The exitance (flux leaving the surface, per unit area) of a Lambertian
  * emitter with the given radiance: M = π sr × L. Works for any radiance-like
  * quantity (total, spectral per λ/ν/σ̃, photon) and removes its sr⁻¹; this
  * is the explicit step where the "lost π" of radiance vs flux is put back.
  *
+ * @throws RangeError when the radiance is not finite and ≥ 0 (`radiance must be a finite number >= 0; got -1`)
  * @example
  * ```ts
  * import { SI, lambertianExitance, planckRadianceWavelength, units, type SpectralFluxPerWavelength } from "starlume";
@@ -386,12 +394,13 @@ export type PerSteradian = AnyQuantity &
  * ```
  */
 export function lambertianExitance<Q extends PerSteradian>(radiance: Q): Product<Q, SolidAngle> {
-  return (Math.PI * radiance) as Product<Q, SolidAngle>;
+  return (Math.PI * lambertianRadianceInput.si(radiance)) as Product<Q, SolidAngle>;
 }
 
 /**
  * The radiance of a Lambertian emitter with the given exitance: L = M / (π sr).
  *
+ * @throws RangeError when the exitance is not finite and ≥ 0 (`exitance must be a finite number >= 0; got NaN`)
  * @example
  * ```ts
  * import { SI, lambertianRadiance, units, type Radiance } from "starlume";
@@ -399,5 +408,5 @@ export function lambertianExitance<Q extends PerSteradian>(radiance: Q): Product
  * ```
  */
 export function lambertianRadiance<Q extends AnyQuantity>(exitance: Q): Quotient<Q, SolidAngle> {
-  return (exitance / Math.PI) as Quotient<Q, SolidAngle>;
+  return (lambertianExitanceInput.si(exitance) / Math.PI) as Quotient<Q, SolidAngle>;
 }

@@ -101,6 +101,19 @@ describe("band-mean radiance through a typed response curve", () => {
   });
 });
 
+describe("a band mean beyond the double range in CGS only", () => {
+  it("names the temperature and the CGS unit of the result", () => {
+    // Rayleigh–Jeans side at λ ≈ 1e-12 m: B_λ ≈ 2ckT/λ⁴ ≈ 5e307 W m⁻² sr⁻¹ m⁻¹ (finite); ×10 into CGS overflows.
+    const t = 5e307 / ((2 * 299792458 * 1.380649e-23) / 1e-48);
+    const grid = (xs: number[]) => assumeArray<LengthArray<"CGS">>(new Float64Array(xs));
+    const curveSI = { wavelengths: assumeArray<LengthArray<"SI">>(new Float64Array([1e-12, 1.001e-12])), response: [1, 1] };
+    expect(Number.isFinite(bandMeanRadiance(SI, curveSI, T(t)))).toBe(true);
+    expect(() => bandMeanRadiance(CGS, { wavelengths: grid([1e-10, 1.001e-10]), response: [1, 1] }, T(t))).toThrow(
+      `the band-mean radiance overflows the double range in cm^-1 g s^-3 sr^-1 for temperature=${String(t)} K`,
+    );
+  });
+});
+
 describe("invalid curves: RangeError naming the field, the index and the caller's unit", () => {
   const grid = (xs: number[]) => assumeArray<LengthArray<"CGS">>(new Float64Array(xs));
   it("CGS curves are reported in cm", () => {
@@ -126,7 +139,11 @@ describe("invalid curves: RangeError naming the field, the index and the caller'
     );
     // 1e-322 and 1.5e-322 cm are distinct subnormals but both round to 0 m
     expect(() => bandMeanRadiance(CGS, { wavelengths: grid([1e-322, 1.5e-322]), response: [1, 1] }, T(300))).toThrow(
-      /curve.wavelengths\[0\] = 1e-322 cm is outside the double range, or not distinct from its neighbour, once converted to m/,
+      "curve.wavelengths[0] = 1e-322 cm is outside the double range once converted to SI (0 m)",
+    );
+    // 3e-322 and 3.5e-322 cm are distinct and > 0, but both round to the smallest subnormal, 5e-324 m
+    expect(() => bandMeanRadiance(CGS, { wavelengths: grid([3e-322, 3.5e-322]), response: [1, 1] }, T(300))).toThrow(
+      "curve.wavelengths[1] = 3.5e-322 cm is not distinct from curve.wavelengths[0] once converted to SI (both 5e-324 m)",
     );
   });
 });

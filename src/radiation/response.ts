@@ -25,27 +25,21 @@
  *
  * @module
  */
-import { fromSI, positive } from "../internal/typed";
+import { lawInput } from "../law/input";
+import { lawOutput, type LawOutput } from "../law/output";
 import { kinds } from "../quantity/aliases";
 import type { LengthArray, SpectralRadiancePerWavelength, Temperature } from "../quantity/aliases";
-import type { Dimension } from "../quantity/dimension";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import {
-  bandMeanRadianceDerivativeTSI,
-  bandMeanRadianceWavelengthSI,
-  type ResponseConvention,
-  type ResponseCurveSI,
-} from "./kernels/band-response";
-import { kernelError, overflowIn, responseCurveSI } from "./internal";
+import { bandMeanDerivativeTUnchecked, bandMeanUnchecked, trapezoidWeights, type ResponseConvention } from "./kernels/band-response";
 import { derivativeKinds, type SpectralRadiancePerWavelengthPerTemperature } from "./planck";
+import { responseCurveSI } from "./response-check";
 
 export type { ResponseConvention } from "./kernels/band-response";
 
-const L = kinds.length.dimension;
-const T = kinds.temperature.dimension;
-const BL = kinds.spectralRadiancePerWavelength.dimension;
-const DBL = derivativeKinds.spectralRadiancePerWavelengthPerTemperature.dimension;
+const temperatureInput = lawInput("temperature", kinds.temperature);
+const meanOutput = lawOutput("the band-mean radiance", kinds.spectralRadiancePerWavelength);
+const derivativeOutput = lawOutput("the band-mean ∂B_λ/∂T", derivativeKinds.spectralRadiancePerWavelengthPerTemperature);
 
 /**
  * A tabulated response curve in system `S`: wavelengths (in `S`: m or cm)
@@ -72,29 +66,28 @@ export interface ResponseCurve<S extends SystemName> {
   readonly response: ArrayLike<number>;
 }
 
-/** Run a (curve, T, convention) kernel with checks and messages in the caller's units. */
+/**
+ * Check (T, convention, curve) in the caller's units, run a band-mean core on
+ * the SI grid and its trapezoid weights, and return the result in the
+ * caller's system (a RangeError naming T in the caller's unit when it is not
+ * finite there).
+ */
 function run(
   sys: UnitSystem<SystemName>,
-  kernel: (c: ResponseCurveSI, t: number, conv: ResponseConvention) => number,
-  what: string,
-  out: Dimension,
+  core: (wavelengthsM: ArrayLike<number>, w: Float64Array, temperatureK: number) => number,
+  output: LawOutput,
   curve: ResponseCurve<SystemName>,
   temperature: number,
   convention: ResponseConvention,
 ): number {
-  positive(sys, "temperature", temperature, T);
+  const t = temperatureInput.toSI(sys, temperature);
   if (convention !== "energy" && convention !== "photon") {
     throw new RangeError(`convention must be "energy" or "photon"; got ${String(convention)}`);
   }
   const c = responseCurveSI(sys, curve, "curve");
-  let v: number;
-  try {
-    v = kernel(c, temperature, convention);
-  } catch (e) {
-    throw kernelError(sys, e, what, [["temperature", temperature, T]]);
-  }
-  const r = fromSI(sys, v, out);
-  if (r === Infinity) throw overflowIn(sys, what, out, [["temperature", temperature, T]]);
+  const v = core(c.wavelengthsM, trapezoidWeights(c.wavelengthsM, c.response, convention), t);
+  const r = output.fromSI(sys, v);
+  if (r !== r) throw new RangeError(output.reason(sys, v, [temperatureInput], [temperature]));
   return r;
 }
 
@@ -123,7 +116,7 @@ export function bandMeanRadiance<S extends SystemName>(
   temperature: Temperature,
   convention: ResponseConvention = "energy",
 ): SpectralRadiancePerWavelength<S> {
-  return run(sys, bandMeanRadianceWavelengthSI, "the band-mean radiance", BL, curve, temperature, convention) as SpectralRadiancePerWavelength<S>;
+  return run(sys, bandMeanUnchecked, meanOutput, curve, temperature, convention) as SpectralRadiancePerWavelength<S>;
 }
 
 /**
@@ -150,5 +143,5 @@ export function bandMeanRadianceDerivativeT<S extends SystemName>(
   temperature: Temperature,
   convention: ResponseConvention = "energy",
 ): SpectralRadiancePerWavelengthPerTemperature<S> {
-  return run(sys, bandMeanRadianceDerivativeTSI, "the band-mean ∂B_λ/∂T", DBL, curve, temperature, convention) as SpectralRadiancePerWavelengthPerTemperature<S>;
+  return run(sys, bandMeanDerivativeTUnchecked, derivativeOutput, curve, temperature, convention) as SpectralRadiancePerWavelengthPerTemperature<S>;
 }

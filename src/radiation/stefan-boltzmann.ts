@@ -20,27 +20,69 @@
  *
  * @module
  */
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type { Flux, Length, PhotonFlux, PhotonRate, Power, Temperature } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
 import {
-  luminosityFromRadiusTemperatureSI,
-  photonEmissionRateSI,
-  photonExitanceSI,
-  radiusFromLuminosityTemperatureSI,
-  stefanBoltzmannExitanceSI,
-  temperatureFromExitanceSI,
-  temperatureFromLuminosityRadiusSI,
+  luminosityFromRadiusTemperatureUnchecked,
+  photonEmissionRateUnchecked,
+  photonExitanceUnchecked,
+  radiusFromLuminosityTemperatureUnchecked,
+  stefanBoltzmannExitanceUnchecked,
+  temperatureFromExitanceUnchecked,
+  temperatureFromLuminosityRadiusUnchecked,
 } from "./kernels/stefan-boltzmann";
-import { eval1, eval2 } from "./internal";
 
-const L = kinds.length.dimension;
-const T = kinds.temperature.dimension;
-const P = kinds.power.dimension;
-const M = kinds.flux.dimension;
-const NF = kinds.photonFlux.dimension;
-const NR = kinds.photonRate.dimension;
+const temperature = lawInput("temperature", kinds.temperature);
+const radius = lawInput("radius", kinds.length);
+const luminosity = lawInput("luminosity", kinds.power);
+const exitance = lawInput("exitance", kinds.flux);
+
+const exitanceLaw = defineLaw({
+  name: "the exitance σT⁴",
+  inputs: [temperature],
+  result: kinds.flux,
+  kernel: stefanBoltzmannExitanceUnchecked,
+});
+const temperatureFromExitanceLaw = defineLaw({
+  name: "the temperature",
+  inputs: [exitance],
+  result: kinds.temperature,
+  kernel: temperatureFromExitanceUnchecked,
+});
+const luminosityLaw = defineLaw({
+  name: "the luminosity 4πR²σT⁴",
+  inputs: [radius, temperature],
+  result: kinds.power,
+  kernel: luminosityFromRadiusTemperatureUnchecked,
+});
+const radiusLaw = defineLaw({
+  name: "the radius",
+  inputs: [luminosity, temperature],
+  result: kinds.length,
+  kernel: radiusFromLuminosityTemperatureUnchecked,
+});
+const temperatureFromLuminosityLaw = defineLaw({
+  name: "the temperature",
+  inputs: [luminosity, radius],
+  result: kinds.temperature,
+  kernel: temperatureFromLuminosityRadiusUnchecked,
+});
+const photonExitanceLaw = defineLaw({
+  name: "the photon exitance",
+  inputs: [temperature],
+  result: kinds.photonFlux,
+  kernel: photonExitanceUnchecked,
+});
+const photonRateLaw = defineLaw({
+  name: "the photon emission rate",
+  inputs: [radius, temperature],
+  result: kinds.photonRate,
+  kernel: photonEmissionRateUnchecked,
+});
 
 /**
  * Blackbody exitance M = σT⁴.
@@ -55,7 +97,7 @@ const NR = kinds.photonRate.dimension;
  * ```
  */
 export function stefanBoltzmannExitance<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Flux<S> {
-  return eval1(sys, stefanBoltzmannExitanceSI, "the exitance σT⁴", M, "temperature", temperature, T) as Flux<S>;
+  return exitanceLaw(sys, temperature);
 }
 
 /**
@@ -71,7 +113,7 @@ export function stefanBoltzmannExitance<S extends SystemName>(sys: UnitSystem<S>
  * ```
  */
 export function temperatureFromExitance<S extends SystemName>(sys: UnitSystem<S>, exitance: Flux<NoInfer<S>>): Temperature {
-  return eval1(sys, temperatureFromExitanceSI, "the temperature", T, "exitance", exitance, M) as Temperature;
+  return temperatureFromExitanceLaw(sys, exitance);
 }
 
 /**
@@ -93,7 +135,7 @@ export function luminosityFromRadiusTemperature<S extends SystemName>(
   radius: Length<NoInfer<S>>,
   temperature: Temperature,
 ): Power<S> {
-  return eval2(sys, luminosityFromRadiusTemperatureSI, "the luminosity 4πR²σT⁴", P, "radius", radius, L, "temperature", temperature, T) as Power<S>;
+  return luminosityLaw(sys, radius, temperature);
 }
 
 /**
@@ -116,7 +158,7 @@ export function radiusFromLuminosityTemperature<S extends SystemName>(
   luminosity: Power<NoInfer<S>>,
   temperature: Temperature,
 ): Length<S> {
-  return eval2(sys, radiusFromLuminosityTemperatureSI, "the radius", L, "luminosity", luminosity, P, "temperature", temperature, T) as Length<S>;
+  return radiusLaw(sys, luminosity, temperature);
 }
 
 /**
@@ -138,7 +180,7 @@ export function temperatureFromLuminosityRadius<S extends SystemName>(
   luminosity: Power<NoInfer<S>>,
   radius: Length<NoInfer<S>>,
 ): Temperature {
-  return eval2(sys, temperatureFromLuminosityRadiusSI, "the temperature", T, "luminosity", luminosity, P, "radius", radius, L) as Temperature;
+  return temperatureFromLuminosityLaw(sys, luminosity, radius);
 }
 
 /**
@@ -154,7 +196,7 @@ export function temperatureFromLuminosityRadius<S extends SystemName>(
  * ```
  */
 export function photonExitance<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): PhotonFlux<S> {
-  return eval1(sys, photonExitanceSI, "the photon exitance", NF, "temperature", temperature, T) as PhotonFlux<S>;
+  return photonExitanceLaw(sys, temperature);
 }
 
 /**
@@ -175,5 +217,5 @@ export function photonEmissionRate<S extends SystemName>(
   radius: Length<NoInfer<S>>,
   temperature: Temperature,
 ): PhotonRate {
-  return eval2(sys, photonEmissionRateSI, "the photon emission rate", NR, "radius", radius, L, "temperature", temperature, T) as PhotonRate;
+  return photonRateLaw(sys, radius, temperature);
 }

@@ -132,6 +132,6 @@ describe("errors name the caller's unit", () => {
     const t = 2.897771955e-3 / 1e307; // subnormal T: λ_max ≈ 1e307 m = 1e309 cm
     expect(Number.isFinite(wienPeakWavelength(SI, T(t)))).toBe(true);
     expect(() => wienPeakWavelength(CGS, T(t))).toThrow(/^the peak wavelength overflows the double range in cm for temperature=/);
-    expect(() => wienPeakWavelength(CGS, T(5e-324))).toThrow(/^the peak wavelength is outside the double range for temperature=5e-324 K/);
+    expect(() => wienPeakWavelength(CGS, T(5e-324))).toThrow("the peak wavelength overflows the double range in cm for temperature=5e-324 K");
   });
 });

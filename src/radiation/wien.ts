@@ -26,30 +26,104 @@
  * @module
  */
 import type { NotAirWavelength } from "../quantity/medium";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type { Frequency, Length, Temperature, Wavenumber } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
 import {
-  temperatureFromPeakFrequencySI,
-  temperatureFromPeakWavelengthSI,
-  temperatureFromPeakWavenumberSI,
-  temperatureFromPhotonPeakFrequencySI,
-  temperatureFromPhotonPeakWavelengthSI,
-  temperatureFromPhotonPeakWavenumberSI,
-  wienPeakFrequencySI,
-  wienPeakWavelengthSI,
-  wienPeakWavenumberSI,
-  wienPhotonPeakFrequencySI,
-  wienPhotonPeakWavelengthSI,
-  wienPhotonPeakWavenumberSI,
+  temperatureFromPeakFrequencyUnchecked,
+  temperatureFromPeakWavelengthUnchecked,
+  temperatureFromPeakWavenumberUnchecked,
+  temperatureFromPhotonPeakFrequencyUnchecked,
+  temperatureFromPhotonPeakWavelengthUnchecked,
+  temperatureFromPhotonPeakWavenumberUnchecked,
+  wienPeakFrequencyUnchecked,
+  wienPeakWavelengthUnchecked,
+  wienPeakWavenumberUnchecked,
+  wienPhotonPeakFrequencyUnchecked,
+  wienPhotonPeakWavelengthUnchecked,
+  wienPhotonPeakWavenumberUnchecked,
 } from "./kernels/wien";
-import { eval1 } from "./internal";
 
-const L = kinds.length.dimension;
-const F = kinds.frequency.dimension;
-const K = kinds.wavenumber.dimension;
-const T = kinds.temperature.dimension;
+const temperature = lawInput("temperature", kinds.temperature);
+const peakWavelength = lawInput("peakWavelength", kinds.length, { vacuum: true });
+const peakFrequency = lawInput("peakFrequency", kinds.frequency);
+const peakWavenumber = lawInput("peakWavenumber", kinds.wavenumber);
+
+const wienPeakWavelengthLaw = defineLaw({
+  name: "the peak wavelength",
+  inputs: [temperature],
+  result: kinds.length,
+  kernel: wienPeakWavelengthUnchecked,
+});
+const wienPeakFrequencyLaw = defineLaw({
+  name: "the peak frequency",
+  inputs: [temperature],
+  result: kinds.frequency,
+  kernel: wienPeakFrequencyUnchecked,
+});
+const wienPeakWavenumberLaw = defineLaw({
+  name: "the peak wavenumber",
+  inputs: [temperature],
+  result: kinds.wavenumber,
+  kernel: wienPeakWavenumberUnchecked,
+});
+const wienPhotonPeakWavelengthLaw = defineLaw({
+  name: "the photon peak wavelength",
+  inputs: [temperature],
+  result: kinds.length,
+  kernel: wienPhotonPeakWavelengthUnchecked,
+});
+const wienPhotonPeakFrequencyLaw = defineLaw({
+  name: "the photon peak frequency",
+  inputs: [temperature],
+  result: kinds.frequency,
+  kernel: wienPhotonPeakFrequencyUnchecked,
+});
+const wienPhotonPeakWavenumberLaw = defineLaw({
+  name: "the photon peak wavenumber",
+  inputs: [temperature],
+  result: kinds.wavenumber,
+  kernel: wienPhotonPeakWavenumberUnchecked,
+});
+const temperatureFromPeakWavelengthLaw = defineLaw({
+  name: "the temperature",
+  inputs: [peakWavelength],
+  result: kinds.temperature,
+  kernel: temperatureFromPeakWavelengthUnchecked,
+});
+const temperatureFromPeakFrequencyLaw = defineLaw({
+  name: "the temperature",
+  inputs: [peakFrequency],
+  result: kinds.temperature,
+  kernel: temperatureFromPeakFrequencyUnchecked,
+});
+const temperatureFromPeakWavenumberLaw = defineLaw({
+  name: "the temperature",
+  inputs: [peakWavenumber],
+  result: kinds.temperature,
+  kernel: temperatureFromPeakWavenumberUnchecked,
+});
+const temperatureFromPhotonPeakWavelengthLaw = defineLaw({
+  name: "the temperature",
+  inputs: [peakWavelength],
+  result: kinds.temperature,
+  kernel: temperatureFromPhotonPeakWavelengthUnchecked,
+});
+const temperatureFromPhotonPeakFrequencyLaw = defineLaw({
+  name: "the temperature",
+  inputs: [peakFrequency],
+  result: kinds.temperature,
+  kernel: temperatureFromPhotonPeakFrequencyUnchecked,
+});
+const temperatureFromPhotonPeakWavenumberLaw = defineLaw({
+  name: "the temperature",
+  inputs: [peakWavenumber],
+  result: kinds.temperature,
+  kernel: temperatureFromPhotonPeakWavenumberUnchecked,
+});
 
 /**
  * Wavelength of the maximum of B_λ: λ_max = b/T, b = c₂/x₅ ≈ 2.898e-3 m K.
@@ -64,7 +138,7 @@ const T = kinds.temperature.dimension;
  * ```
  */
 export function wienPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
-  return eval1(sys, wienPeakWavelengthSI, "the peak wavelength", L, "temperature", temperature, T) as Length<S>;
+  return wienPeakWavelengthLaw(sys, temperature);
 }
 
 /**
@@ -81,7 +155,7 @@ export function wienPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, tem
  * ```
  */
 export function wienPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
-  return eval1(sys, wienPeakFrequencySI, "the peak frequency", F, "temperature", temperature, T) as Frequency;
+  return wienPeakFrequencyLaw(sys, temperature);
 }
 
 /**
@@ -98,7 +172,7 @@ export function wienPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temp
  * ```
  */
 export function wienPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
-  return eval1(sys, wienPeakWavenumberSI, "the peak wavenumber", K, "temperature", temperature, T) as Wavenumber<S>;
+  return wienPeakWavenumberLaw(sys, temperature);
 }
 
 /**
@@ -114,7 +188,7 @@ export function wienPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, tem
  * ```
  */
 export function wienPhotonPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
-  return eval1(sys, wienPhotonPeakWavelengthSI, "the photon peak wavelength", L, "temperature", temperature, T) as Length<S>;
+  return wienPhotonPeakWavelengthLaw(sys, temperature);
 }
 
 /**
@@ -130,7 +204,7 @@ export function wienPhotonPeakWavelength<S extends SystemName>(sys: UnitSystem<S
  * ```
  */
 export function wienPhotonPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
-  return eval1(sys, wienPhotonPeakFrequencySI, "the photon peak frequency", F, "temperature", temperature, T) as Frequency;
+  return wienPhotonPeakFrequencyLaw(sys, temperature);
 }
 
 /**
@@ -146,7 +220,7 @@ export function wienPhotonPeakFrequency<S extends SystemName>(sys: UnitSystem<S>
  * ```
  */
 export function wienPhotonPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
-  return eval1(sys, wienPhotonPeakWavenumberSI, "the photon peak wavenumber", K, "temperature", temperature, T) as Wavenumber<S>;
+  return wienPhotonPeakWavenumberLaw(sys, temperature);
 }
 
 /**
@@ -165,7 +239,7 @@ export function temperatureFromPeakWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
   peakWavelength: NotAirWavelength<NoInfer<S>>,
 ): Temperature {
-  return eval1(sys, temperatureFromPeakWavelengthSI, "the temperature", T, "peakWavelength", peakWavelength, L) as Temperature;
+  return temperatureFromPeakWavelengthLaw(sys, peakWavelength);
 }
 
 /**
@@ -173,7 +247,7 @@ export function temperatureFromPeakWavelength<S extends SystemName>(
  *
  * @param sys - `SI` or `CGS`
  * @param peakFrequency - ν_max
- * @throws RangeError when ν_max is not finite and > 0
+ * @throws RangeError when ν_max is not finite and > 0 (a subnormal input whose T underflows gives 0 K)
  * @example
  * ```ts
  * import { SI, temperatureFromPeakFrequency, units } from "starlume";
@@ -181,7 +255,7 @@ export function temperatureFromPeakWavelength<S extends SystemName>(
  * ```
  */
 export function temperatureFromPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, peakFrequency: Frequency): Temperature {
-  return eval1(sys, temperatureFromPeakFrequencySI, "the temperature", T, "peakFrequency", peakFrequency, F) as Temperature;
+  return temperatureFromPeakFrequencyLaw(sys, peakFrequency);
 }
 
 /**
@@ -189,7 +263,7 @@ export function temperatureFromPeakFrequency<S extends SystemName>(sys: UnitSyst
  *
  * @param sys - `SI` or `CGS` (the system of `peakWavenumber`)
  * @param peakWavenumber - σ̃_max, in `sys` (m⁻¹ or cm⁻¹)
- * @throws RangeError when σ̃_max is not finite and > 0, or T overflows
+ * @throws RangeError when σ̃_max is not finite and > 0, or T overflows (a subnormal input whose T underflows gives 0 K)
  * @example
  * ```ts
  * import { CGS, temperatureFromPeakWavenumber, units } from "starlume";
@@ -200,7 +274,7 @@ export function temperatureFromPeakWavenumber<S extends SystemName>(
   sys: UnitSystem<S>,
   peakWavenumber: Wavenumber<NoInfer<S>>,
 ): Temperature {
-  return eval1(sys, temperatureFromPeakWavenumberSI, "the temperature", T, "peakWavenumber", peakWavenumber, K) as Temperature;
+  return temperatureFromPeakWavenumberLaw(sys, peakWavenumber);
 }
 
 /**
@@ -219,7 +293,7 @@ export function temperatureFromPhotonPeakWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
   peakWavelength: NotAirWavelength<NoInfer<S>>,
 ): Temperature {
-  return eval1(sys, temperatureFromPhotonPeakWavelengthSI, "the temperature", T, "peakWavelength", peakWavelength, L) as Temperature;
+  return temperatureFromPhotonPeakWavelengthLaw(sys, peakWavelength);
 }
 
 /**
@@ -227,7 +301,7 @@ export function temperatureFromPhotonPeakWavelength<S extends SystemName>(
  *
  * @param sys - `SI` or `CGS`
  * @param peakFrequency - photon-count peak frequency
- * @throws RangeError when the frequency is not finite and > 0
+ * @throws RangeError when the frequency is not finite and > 0 (a subnormal input whose T underflows gives 0 K)
  * @example
  * ```ts
  * import { SI, temperatureFromPhotonPeakFrequency, units } from "starlume";
@@ -235,7 +309,7 @@ export function temperatureFromPhotonPeakWavelength<S extends SystemName>(
  * ```
  */
 export function temperatureFromPhotonPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, peakFrequency: Frequency): Temperature {
-  return eval1(sys, temperatureFromPhotonPeakFrequencySI, "the temperature", T, "peakFrequency", peakFrequency, F) as Temperature;
+  return temperatureFromPhotonPeakFrequencyLaw(sys, peakFrequency);
 }
 
 /**
@@ -243,7 +317,7 @@ export function temperatureFromPhotonPeakFrequency<S extends SystemName>(sys: Un
  *
  * @param sys - `SI` or `CGS` (the system of `peakWavenumber`)
  * @param peakWavenumber - photon-count peak wavenumber, in `sys`
- * @throws RangeError when the wavenumber is not finite and > 0, or T overflows
+ * @throws RangeError when the wavenumber is not finite and > 0, or T overflows (a subnormal input whose T underflows gives 0 K)
  * @example
  * ```ts
  * import { CGS, temperatureFromPhotonPeakWavenumber, units } from "starlume";
@@ -254,5 +328,5 @@ export function temperatureFromPhotonPeakWavenumber<S extends SystemName>(
   sys: UnitSystem<S>,
   peakWavenumber: Wavenumber<NoInfer<S>>,
 ): Temperature {
-  return eval1(sys, temperatureFromPhotonPeakWavenumberSI, "the temperature", T, "peakWavenumber", peakWavenumber, K) as Temperature;
+  return temperatureFromPhotonPeakWavenumberLaw(sys, peakWavenumber);
 }

@@ -112,7 +112,11 @@ export function wienRadianceFrequencySI(frequencyHz: number, temperatureK: numbe
  */
 export function rayleighJeansRelativeErrorFromX(x: number): number {
   requirePositive("x", x, "(dimensionless)");
-  return rjRelErr(x, 0);
+  const v = rjRelErr(x, 0);
+  if (v === Infinity) {
+    throw new RangeError(`x must be <= ~716 for the Rayleigh–Jeans relative error to fit a double; got ${x}`);
+  }
+  return v;
 }
 
 function rjRelErr(x: number, xl: number): number {
@@ -136,10 +140,7 @@ function rjRelErr(x: number, xl: number): number {
     return v * (1 + (xl * ((x - 1) * em1 + x)) / (x * (em1 - x)));
   }
   v = Math.exp(x - Math.log(x));
-  if (v === Infinity) {
-    throw new RangeError(`x must be <= ~716 for the Rayleigh–Jeans relative error to fit a double; got ${x}`);
-  }
-  return v * (1 + (xl * (x - 1)) / x);
+  return v === Infinity ? v : v * (1 + (xl * (x - 1)) / x);
 }
 
 /**
@@ -191,7 +192,29 @@ function rjFromDD(): number {
     if (x === 0) return 0;
     throw new RangeError(`x = hc/(λkT) is ${x}; the Rayleigh–Jeans relative error exceeds the double range`);
   }
-  return rjRelErr(x, dd.lo);
+  const v = rjRelErr(x, dd.lo);
+  if (v === Infinity) {
+    throw new RangeError(`x must be <= ~716 for the Rayleigh–Jeans relative error to fit a double; got ${x}`);
+  }
+  return v;
+}
+
+/**
+ * The Rayleigh–Jeans relative error expm1(x)/x − 1 at (u, T) for a spectral
+ * form (`FORM_LAMBDA_ENERGY` or `FORM_NU_ENERGY`), without input checks;
+ * +Infinity where it exceeds the double range (x ≳ 716). @internal
+ */
+export function rayleighJeansRelativeErrorUnchecked(form: number, u: number, T: number): number {
+  computeX(form, u, T);
+  const x = dd.hi;
+  if (x === 0) return 0;
+  return x === Infinity ? x : rjRelErr(x, dd.lo);
+}
+
+/** Wien's relative error −exp(−x) at (u, T) for a spectral form, without input checks (always finite). @internal */
+export function wienRelativeErrorUnchecked(form: number, u: number, T: number): number {
+  computeX(form, u, T);
+  return -Math.exp(-dd.hi) * (1 - dd.lo);
 }
 
 /**
@@ -211,8 +234,7 @@ function rjFromDD(): number {
 export function wienRelativeErrorWavelengthSI(wavelengthM: number, temperatureK: number): number {
   requirePositive("wavelength", wavelengthM, "m");
   requirePositive("temperature", temperatureK, "K");
-  computeX(FORM_LAMBDA_ENERGY, wavelengthM, temperatureK);
-  return -Math.exp(-dd.hi) * (1 - dd.lo);
+  return wienRelativeErrorUnchecked(FORM_LAMBDA_ENERGY, wavelengthM, temperatureK);
 }
 
 /**
@@ -231,6 +253,5 @@ export function wienRelativeErrorWavelengthSI(wavelengthM: number, temperatureK:
 export function wienRelativeErrorFrequencySI(frequencyHz: number, temperatureK: number): number {
   requirePositive("frequency", frequencyHz, "Hz");
   requirePositive("temperature", temperatureK, "K");
-  computeX(FORM_NU_ENERGY, frequencyHz, temperatureK);
-  return -Math.exp(-dd.hi) * (1 - dd.lo);
+  return wienRelativeErrorUnchecked(FORM_NU_ENERGY, frequencyHz, temperatureK);
 }

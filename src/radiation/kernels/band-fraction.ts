@@ -29,7 +29,7 @@
 import { requirePositive } from "../../internal/checks";
 import { dd, rationalToDD } from "./exact";
 import { FORM_LAMBDA_ENERGY, FORM_NU_ENERGY, computeX } from "./planck-core";
-import { SIGMA_PHOTON, ZETA3, stefanBoltzmannExitanceSI } from "./stefan-boltzmann";
+import { SIGMA_PHOTON, ZETA3, stefanBoltzmannExitanceSI, stefanBoltzmannExitanceUnchecked } from "./stefan-boltzmann";
 
 /** 15/π⁴: normalisation of ∫₀^∞ t³/(eᵗ−1) dt = π⁴/15. */
 const NORM3 = 15 / Math.PI ** 4;
@@ -218,6 +218,66 @@ function xLambda(lambda: number, T: number): number {
   return dd.hi;
 }
 
+// ---- cores without input checks (inputs finite and > 0) ----
+
+/** Fraction (p = 3 energy, p = 2 photons) below λ without input checks. @internal */
+export function fractionBelowWavelengthUnchecked(p: 2 | 3, wavelengthM: number, temperatureK: number): number {
+  const x = xLambda(wavelengthM, temperatureK);
+  return shortSide(p, x, dd.lo);
+}
+
+/** Fraction (p = 3 energy, p = 2 photons) above λ without input checks. @internal */
+export function fractionAboveWavelengthUnchecked(p: 2 | 3, wavelengthM: number, temperatureK: number): number {
+  return longSide(p, xLambda(wavelengthM, temperatureK));
+}
+
+/** Fraction (p = 3 energy, p = 2 photons) between λ₁ and λ₂ without input checks; NaN when λ₂ < λ₁. @internal */
+export function fractionBetweenWavelengthsUnchecked(p: 2 | 3, wavelength1M: number, wavelength2M: number, temperatureK: number): number {
+  if (wavelength2M < wavelength1M) return NaN;
+  const x1 = xLambda(wavelength1M, temperatureK);
+  const x1l = dd.lo;
+  const x2 = xLambda(wavelength2M, temperatureK);
+  return between(p, x1, x1l, x2, dd.lo);
+}
+
+/** Fraction (p = 3 energy, p = 2 photons) above ν without input checks. @internal */
+export function fractionAboveFrequencyUnchecked(p: 2 | 3, frequencyHz: number, temperatureK: number): number {
+  computeX(FORM_NU_ENERGY, frequencyHz, temperatureK);
+  return shortSide(p, dd.hi, dd.lo);
+}
+
+/** Fraction (p = 3 energy, p = 2 photons) below ν without input checks. @internal */
+export function fractionBelowFrequencyUnchecked(p: 2 | 3, frequencyHz: number, temperatureK: number): number {
+  computeX(FORM_NU_ENERGY, frequencyHz, temperatureK);
+  return longSide(p, dd.hi);
+}
+
+/** {@link bandRadianceWavelengthSI} without input checks; +Infinity signals overflow, NaN λ₂ < λ₁. @internal */
+export function bandRadianceWavelengthUnchecked(wavelength1M: number, wavelength2M: number, temperatureK: number): number {
+  const f = fractionBetweenWavelengthsUnchecked(3, wavelength1M, wavelength2M, temperatureK);
+  return f === 0 ? 0 : (stefanBoltzmannExitanceUnchecked(temperatureK) / Math.PI) * f;
+}
+
+/** {@link bandPhotonRadianceWavelengthSI} without input checks; NaN when λ₂ < λ₁. @internal */
+export function bandPhotonRadianceWavelengthUnchecked(wavelength1M: number, wavelength2M: number, temperatureK: number): number {
+  const f = fractionBetweenWavelengthsUnchecked(2, wavelength1M, wavelength2M, temperatureK);
+  if (f === 0 || f !== f) return f;
+  const t3 = temperatureK * temperatureK * temperatureK;
+  const v = ((SIGMA_PHOTON * t3) / Math.PI) * f;
+  if (v !== Infinity && t3 !== Infinity) return v;
+  return Math.exp(Math.log(SIGMA_PHOTON / Math.PI) + 3 * Math.log(temperatureK) + Math.log(f));
+}
+
+/** The checks of the between-wavelengths kernels (RangeError naming the argument, in SI units). */
+function checkBand(wavelength1M: number, wavelength2M: number, temperatureK: number): void {
+  requirePositive("wavelength1", wavelength1M, "m");
+  requirePositive("wavelength2", wavelength2M, "m");
+  requirePositive("temperature", temperatureK, "K");
+  if (wavelength2M < wavelength1M) {
+    throw new RangeError(`wavelength2 must be >= wavelength1 (${wavelength1M} m); got ${wavelength2M}`);
+  }
+}
+
 /**
  * Fraction of a blackbody's exitance emitted at wavelengths below λ,
  * F(0→λT) = (15/π⁴) ∫_{c₂/(λT)}^∞ t³/(eᵗ−1) dt (the handbook "blackbody
@@ -238,8 +298,7 @@ function xLambda(lambda: number, T: number): number {
 export function blackbodyFractionBelowWavelengthSI(wavelengthM: number, temperatureK: number): number {
   requirePositive("wavelength", wavelengthM, "m");
   requirePositive("temperature", temperatureK, "K");
-  const x = xLambda(wavelengthM, temperatureK);
-  return shortSide(3, x, dd.lo);
+  return fractionBelowWavelengthUnchecked(3, wavelengthM, temperatureK);
 }
 
 /**
@@ -258,7 +317,7 @@ export function blackbodyFractionBelowWavelengthSI(wavelengthM: number, temperat
 export function blackbodyFractionAboveWavelengthSI(wavelengthM: number, temperatureK: number): number {
   requirePositive("wavelength", wavelengthM, "m");
   requirePositive("temperature", temperatureK, "K");
-  return longSide(3, xLambda(wavelengthM, temperatureK));
+  return fractionAboveWavelengthUnchecked(3, wavelengthM, temperatureK);
 }
 
 /**
@@ -282,16 +341,8 @@ export function blackbodyFractionBetweenWavelengthsSI(
   wavelength2M: number,
   temperatureK: number,
 ): number {
-  requirePositive("wavelength1", wavelength1M, "m");
-  requirePositive("wavelength2", wavelength2M, "m");
-  requirePositive("temperature", temperatureK, "K");
-  if (wavelength2M < wavelength1M) {
-    throw new RangeError(`wavelength2 must be >= wavelength1 (${wavelength1M} m); got ${wavelength2M}`);
-  }
-  const x1 = xLambda(wavelength1M, temperatureK);
-  const x1l = dd.lo;
-  const x2 = xLambda(wavelength2M, temperatureK);
-  return between(3, x1, x1l, x2, dd.lo);
+  checkBand(wavelength1M, wavelength2M, temperatureK);
+  return fractionBetweenWavelengthsUnchecked(3, wavelength1M, wavelength2M, temperatureK);
 }
 
 /**
@@ -310,8 +361,7 @@ export function blackbodyFractionBetweenWavelengthsSI(
 export function blackbodyFractionAboveFrequencySI(frequencyHz: number, temperatureK: number): number {
   requirePositive("frequency", frequencyHz, "Hz");
   requirePositive("temperature", temperatureK, "K");
-  computeX(FORM_NU_ENERGY, frequencyHz, temperatureK);
-  return shortSide(3, dd.hi, dd.lo);
+  return fractionAboveFrequencyUnchecked(3, frequencyHz, temperatureK);
 }
 
 /**
@@ -329,8 +379,7 @@ export function blackbodyFractionAboveFrequencySI(frequencyHz: number, temperatu
 export function blackbodyFractionBelowFrequencySI(frequencyHz: number, temperatureK: number): number {
   requirePositive("frequency", frequencyHz, "Hz");
   requirePositive("temperature", temperatureK, "K");
-  computeX(FORM_NU_ENERGY, frequencyHz, temperatureK);
-  return longSide(3, dd.hi);
+  return fractionBelowFrequencyUnchecked(3, frequencyHz, temperatureK);
 }
 
 /**
@@ -349,8 +398,7 @@ export function blackbodyFractionBelowFrequencySI(frequencyHz: number, temperatu
 export function blackbodyPhotonFractionBelowWavelengthSI(wavelengthM: number, temperatureK: number): number {
   requirePositive("wavelength", wavelengthM, "m");
   requirePositive("temperature", temperatureK, "K");
-  const x = xLambda(wavelengthM, temperatureK);
-  return shortSide(2, x, dd.lo);
+  return fractionBelowWavelengthUnchecked(2, wavelengthM, temperatureK);
 }
 
 /**
@@ -368,7 +416,7 @@ export function blackbodyPhotonFractionBelowWavelengthSI(wavelengthM: number, te
 export function blackbodyPhotonFractionAboveWavelengthSI(wavelengthM: number, temperatureK: number): number {
   requirePositive("wavelength", wavelengthM, "m");
   requirePositive("temperature", temperatureK, "K");
-  return longSide(2, xLambda(wavelengthM, temperatureK));
+  return fractionAboveWavelengthUnchecked(2, wavelengthM, temperatureK);
 }
 
 /**
@@ -389,16 +437,8 @@ export function blackbodyPhotonFractionBetweenWavelengthsSI(
   wavelength2M: number,
   temperatureK: number,
 ): number {
-  requirePositive("wavelength1", wavelength1M, "m");
-  requirePositive("wavelength2", wavelength2M, "m");
-  requirePositive("temperature", temperatureK, "K");
-  if (wavelength2M < wavelength1M) {
-    throw new RangeError(`wavelength2 must be >= wavelength1 (${wavelength1M} m); got ${wavelength2M}`);
-  }
-  const x1 = xLambda(wavelength1M, temperatureK);
-  const x1l = dd.lo;
-  const x2 = xLambda(wavelength2M, temperatureK);
-  return between(2, x1, x1l, x2, dd.lo);
+  checkBand(wavelength1M, wavelength2M, temperatureK);
+  return fractionBetweenWavelengthsUnchecked(2, wavelength1M, wavelength2M, temperatureK);
 }
 
 /**
@@ -416,8 +456,7 @@ export function blackbodyPhotonFractionBetweenWavelengthsSI(
 export function blackbodyPhotonFractionAboveFrequencySI(frequencyHz: number, temperatureK: number): number {
   requirePositive("frequency", frequencyHz, "Hz");
   requirePositive("temperature", temperatureK, "K");
-  computeX(FORM_NU_ENERGY, frequencyHz, temperatureK);
-  return shortSide(2, dd.hi, dd.lo);
+  return fractionAboveFrequencyUnchecked(2, frequencyHz, temperatureK);
 }
 
 /**
@@ -458,10 +497,6 @@ export function bandPhotonRadianceWavelengthSI(
   wavelength2M: number,
   temperatureK: number,
 ): number {
-  const f = blackbodyPhotonFractionBetweenWavelengthsSI(wavelength1M, wavelength2M, temperatureK);
-  if (f === 0) return 0;
-  const t3 = temperatureK * temperatureK * temperatureK;
-  const v = ((SIGMA_PHOTON * t3) / Math.PI) * f;
-  if (v !== Infinity && t3 !== Infinity) return v;
-  return Math.exp(Math.log(SIGMA_PHOTON / Math.PI) + 3 * Math.log(temperatureK) + Math.log(f));
+  checkBand(wavelength1M, wavelength2M, temperatureK);
+  return bandPhotonRadianceWavelengthUnchecked(wavelength1M, wavelength2M, temperatureK);
 }

@@ -58,18 +58,54 @@ export function responseWeights(curve: ResponseCurveSI, convention: ResponseConv
       throw new RangeError(`response[${i}] must be a finite number >= 0 (dimensionless); got ${ri}`);
     }
   }
-  const w = new Float64Array(n);
+  const w = trapezoidWeights(l, r, convention);
   let total = 0;
+  for (let i = 0; i < n; i++) total += w[i] as number;
+  if (!(total > 0)) throw new RangeError("response must be positive somewhere (its integral is 0)");
+  return w;
+}
+
+/**
+ * The trapezoid weights wᵢ·Rᵢ (·λᵢ for photons) of a curve whose checks the
+ * caller has done (wavelengths in m, finite, > 0, strictly increasing;
+ * response finite, ≥ 0, of the same length). @internal
+ */
+export function trapezoidWeights(wavelengthsM: ArrayLike<number>, response: ArrayLike<number>, convention: ResponseConvention): Float64Array {
+  const l = wavelengthsM;
+  const n = l.length;
+  const w = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     const left = i > 0 ? (l[i] as number) - (l[i - 1] as number) : 0;
     const right = i < n - 1 ? (l[i + 1] as number) - (l[i] as number) : 0;
-    let wi = 0.5 * (left + right) * (r[i] as number);
+    let wi = 0.5 * (left + right) * (response[i] as number);
     if (convention === "photon") wi *= l[i] as number;
     w[i] = wi;
-    total += wi;
   }
-  if (!(total > 0)) throw new RangeError("response must be positive somewhere (its integral is 0)");
   return w;
+}
+
+/** Σ wᵢ B_λ(λᵢ, T) / Σ wᵢ without checks; +Infinity signals overflow. @internal */
+export function bandMeanUnchecked(wavelengthsM: ArrayLike<number>, w: Float64Array, temperatureK: number): number {
+  let num = 0;
+  let den = 0;
+  for (let i = 0; i < w.length; i++) {
+    const wi = w[i] as number;
+    den += wi;
+    if (wi > 0) num += wi * planckLambdaUnchecked(wavelengthsM[i] as number, temperatureK);
+  }
+  return num / den;
+}
+
+/** Σ wᵢ ∂B_λ/∂T(λᵢ, T) / Σ wᵢ without checks; +Infinity signals overflow. @internal */
+export function bandMeanDerivativeTUnchecked(wavelengthsM: ArrayLike<number>, w: Float64Array, temperatureK: number): number {
+  let num = 0;
+  let den = 0;
+  for (let i = 0; i < w.length; i++) {
+    const wi = w[i] as number;
+    den += wi;
+    if (wi > 0) num += wi * planckLambdaDerivativeTUnchecked(wavelengthsM[i] as number, temperatureK);
+  }
+  return num / den;
 }
 
 function checkedT(temperatureK: number): void {
@@ -98,15 +134,7 @@ export function bandMeanRadianceWavelengthSI(
   convention: ResponseConvention = "energy",
 ): number {
   checkedT(temperatureK);
-  const w = responseWeights(curve, convention);
-  let num = 0;
-  let den = 0;
-  for (let i = 0; i < w.length; i++) {
-    const wi = w[i] as number;
-    den += wi;
-    if (wi > 0) num += wi * planckLambdaUnchecked(curve.wavelengthsM[i] as number, temperatureK);
-  }
-  const v = num / den;
+  const v = bandMeanUnchecked(curve.wavelengthsM, responseWeights(curve, convention), temperatureK);
   if (v === Infinity) throw new RangeError(`band-mean radiance overflows the double range at temperature=${temperatureK} K`);
   return v;
 }
@@ -132,15 +160,7 @@ export function bandMeanRadianceDerivativeTSI(
   convention: ResponseConvention = "energy",
 ): number {
   checkedT(temperatureK);
-  const w = responseWeights(curve, convention);
-  let num = 0;
-  let den = 0;
-  for (let i = 0; i < w.length; i++) {
-    const wi = w[i] as number;
-    den += wi;
-    if (wi > 0) num += wi * planckLambdaDerivativeTUnchecked(curve.wavelengthsM[i] as number, temperatureK);
-  }
-  const v = num / den;
+  const v = bandMeanDerivativeTUnchecked(curve.wavelengthsM, responseWeights(curve, convention), temperatureK);
   if (v === Infinity) throw new RangeError(`band-mean ∂B/∂T overflows the double range at temperature=${temperatureK} K`);
   return v;
 }

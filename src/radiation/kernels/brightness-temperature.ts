@@ -31,7 +31,7 @@ function isNormal(v: number): boolean {
  * directly when computable, else NaN). Works in logs whenever a piece leaves
  * the normal double range.
  */
-function invert(num: number, lnNum: number, y: number, lnY: number, what: string): number {
+function invert(num: number, lnNum: number, y: number, lnY: number): number {
   let ell: number;
   let lnEll: number;
   if (isNormal(y)) {
@@ -49,8 +49,54 @@ function invert(num: number, lnNum: number, y: number, lnY: number, what: string
     if (isNormal(T)) return T;
   }
   const lnT = lnNum - lnEll;
-  if (lnT > LN_MAX) throw new RangeError(`${what} overflows the double range`);
-  return Math.exp(lnT);
+  return lnT > LN_MAX ? Infinity : Math.exp(lnT);
+}
+
+/** T_b from (λ, B_λ) without input checks; +Infinity signals overflow. @internal */
+export function brightnessTemperatureWavelengthUnchecked(wavelengthM: number, radiance: number): number {
+  const l = wavelengthM;
+  const lnL = Math.log(l);
+  const lnY = LN_C1L - 5 * lnL - Math.log(radiance);
+  let y = NaN;
+  let num = NaN;
+  if (l >= 1e-50 && l <= 1e50) {
+    const l2 = l * l;
+    y = C1L / (l2 * l2 * l) / radiance;
+    num = C2_HI / l;
+  }
+  return invert(num, LN_C2 - lnL, y, lnY);
+}
+
+/** T_b from (ν, B_ν) without input checks; +Infinity signals overflow. @internal */
+export function brightnessTemperatureFrequencyUnchecked(frequencyHz: number, radiance: number): number {
+  const nu = frequencyHz;
+  const lnNu = Math.log(nu);
+  const lnY = LN_TWO_H_OVER_C2 + 3 * lnNu - Math.log(radiance);
+  let y = NaN;
+  let num = NaN;
+  if (nu >= 1e-80 && nu <= 1e80) {
+    y = (TWO_H_OVER_C2 * (nu * nu * nu)) / radiance;
+    num = H_OVER_K_HI * nu;
+  }
+  return invert(num, LN_H_OVER_K + lnNu, y, lnY);
+}
+
+/** T_RJ from (λ, B_λ) without input checks; +Infinity signals overflow. @internal */
+export function rayleighJeansBrightnessTemperatureWavelengthUnchecked(wavelengthM: number, radiance: number): number {
+  const l2 = wavelengthM * wavelengthM;
+  const v = (l2 * l2 * radiance) / (2 * C * K_B);
+  if (isNormal(v) && isNormal(l2) && l2 * l2 !== Infinity) return v;
+  const lnT = 4 * Math.log(wavelengthM) + Math.log(radiance) - Math.log(2 * C * K_B);
+  return lnT > LN_MAX ? Infinity : Math.exp(lnT);
+}
+
+/** T_RJ from (ν, B_ν) without input checks; +Infinity signals overflow. @internal */
+export function rayleighJeansBrightnessTemperatureFrequencyUnchecked(frequencyHz: number, radiance: number): number {
+  const n2 = frequencyHz * frequencyHz;
+  const v = (C * C * radiance) / (2 * K_B) / n2;
+  if (isNormal(v) && isNormal(n2)) return v;
+  const lnT = 2 * Math.log(C) + Math.log(radiance) - Math.log(2 * K_B) - 2 * Math.log(frequencyHz);
+  return lnT > LN_MAX ? Infinity : Math.exp(lnT);
 }
 
 /**
@@ -70,17 +116,9 @@ function invert(num: number, lnNum: number, y: number, lnY: number, what: string
 export function brightnessTemperatureWavelengthSI(wavelengthM: number, radiance: number): number {
   requirePositive("wavelength", wavelengthM, "m");
   requirePositive("radiance", radiance, "W m^-2 sr^-1 m^-1");
-  const l = wavelengthM;
-  const lnL = Math.log(l);
-  const lnY = LN_C1L - 5 * lnL - Math.log(radiance);
-  let y = NaN;
-  let num = NaN;
-  if (l >= 1e-50 && l <= 1e50) {
-    const l2 = l * l;
-    y = C1L / (l2 * l2 * l) / radiance;
-    num = C2_HI / l;
-  }
-  return invert(num, LN_C2 - lnL, y, lnY, `brightness temperature (wavelength=${l} m, radiance=${radiance})`);
+  const v = brightnessTemperatureWavelengthUnchecked(wavelengthM, radiance);
+  if (v === Infinity) throw new RangeError(`brightness temperature (wavelength=${wavelengthM} m, radiance=${radiance}) overflows the double range`);
+  return v;
 }
 
 /**
@@ -100,16 +138,9 @@ export function brightnessTemperatureWavelengthSI(wavelengthM: number, radiance:
 export function brightnessTemperatureFrequencySI(frequencyHz: number, radiance: number): number {
   requirePositive("frequency", frequencyHz, "Hz");
   requirePositive("radiance", radiance, "W m^-2 sr^-1 Hz^-1");
-  const nu = frequencyHz;
-  const lnNu = Math.log(nu);
-  const lnY = LN_TWO_H_OVER_C2 + 3 * lnNu - Math.log(radiance);
-  let y = NaN;
-  let num = NaN;
-  if (nu >= 1e-80 && nu <= 1e80) {
-    y = (TWO_H_OVER_C2 * (nu * nu * nu)) / radiance;
-    num = H_OVER_K_HI * nu;
-  }
-  return invert(num, LN_H_OVER_K + lnNu, y, lnY, `brightness temperature (frequency=${nu} Hz, radiance=${radiance})`);
+  const v = brightnessTemperatureFrequencyUnchecked(frequencyHz, radiance);
+  if (v === Infinity) throw new RangeError(`brightness temperature (frequency=${frequencyHz} Hz, radiance=${radiance}) overflows the double range`);
+  return v;
 }
 
 /**
@@ -129,12 +160,9 @@ export function brightnessTemperatureFrequencySI(frequencyHz: number, radiance: 
 export function rayleighJeansBrightnessTemperatureWavelengthSI(wavelengthM: number, radiance: number): number {
   requirePositive("wavelength", wavelengthM, "m");
   requirePositive("radiance", radiance, "W m^-2 sr^-1 m^-1");
-  const l2 = wavelengthM * wavelengthM;
-  const v = (l2 * l2 * radiance) / (2 * C * K_B);
-  if (isNormal(v) && isNormal(l2) && l2 * l2 !== Infinity) return v;
-  const lnT = 4 * Math.log(wavelengthM) + Math.log(radiance) - Math.log(2 * C * K_B);
-  if (lnT > LN_MAX) throw new RangeError(`Rayleigh–Jeans temperature overflows the double range for wavelength=${wavelengthM} m`);
-  return Math.exp(lnT);
+  const v = rayleighJeansBrightnessTemperatureWavelengthUnchecked(wavelengthM, radiance);
+  if (v === Infinity) throw new RangeError(`Rayleigh–Jeans temperature overflows the double range for wavelength=${wavelengthM} m`);
+  return v;
 }
 
 /**
@@ -154,10 +182,7 @@ export function rayleighJeansBrightnessTemperatureWavelengthSI(wavelengthM: numb
 export function rayleighJeansBrightnessTemperatureFrequencySI(frequencyHz: number, radiance: number): number {
   requirePositive("frequency", frequencyHz, "Hz");
   requirePositive("radiance", radiance, "W m^-2 sr^-1 Hz^-1");
-  const n2 = frequencyHz * frequencyHz;
-  const v = (C * C * radiance) / (2 * K_B) / n2;
-  if (isNormal(v) && isNormal(n2)) return v;
-  const lnT = 2 * Math.log(C) + Math.log(radiance) - Math.log(2 * K_B) - 2 * Math.log(frequencyHz);
-  if (lnT > LN_MAX) throw new RangeError(`Rayleigh–Jeans temperature overflows the double range for frequency=${frequencyHz} Hz`);
-  return Math.exp(lnT);
+  const v = rayleighJeansBrightnessTemperatureFrequencyUnchecked(frequencyHz, radiance);
+  if (v === Infinity) throw new RangeError(`Rayleigh–Jeans temperature overflows the double range for frequency=${frequencyHz} Hz`);
+  return v;
 }

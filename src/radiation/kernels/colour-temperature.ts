@@ -84,21 +84,54 @@ function brent(f: (u: number) => number, a: number, b: number, fa: number, fb: n
   return b;
 }
 
-function solve(lnRatioAt: (T: number) => number, lnTarget: number, what: string): number {
+/**
+ * The ratios at the two ends of the search range, written by
+ * {@link solveColourTemperatureUnchecked} when it finds no root (for the
+ * caller's message). @internal
+ */
+export const colourTemperatureReach = {
+  /** The ratio at 1e-2 K. */
+  atMin: NaN,
+  /** The ratio at 1e10 K. */
+  atMax: NaN,
+};
+
+/**
+ * The temperature in [1e-2 K, 1e10 K] where `lnRatioAt(T)` equals
+ * `lnTarget` (Brent on ln T), or NaN when the target lies outside the range
+ * of `lnRatioAt` over that bracket; then {@link colourTemperatureReach}
+ * holds the ratios at its two ends. No input checks. @internal
+ */
+export function solveColourTemperatureUnchecked(lnRatioAt: (T: number) => number, lnTarget: number): number {
   const u0 = Math.log(COLOUR_TEMPERATURE_MIN_K);
   const u1 = Math.log(COLOUR_TEMPERATURE_MAX_K);
   const f = (u: number): number => lnRatioAt(Math.exp(u)) - lnTarget;
   const f0 = f(u0);
   const f1 = f(u1);
   if (!(f0 <= 0 && f1 >= 0) && !(f0 >= 0 && f1 <= 0)) {
-    const r0 = Math.exp(f0 + lnTarget);
-    const r1 = Math.exp(f1 + lnTarget);
-    throw new RangeError(
-      `ratio ${Math.exp(lnTarget)} is not produced by any blackbody between ${COLOUR_TEMPERATURE_MIN_K} K and ` +
-        `${COLOUR_TEMPERATURE_MAX_K} K: ${what} ranges from ${r0} (at ${COLOUR_TEMPERATURE_MIN_K} K) to ${r1} (at ${COLOUR_TEMPERATURE_MAX_K} K)`,
-    );
+    colourTemperatureReach.atMin = Math.exp(f0 + lnTarget);
+    colourTemperatureReach.atMax = Math.exp(f1 + lnTarget);
+    return NaN;
   }
   return Math.exp(brent(f, u0, u1, f0, f1));
+}
+
+/**
+ * The RangeError for a ratio no blackbody in the search range produces,
+ * after {@link solveColourTemperatureUnchecked} returned NaN. @internal
+ */
+export function unreachableRatioError(ratio: number, what: string): RangeError {
+  return new RangeError(
+    `ratio ${ratio} is not produced by any blackbody between ${COLOUR_TEMPERATURE_MIN_K} K and ` +
+      `${COLOUR_TEMPERATURE_MAX_K} K: ${what} ranges from ${colourTemperatureReach.atMin} (at ${COLOUR_TEMPERATURE_MIN_K} K) ` +
+      `to ${colourTemperatureReach.atMax} (at ${COLOUR_TEMPERATURE_MAX_K} K)`,
+  );
+}
+
+function solve(lnRatioAt: (T: number) => number, lnTarget: number, what: string): number {
+  const t = solveColourTemperatureUnchecked(lnRatioAt, lnTarget);
+  if (t !== t) throw unreachableRatioError(Math.exp(lnTarget), what);
+  return t;
 }
 
 /**

@@ -10,7 +10,9 @@
  *
  * Products are formed directly when every intermediate stays a normal double
  * and otherwise in logarithms, so no finite input gives NaN or Infinity; a
- * result that truly exceeds the double range throws a RangeError.
+ * result that truly exceeds the double range throws a RangeError (the
+ * `…Unchecked` cores, for callers that have checked their inputs, return
+ * +Infinity there instead).
  * Source: J. Stefan (1879), L. Boltzmann (1884); IAU 2015 B3 for L = 4πR²σT⁴.
  */
 import { C, H, K_B, SIGMA } from "../../constants/values";
@@ -37,19 +39,68 @@ export const ZETA3 = apery();
 export const SIGMA_PHOTON = (4 * Math.PI * ZETA3 * (K_B / H) ** 3) / (C * C);
 
 const FOUR_PI = 4 * Math.PI;
-const LN_MAX = Math.log(Number.MAX_VALUE);
 const SQRT_4PI_SIGMA = Math.sqrt(FOUR_PI * SIGMA);
 const QRT_SIGMA = Math.sqrt(Math.sqrt(SIGMA));
 const NORMAL_MIN = 2.2250738585072014e-308;
 
-/** exp(lnV) with explicit overflow error; used when the direct product is unsafe. */
-function fromLog(lnV: number, what: string, args: string): number {
-  if (lnV > LN_MAX) throw new RangeError(`${what} overflows the double range for ${args}`);
-  return Math.exp(lnV);
+/** The checked kernels' RangeError for a true result beyond the double range. */
+function overflow(what: string, args: string): RangeError {
+  return new RangeError(`${what} overflows the double range for ${args}`);
 }
 
 function normal(v: number): boolean {
   return v >= NORMAL_MIN && v !== Infinity;
+}
+
+/** σT⁴ without input checks (T finite, > 0); +Infinity signals overflow. @internal */
+export function stefanBoltzmannExitanceUnchecked(temperatureK: number): number {
+  const t2 = temperatureK * temperatureK;
+  const v = SIGMA * t2 * t2;
+  if (normal(t2) && normal(v)) return v;
+  return Math.exp(Math.log(SIGMA) + 4 * Math.log(temperatureK));
+}
+
+/** (M/σ)^¼ without input checks (M finite, > 0). @internal */
+export function temperatureFromExitanceUnchecked(exitanceWm2: number): number {
+  return Math.sqrt(Math.sqrt(exitanceWm2)) / QRT_SIGMA; // no overflow of M/σ for huge M
+}
+
+/** 4πR²σT⁴ without input checks; +Infinity signals overflow. @internal */
+export function luminosityFromRadiusTemperatureUnchecked(radiusM: number, temperatureK: number): number {
+  const rt2 = radiusM * temperatureK * temperatureK;
+  const v = FOUR_PI * SIGMA * rt2 * rt2;
+  if (normal(rt2) && normal(v)) return v;
+  return Math.exp(Math.log(FOUR_PI * SIGMA) + 2 * Math.log(radiusM) + 4 * Math.log(temperatureK));
+}
+
+/** √(L/(4πσ))/T² without input checks; +Infinity signals overflow. @internal */
+export function radiusFromLuminosityTemperatureUnchecked(luminosityW: number, temperatureK: number): number {
+  const t2 = temperatureK * temperatureK;
+  const v = Math.sqrt(luminosityW) / SQRT_4PI_SIGMA / t2;
+  if (normal(t2) && normal(v)) return v;
+  return Math.exp(0.5 * (Math.log(luminosityW) - Math.log(FOUR_PI * SIGMA)) - 2 * Math.log(temperatureK));
+}
+
+/** (L/(4πσR²))^¼ without input checks (never overflows). @internal */
+export function temperatureFromLuminosityRadiusUnchecked(luminosityW: number, radiusM: number): number {
+  const q = Math.sqrt(luminosityW) / SQRT_4PI_SIGMA / radiusM; // = T²
+  if (normal(q)) return Math.sqrt(q);
+  return Math.exp(0.25 * (Math.log(luminosityW) - Math.log(FOUR_PI * SIGMA)) - 0.5 * Math.log(radiusM));
+}
+
+/** σ_γT³ without input checks; +Infinity signals overflow. @internal */
+export function photonExitanceUnchecked(temperatureK: number): number {
+  const v = SIGMA_PHOTON * temperatureK * temperatureK * temperatureK;
+  if (normal(v)) return v;
+  return Math.exp(Math.log(SIGMA_PHOTON) + 3 * Math.log(temperatureK));
+}
+
+/** 4πR²σ_γT³ without input checks; +Infinity signals overflow. @internal */
+export function photonEmissionRateUnchecked(radiusM: number, temperatureK: number): number {
+  const r2 = radiusM * radiusM;
+  const v = FOUR_PI * SIGMA_PHOTON * r2 * (temperatureK * temperatureK * temperatureK);
+  if (normal(r2) && normal(v)) return v;
+  return Math.exp(Math.log(FOUR_PI * SIGMA_PHOTON) + 2 * Math.log(radiusM) + 3 * Math.log(temperatureK));
 }
 
 /**
@@ -66,10 +117,9 @@ function normal(v: number): boolean {
  */
 export function stefanBoltzmannExitanceSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  const t2 = temperatureK * temperatureK;
-  const v = SIGMA * t2 * t2;
-  if (normal(t2) && normal(v)) return v;
-  return fromLog(Math.log(SIGMA) + 4 * Math.log(temperatureK), "exitance σT⁴", `temperature=${temperatureK} K`);
+  const v = stefanBoltzmannExitanceUnchecked(temperatureK);
+  if (v === Infinity) throw overflow("exitance σT⁴", `temperature=${temperatureK} K`);
+  return v;
 }
 
 /**
@@ -85,7 +135,7 @@ export function stefanBoltzmannExitanceSI(temperatureK: number): number {
  */
 export function temperatureFromExitanceSI(exitanceWm2: number): number {
   requirePositive("exitance", exitanceWm2, "W m^-2");
-  return Math.sqrt(Math.sqrt(exitanceWm2)) / QRT_SIGMA; // no overflow of M/σ for huge M
+  return temperatureFromExitanceUnchecked(exitanceWm2);
 }
 
 /**
@@ -104,14 +154,9 @@ export function temperatureFromExitanceSI(exitanceWm2: number): number {
 export function luminosityFromRadiusTemperatureSI(radiusM: number, temperatureK: number): number {
   requirePositive("radius", radiusM, "m");
   requirePositive("temperature", temperatureK, "K");
-  const rt2 = radiusM * temperatureK * temperatureK;
-  const v = FOUR_PI * SIGMA * rt2 * rt2;
-  if (normal(rt2) && normal(v)) return v;
-  return fromLog(
-    Math.log(FOUR_PI * SIGMA) + 2 * Math.log(radiusM) + 4 * Math.log(temperatureK),
-    "luminosity 4πR²σT⁴",
-    `radius=${radiusM} m, temperature=${temperatureK} K`,
-  );
+  const v = luminosityFromRadiusTemperatureUnchecked(radiusM, temperatureK);
+  if (v === Infinity) throw overflow("luminosity 4πR²σT⁴", `radius=${radiusM} m, temperature=${temperatureK} K`);
+  return v;
 }
 
 /**
@@ -130,14 +175,9 @@ export function luminosityFromRadiusTemperatureSI(radiusM: number, temperatureK:
 export function radiusFromLuminosityTemperatureSI(luminosityW: number, temperatureK: number): number {
   requirePositive("luminosity", luminosityW, "W");
   requirePositive("temperature", temperatureK, "K");
-  const t2 = temperatureK * temperatureK;
-  const v = Math.sqrt(luminosityW) / SQRT_4PI_SIGMA / t2;
-  if (normal(t2) && normal(v)) return v;
-  return fromLog(
-    0.5 * (Math.log(luminosityW) - Math.log(FOUR_PI * SIGMA)) - 2 * Math.log(temperatureK),
-    "radius",
-    `luminosity=${luminosityW} W, temperature=${temperatureK} K`,
-  );
+  const v = radiusFromLuminosityTemperatureUnchecked(luminosityW, temperatureK);
+  if (v === Infinity) throw overflow("radius", `luminosity=${luminosityW} W, temperature=${temperatureK} K`);
+  return v;
 }
 
 /**
@@ -157,9 +197,7 @@ export function radiusFromLuminosityTemperatureSI(luminosityW: number, temperatu
 export function temperatureFromLuminosityRadiusSI(luminosityW: number, radiusM: number): number {
   requirePositive("luminosity", luminosityW, "W");
   requirePositive("radius", radiusM, "m");
-  const q = Math.sqrt(luminosityW) / SQRT_4PI_SIGMA / radiusM; // = T²
-  if (normal(q)) return Math.sqrt(q);
-  return Math.exp(0.25 * (Math.log(luminosityW) - Math.log(FOUR_PI * SIGMA)) - 0.5 * Math.log(radiusM));
+  return temperatureFromLuminosityRadiusUnchecked(luminosityW, radiusM);
 }
 
 /**
@@ -177,9 +215,9 @@ export function temperatureFromLuminosityRadiusSI(luminosityW: number, radiusM: 
  */
 export function photonExitanceSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  const v = SIGMA_PHOTON * temperatureK * temperatureK * temperatureK;
-  if (normal(v)) return v;
-  return fromLog(Math.log(SIGMA_PHOTON) + 3 * Math.log(temperatureK), "photon exitance", `temperature=${temperatureK} K`);
+  const v = photonExitanceUnchecked(temperatureK);
+  if (v === Infinity) throw overflow("photon exitance", `temperature=${temperatureK} K`);
+  return v;
 }
 
 /**
@@ -197,12 +235,7 @@ export function photonExitanceSI(temperatureK: number): number {
 export function photonEmissionRateSI(radiusM: number, temperatureK: number): number {
   requirePositive("radius", radiusM, "m");
   requirePositive("temperature", temperatureK, "K");
-  const r2 = radiusM * radiusM;
-  const v = FOUR_PI * SIGMA_PHOTON * r2 * (temperatureK * temperatureK * temperatureK);
-  if (normal(r2) && normal(v)) return v;
-  return fromLog(
-    Math.log(FOUR_PI * SIGMA_PHOTON) + 2 * Math.log(radiusM) + 3 * Math.log(temperatureK),
-    "photon emission rate",
-    `radius=${radiusM} m, temperature=${temperatureK} K`,
-  );
+  const v = photonEmissionRateUnchecked(radiusM, temperatureK);
+  if (v === Infinity) throw overflow("photon emission rate", `radius=${radiusM} m, temperature=${temperatureK} K`);
+  return v;
 }

@@ -83,9 +83,70 @@ export const WIEN_B_PHOTON_FREQUENCY = (WIEN_X_PHOTON_FREQUENCY * K_B) / H;
 /** Photon-count wavenumber displacement constant x₂k/(hc), m^-1 K^-1. */
 export const WIEN_B_PHOTON_WAVENUMBER = (WIEN_X_PHOTON_FREQUENCY * K_B) / (H * C);
 
-function finite(v: number, what: string, arg: string): number {
+/** {@link wienPeakWavelengthSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function wienPeakWavelengthUnchecked(temperatureK: number): number {
+  return WIEN_B_WAVELENGTH / temperatureK;
+}
+
+/** {@link wienPeakFrequencySI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function wienPeakFrequencyUnchecked(temperatureK: number): number {
+  return WIEN_B_FREQUENCY * temperatureK;
+}
+
+/** {@link wienPeakWavenumberSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function wienPeakWavenumberUnchecked(temperatureK: number): number {
+  return WIEN_B_WAVENUMBER * temperatureK;
+}
+
+/** {@link wienPhotonPeakWavelengthSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function wienPhotonPeakWavelengthUnchecked(temperatureK: number): number {
+  return WIEN_B_PHOTON_WAVELENGTH / temperatureK;
+}
+
+/** {@link wienPhotonPeakFrequencySI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function wienPhotonPeakFrequencyUnchecked(temperatureK: number): number {
+  return WIEN_B_PHOTON_FREQUENCY * temperatureK;
+}
+
+/** {@link wienPhotonPeakWavenumberSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function wienPhotonPeakWavenumberUnchecked(temperatureK: number): number {
+  return WIEN_B_PHOTON_WAVENUMBER * temperatureK;
+}
+
+/** {@link temperatureFromPeakWavelengthSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function temperatureFromPeakWavelengthUnchecked(peakWavelengthM: number): number {
+  return WIEN_B_WAVELENGTH / peakWavelengthM;
+}
+
+/** {@link temperatureFromPeakFrequencySI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function temperatureFromPeakFrequencyUnchecked(peakFrequencyHz: number): number {
+  return peakFrequencyHz / WIEN_B_FREQUENCY;
+}
+
+/** {@link temperatureFromPeakWavenumberSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function temperatureFromPeakWavenumberUnchecked(peakWavenumberPerM: number): number {
+  return peakWavenumberPerM / WIEN_B_WAVENUMBER;
+}
+
+/** {@link temperatureFromPhotonPeakWavelengthSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function temperatureFromPhotonPeakWavelengthUnchecked(peakWavelengthM: number): number {
+  return WIEN_B_PHOTON_WAVELENGTH / peakWavelengthM;
+}
+
+/** {@link temperatureFromPhotonPeakFrequencySI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function temperatureFromPhotonPeakFrequencyUnchecked(peakFrequencyHz: number): number {
+  return peakFrequencyHz / WIEN_B_PHOTON_FREQUENCY;
+}
+
+/** {@link temperatureFromPhotonPeakWavenumberSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+export function temperatureFromPhotonPeakWavenumberUnchecked(peakWavenumberPerM: number): number {
+  return peakWavenumberPerM / WIEN_B_PHOTON_WAVENUMBER;
+}
+
+/** `v`, or the checked kernels' RangeError when it left the double range (the message is built only then). */
+function finite(v: number, what: string, name: string, value: number, unit: string): number {
   if (v === Infinity || v === 0) {
-    throw new RangeError(`${what} is outside the double range for ${arg}`);
+    throw new RangeError(`${what} is outside the double range for ${name}=${value} ${unit}`);
   }
   return v;
 }
@@ -104,7 +165,7 @@ function finite(v: number, what: string, arg: string): number {
  */
 export function wienPeakWavelengthSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(WIEN_B_WAVELENGTH / temperatureK, "peak wavelength", `temperature=${temperatureK} K`);
+  return finite(wienPeakWavelengthUnchecked(temperatureK), "peak wavelength", "temperature", temperatureK, "K");
 }
 
 /**
@@ -122,7 +183,7 @@ export function wienPeakWavelengthSI(temperatureK: number): number {
  */
 export function wienPeakFrequencySI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(WIEN_B_FREQUENCY * temperatureK, "peak frequency", `temperature=${temperatureK} K`);
+  return finite(wienPeakFrequencyUnchecked(temperatureK), "peak frequency", "temperature", temperatureK, "K");
 }
 
 /**
@@ -140,7 +201,7 @@ export function wienPeakFrequencySI(temperatureK: number): number {
  */
 export function wienPeakWavenumberSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(WIEN_B_WAVENUMBER * temperatureK, "peak wavenumber", `temperature=${temperatureK} K`);
+  return finite(wienPeakWavenumberUnchecked(temperatureK), "peak wavenumber", "temperature", temperatureK, "K");
 }
 
 /**
@@ -157,7 +218,7 @@ export function wienPeakWavenumberSI(temperatureK: number): number {
  */
 export function wienPhotonPeakWavelengthSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(WIEN_B_PHOTON_WAVELENGTH / temperatureK, "photon peak wavelength", `temperature=${temperatureK} K`);
+  return finite(wienPhotonPeakWavelengthUnchecked(temperatureK), "photon peak wavelength", "temperature", temperatureK, "K");
 }
 
 /**
@@ -174,7 +235,7 @@ export function wienPhotonPeakWavelengthSI(temperatureK: number): number {
  */
 export function wienPhotonPeakFrequencySI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(WIEN_B_PHOTON_FREQUENCY * temperatureK, "photon peak frequency", `temperature=${temperatureK} K`);
+  return finite(wienPhotonPeakFrequencyUnchecked(temperatureK), "photon peak frequency", "temperature", temperatureK, "K");
 }
 
 /**
@@ -191,7 +252,7 @@ export function wienPhotonPeakFrequencySI(temperatureK: number): number {
  */
 export function wienPhotonPeakWavenumberSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
-  return finite(WIEN_B_PHOTON_WAVENUMBER * temperatureK, "photon peak wavenumber", `temperature=${temperatureK} K`);
+  return finite(wienPhotonPeakWavenumberUnchecked(temperatureK), "photon peak wavenumber", "temperature", temperatureK, "K");
 }
 
 /**
@@ -208,7 +269,7 @@ export function wienPhotonPeakWavenumberSI(temperatureK: number): number {
  */
 export function temperatureFromPeakWavelengthSI(peakWavelengthM: number): number {
   requirePositive("peakWavelength", peakWavelengthM, "m");
-  return finite(WIEN_B_WAVELENGTH / peakWavelengthM, "temperature", `peakWavelength=${peakWavelengthM} m`);
+  return finite(temperatureFromPeakWavelengthUnchecked(peakWavelengthM), "temperature", "peakWavelength", peakWavelengthM, "m");
 }
 
 /**
@@ -225,7 +286,7 @@ export function temperatureFromPeakWavelengthSI(peakWavelengthM: number): number
  */
 export function temperatureFromPeakFrequencySI(peakFrequencyHz: number): number {
   requirePositive("peakFrequency", peakFrequencyHz, "Hz");
-  return finite(peakFrequencyHz / WIEN_B_FREQUENCY, "temperature", `peakFrequency=${peakFrequencyHz} Hz`);
+  return finite(temperatureFromPeakFrequencyUnchecked(peakFrequencyHz), "temperature", "peakFrequency", peakFrequencyHz, "Hz");
 }
 
 /**
@@ -242,7 +303,7 @@ export function temperatureFromPeakFrequencySI(peakFrequencyHz: number): number 
  */
 export function temperatureFromPeakWavenumberSI(peakWavenumberPerM: number): number {
   requirePositive("peakWavenumber", peakWavenumberPerM, "m^-1");
-  return finite(peakWavenumberPerM / WIEN_B_WAVENUMBER, "temperature", `peakWavenumber=${peakWavenumberPerM} m^-1`);
+  return finite(temperatureFromPeakWavenumberUnchecked(peakWavenumberPerM), "temperature", "peakWavenumber", peakWavenumberPerM, "m^-1");
 }
 
 /**
@@ -258,7 +319,7 @@ export function temperatureFromPeakWavenumberSI(peakWavenumberPerM: number): num
  */
 export function temperatureFromPhotonPeakWavelengthSI(peakWavelengthM: number): number {
   requirePositive("peakWavelength", peakWavelengthM, "m");
-  return finite(WIEN_B_PHOTON_WAVELENGTH / peakWavelengthM, "temperature", `peakWavelength=${peakWavelengthM} m`);
+  return finite(temperatureFromPhotonPeakWavelengthUnchecked(peakWavelengthM), "temperature", "peakWavelength", peakWavelengthM, "m");
 }
 
 /**
@@ -274,7 +335,7 @@ export function temperatureFromPhotonPeakWavelengthSI(peakWavelengthM: number): 
  */
 export function temperatureFromPhotonPeakFrequencySI(peakFrequencyHz: number): number {
   requirePositive("peakFrequency", peakFrequencyHz, "Hz");
-  return finite(peakFrequencyHz / WIEN_B_PHOTON_FREQUENCY, "temperature", `peakFrequency=${peakFrequencyHz} Hz`);
+  return finite(temperatureFromPhotonPeakFrequencyUnchecked(peakFrequencyHz), "temperature", "peakFrequency", peakFrequencyHz, "Hz");
 }
 
 /**
@@ -290,9 +351,5 @@ export function temperatureFromPhotonPeakFrequencySI(peakFrequencyHz: number): n
  */
 export function temperatureFromPhotonPeakWavenumberSI(peakWavenumberPerM: number): number {
   requirePositive("peakWavenumber", peakWavenumberPerM, "m^-1");
-  return finite(
-    peakWavenumberPerM / WIEN_B_PHOTON_WAVENUMBER,
-    "temperature",
-    `peakWavenumber=${peakWavenumberPerM} m^-1`,
-  );
+  return finite(temperatureFromPhotonPeakWavenumberUnchecked(peakWavenumberPerM), "temperature", "peakWavenumber", peakWavenumberPerM, "m^-1");
 }
