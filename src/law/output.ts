@@ -45,7 +45,8 @@ export class LawOutput<D extends Dimension = Dimension> {
   reason(sys: UnitSystem<SystemName>, valueSI: number, inputs: readonly LawInput[], values: readonly number[]): string {
     const args = inputs.map((input, i) => `${input.name}=${show(values[i] as number)}${unitSuffix(sys.coherentUnit(input.kind.dimension))}`).join(", ");
     if (valueSI !== valueSI) return `${this.name} has no finite value for ${args}`;
-    return `${this.name} overflows the double range in ${sys.coherentUnit(this.kind.dimension) || "its unit"} for ${args}`;
+    const unit = sys.coherentUnit(this.kind.dimension);
+    return `${this.name} overflows the double range${unit === "" ? "" : ` in ${unit}`} for ${args}`;
   }
 }
 
