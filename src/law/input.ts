@@ -36,6 +36,12 @@ export interface LawInputOptions<V extends boolean = boolean> {
    * does not compile (compile time only; nothing is checked at run time).
    */
   readonly vacuum?: V;
+  /**
+   * Unit text messages print for a dimensionless input (`"mag"` for a
+   * magnitude), which has no coherent unit to print. Not allowed on a
+   * dimensioned input: that one always prints the caller's coherent unit.
+   */
+  readonly unit?: string;
 }
 
 const POSITIVE = 0;
@@ -64,6 +70,8 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
   readonly max: number;
   /** Note printed with a range violation. */
   readonly rangeNote: string;
+  /** Unit text of a dimensionless input (`"mag"`), or `""`. */
+  readonly unit: string;
   private readonly code: number;
   private readonly ranged: boolean;
   /** CGS → SI scale of this input (SI needs none). */
@@ -84,6 +92,8 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
     this.ranged = this.min !== -Infinity || this.max !== Infinity;
     this.rangeNote = options.rangeNote ?? "";
     const d = kind.dimension;
+    this.unit = options.unit ?? "";
+    if (this.unit !== "" && SI.coherentUnit(d) !== "") throw new RangeError(`input ${name}: a unit label is only for dimensionless inputs; ${kind.name} prints its system's unit`);
     this.cgs = exactScale(-2 * d.length - 3 * d.mass);
   }
 
@@ -151,17 +161,29 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
   /** The message for a value that {@link LawInput.rowToSI} turns into NaN. */
   reason(sys: UnitSystem<SystemName>, value: number): string {
     const d = this.kind.dimension;
-    const unit = unitSuffix(sys.coherentUnit(d));
+    const unit = this.unitIn(sys);
     if (!this.passes(value)) return `${this.name} must be ${WORDS[this.code]}${unit}; got ${show(value)}`;
     const v = sys.name === "SI" ? value : this.cgs.apply(value);
     if (this.ranged && v - v === 0 && !(v >= this.min && v <= this.max)) {
       const lo = sys.name === "SI" ? this.min : this.cgs.invert(this.min);
       const hi = sys.name === "SI" ? this.max : this.cgs.invert(this.max);
       const note = this.rangeNote === "" ? "" : ` (${this.rangeNote})`;
-      return `${this.name} must be in [${lo}, ${hi}]${unit}${note}; got ${show(value)}`;
+      // a bound moved out of SI carries the conversion's rounding: print it to 15 digits (0.00001 cm, not 0.000009999999999999999)
+      const converted = sys.name !== "SI" && this.cgs.exp10 !== 0;
+      return `${this.name} must be in [${bound(lo, converted)}, ${bound(hi, converted)}]${unit}${note}; got ${show(value)}`;
     }
     return `${this.name} = ${show(value)}${unit} is outside the double range once converted to SI (${show(v)}${unitSuffix(SI.coherentUnit(d))})`;
   }
+
+  /** The unit messages print after a value of this input in `sys` (with its leading space), or `""`. */
+  unitIn(sys: UnitSystem<SystemName>): string {
+    return this.unit !== "" ? ` ${this.unit}` : unitSuffix(sys.coherentUnit(this.kind.dimension));
+  }
+}
+
+/** A range bound for a message: exact, or to 15 significant digits when it was converted from SI. */
+function bound(x: number, converted: boolean): string {
+  return converted && x - x === 0 ? String(Number(x.toPrecision(15))) : show(x);
 }
 
 /**
