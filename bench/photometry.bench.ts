@@ -17,8 +17,9 @@
 import type { BenchCase } from "./case";
 import { AU, SIGMA } from "../src/constants/values";
 import { createStarBatchSolverSI } from "../src/photometry/kernels/solver";
+import { luminosityFromFlux } from "../src/photometry/inverse-square";
 import { createStarBatchSolver } from "../src/photometry/solver";
-import { assumeArray, type AngleArray, type FluxArray, type LengthArray, type PowerArray, type TemperatureArray } from "../src/quantity/index";
+import { assumeArray, type AngleArray, type Flux, type FluxArray, type Length, type LengthArray, type PowerArray, type TemperatureArray } from "../src/quantity/index";
 import { SI } from "../src/quantity/system";
 
 const N = 1_000_000;
@@ -126,7 +127,40 @@ function kernelFullChain(s: typeof solver): number {
   return checksumWithAngle() + invalid;
 }
 
+/** Distances d = 1 au / p of the pseudo-catalogue, for the scalar-law case. */
+let distanceOfStar = new Float64Array(0);
+
+function setupScalar(): void {
+  setup();
+  if (distanceOfStar.length === N) return;
+  distanceOfStar = new Float64Array(N);
+  for (let i = 0; i < N; i++) distanceOfStar[i] = AU / parallax[i]!;
+}
+
 export const cases: BenchCase[] = [
+  {
+    // a scalar law built with defineLaw, one typed call per star, against a hand loop with the same checks
+    name: "photometry (typed scalar law): L = 4πd²F, one call per star (1e6 calls, SI)",
+    setup: setupScalar,
+    items: N,
+    baseline: () => {
+      const fourPi = 4 * Math.PI;
+      let acc = 0;
+      for (let i = 0; i < N; i++) {
+        const f = flux[i]!, d = distanceOfStar[i]!;
+        if (!(f > 0 && f < Infinity && d > 0 && d < Infinity)) throw new RangeError(`bad input in row ${i}`);
+        const l = fourPi * f * d * d;
+        if (!(l - l === 0)) throw new RangeError(`overflow in row ${i}`);
+        acc += l * 1e-26;
+      }
+      return acc;
+    },
+    subject: () => {
+      let acc = 0;
+      for (let i = 0; i < N; i++) acc += luminosityFromFlux(SI, flux[i]! as Flux<"SI">, distanceOfStar[i]! as Length<"SI">) * 1e-26;
+      return acc;
+    },
+  },
   {
     name: "photometry: parallax + flux + T → d, L, R with σ (1e6 stars)",
     setup,
@@ -201,7 +235,7 @@ export const cases: BenchCase[] = [
           reason,
         },
       );
-      return checksumWithAngle() + r.invalid;
+      return checksumWithAngle() + r.invalid.length;
     },
   },
   {
