@@ -204,7 +204,7 @@ export const cases: BenchCase[] = [
           reason,
         },
       );
-      return checksumWithAngle() + r.invalid;
+      return checksumWithAngle() + r.invalid.length;
     },
   },
   {

@@ -37,6 +37,12 @@ export interface LawInputOptions<V extends boolean = boolean> {
    * does not compile (compile time only; nothing is checked at run time).
    */
   readonly vacuum?: V;
+  /**
+   * Unit text messages print for a dimensionless input (`"mag"` for a
+   * magnitude), which has no coherent unit to print. Not allowed on a
+   * dimensioned input: that one always prints the caller's coherent unit.
+   */
+  readonly unit?: string;
 }
 
 const POSITIVE = 0;
@@ -65,6 +71,8 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
   readonly max: number;
   /** Note printed with a range violation. */
   readonly rangeNote: string;
+  /** Unit text of a dimensionless input (`"mag"`), or `""`. */
+  readonly unit: string;
   private readonly code: number;
   private readonly ranged: boolean;
   /**
@@ -93,6 +101,8 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
     this.nanPasses = this.code === ANY && !this.ranged;
     this.rangeNote = options.rangeNote ?? "";
     const d = kind.dimension;
+    this.unit = options.unit ?? "";
+    if (this.unit !== "" && SI.coherentUnit(d) !== "") throw new RangeError(`input ${name}: a unit label is only for dimensionless inputs; ${kind.name} prints its system's unit`);
     this.cgs = exactScale(-2 * d.length - 3 * d.mass);
   }
 
@@ -171,7 +181,7 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
   /** The message for a value that {@link LawInput.rowToSI} turns into NaN. */
   reason(sys: UnitSystem<SystemName>, value: number): string {
     const d = this.kind.dimension;
-    const unit = unitSuffix(sys.coherentUnit(d));
+    const unit = this.unitIn(sys);
     if (!this.passes(value)) return `${this.name} must be ${WORDS[this.code]}${unit}; got ${show(value)}`;
     const v = sys.name === "SI" ? value : this.cgs.apply(value);
     // the range message, unless a finite value left the double range on its way to SI
@@ -180,6 +190,11 @@ export class LawInput<D extends Dimension = Dimension, V extends boolean = boole
       return `${this.name} must be in [${this.bound(sys, this.min)}, ${this.bound(sys, this.max)}]${unit}${note}; got ${show(value)}`;
     }
     return `${this.name} = ${show(value)}${unit} is outside the double range once converted to SI (${show(v)}${unitSuffix(SI.coherentUnit(d))})`;
+  }
+
+  /** The unit messages print after a value of this input in `sys` (with its leading space), or `""`. */
+  unitIn(sys: UnitSystem<SystemName>): string {
+    return this.unit !== "" ? ` ${this.unit}` : unitSuffix(sys.coherentUnit(this.kind.dimension));
   }
 }
 

@@ -12,7 +12,7 @@ import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
 import type { LawInput } from "./input";
 import { exactScale, type ExactScale } from "./scale";
-import { show, unitSuffix } from "./text";
+import { show } from "./text";
 
 /** The declared result of a law (see {@link lawOutput}). */
 export class LawOutput<D extends Dimension = Dimension> {
@@ -43,7 +43,7 @@ export class LawOutput<D extends Dimension = Dimension> {
    * refused, naming the arguments (`inputs[i]` = `values[i]`) in the caller's units.
    */
   reason(sys: UnitSystem<SystemName>, valueSI: number, inputs: readonly LawInput[], values: readonly number[]): string {
-    const args = inputs.map((input, i) => `${input.name}=${show(values[i] as number)}${unitSuffix(sys.coherentUnit(input.kind.dimension))}`).join(", ");
+    const args = inputs.map((input, i) => `${input.name}=${show(values[i] as number)}${input.unitIn(sys)}`).join(", ");
     if (valueSI !== valueSI) return `${this.name} has no finite value for ${args}`;
     const unit = sys.coherentUnit(this.kind.dimension);
     return `${this.name} overflows the double range${unit === "" ? "" : ` in ${unit}`} for ${args}`;

@@ -107,4 +107,16 @@ describe("typed angular size", () => {
     expect(() => surfaceBrightness(CGS, -1 as Flux<"CGS">, SI.of(1, units.mas))).toThrow(/^flux must be a finite number > 0 g s\^-3; got -1$/);
     expect(() => angularDiameter(SI, SI.of(1, units.m), SI.of(1, units.m), "cube" as AngularGeometry)).toThrow(/^geometry must be one of/);
   });
+
+  it("range messages give the bounds in rad; a result beyond the double range only in CGS names the caller's unit", () => {
+    expect(() => solidAngleOfDisk(7 as Angle)).toThrow(/^angular diameter must be in \[5e-324, 6\.283185307179586\] rad; got 7$/);
+    expect(() => distanceFromAngularDiameter(SI, 0 as Angle, SI.of(1, units.Rsol))).toThrow(/^angular diameter must be a finite number > 0 rad; got 0$/);
+    // d < R is checked after each input's own check: an invalid radius is named as such
+    expect(() => angularDiameter(CGS, NaN as Length<"CGS">, 1 as Length<"CGS">)).toThrow(/^radius must be a finite number > 0 cm; got NaN$/);
+    // d = 2R/θ with R = 1e296 m, θ = 1e-10 rad: 2e306 m fits in SI, 2e308 cm does not
+    expect(distanceFromAngularDiameter(SI, 1e-10 as Angle, 1e296 as Length<"SI">, "small-angle")).toBe(2e306);
+    expect(() => distanceFromAngularDiameter(CGS, 1e-10 as Angle, 1e298 as Length<"CGS">, "small-angle")).toThrow(
+      /^distance overflows the double range in cm for angular diameter=1e-10 rad, radius=1e\+298 cm$/,
+    );
+  });
 });

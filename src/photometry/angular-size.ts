@@ -25,33 +25,52 @@
  *
  * @module
  */
-import { positive, toSI } from "../internal/typed";
-import { requireInRange } from "../internal/checks";
+import { show } from "../internal/checks";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type { Angle, Flux, Length, Radiance, SolidAngle } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import { SI, type UnitSystem } from "../quantity/system";
 import {
-  angularDiameterDiskSI,
-  angularDiameterSmallAngleSI,
-  angularDiameterSphereSI,
-  distanceFromAngularDiameterSmallAngleSI,
-  distanceFromAngularDiameterSphereSI,
-  radiusFromAngularDiameterDiskSI,
-  radiusFromAngularDiameterSmallAngleSI,
-  radiusFromAngularDiameterSphereSI,
-  solidAngleConeSI,
-  solidAngleSmallAngleSI,
-  surfaceBrightnessSI,
-  surfaceBrightnessSmallAngleSI,
+  angularDiameterDiskUnchecked,
+  angularDiameterSmallAngleUnchecked,
+  angularDiameterSphereUnchecked,
+  distanceFromAngularDiameterSmallAngleUnchecked,
+  distanceFromAngularDiameterSphereUnchecked,
+  radiusFromAngularDiameterDiskUnchecked,
+  radiusFromAngularDiameterSmallAngleUnchecked,
+  radiusFromAngularDiameterSphereUnchecked,
+  solidAngleConeUnchecked,
+  solidAngleSmallAngleUnchecked,
+  surfaceBrightnessSmallAngleUnchecked,
+  surfaceBrightnessUnchecked,
 } from "./kernels/angular-size";
-import { kernel, positiveIn } from "./typed-common";
 
-const L = kinds.length.dimension;
-const A = kinds.angle.dimension;
-const SA = kinds.solidAngle.dimension;
-const F = kinds.flux.dimension;
-const B = kinds.radiance.dimension;
+const radiusIn = lawInput("radius", kinds.length);
+const distanceIn = lawInput("distance", kinds.length);
+const fluxIn = lawInput("flux", kinds.flux);
+/** θ of a sphere seen from outside: 0 < θ ≤ π. */
+const thetaSphere = lawInput("angular diameter", kinds.angle, { min: Number.MIN_VALUE, max: Math.PI });
+/** θ of a flat disk: 0 < θ < π (tan(θ/2) is infinite at π); the bound is the largest double below π. */
+const thetaDisk = lawInput("angular diameter", kinds.angle, { min: Number.MIN_VALUE, max: Math.PI - 2 ** -51, rangeNote: "θ < π rad for a flat disk" });
+/** θ of a cone (solid angle, surface brightness): 0 < θ ≤ 2π. */
+const thetaCone = lawInput("angular diameter", kinds.angle, { min: Number.MIN_VALUE, max: 2 * Math.PI });
+/** θ in the small-angle forms: any finite θ > 0. */
+const thetaSmall = lawInput("angular diameter", kinds.angle);
+
+const angularSphere = defineLaw({ name: "angular diameter", inputs: [radiusIn, distanceIn], result: kinds.angle, kernel: angularDiameterSphereUnchecked });
+const angularDisk = defineLaw({ name: "angular diameter", inputs: [radiusIn, distanceIn], result: kinds.angle, kernel: angularDiameterDiskUnchecked });
+const angularSmall = defineLaw({ name: "angular diameter", inputs: [radiusIn, distanceIn], result: kinds.angle, kernel: angularDiameterSmallAngleUnchecked });
+const radiusSphere = defineLaw({ name: "radius", inputs: [thetaSphere, distanceIn], result: kinds.length, kernel: radiusFromAngularDiameterSphereUnchecked });
+const radiusDisk = defineLaw({ name: "radius", inputs: [thetaDisk, distanceIn], result: kinds.length, kernel: radiusFromAngularDiameterDiskUnchecked });
+const radiusSmall = defineLaw({ name: "radius", inputs: [thetaSmall, distanceIn], result: kinds.length, kernel: radiusFromAngularDiameterSmallAngleUnchecked });
+const distanceSphere = defineLaw({ name: "distance", inputs: [thetaSphere, radiusIn], result: kinds.length, kernel: distanceFromAngularDiameterSphereUnchecked });
+const distanceSmall = defineLaw({ name: "distance", inputs: [thetaSmall, radiusIn], result: kinds.length, kernel: distanceFromAngularDiameterSmallAngleUnchecked });
+const solidAngleCone = defineLaw({ name: "solid angle", inputs: [thetaCone], result: kinds.solidAngle, kernel: solidAngleConeUnchecked });
+const solidAngleSmall = defineLaw({ name: "solid angle", inputs: [thetaSmall], result: kinds.solidAngle, kernel: solidAngleSmallAngleUnchecked });
+const brightnessCone = defineLaw({ name: "surface brightness", inputs: [fluxIn, thetaCone], result: kinds.radiance, kernel: surfaceBrightnessUnchecked });
+const brightnessSmall = defineLaw({ name: "surface brightness", inputs: [fluxIn, thetaSmall], result: kinds.radiance, kernel: surfaceBrightnessSmallAngleUnchecked });
 
 /** Geometry of an angular size: a sphere seen from outside (exact for stars), a face-on disk, or the small-angle limit. */
 export type AngularGeometry = "sphere" | "disk" | "small-angle";
@@ -59,10 +78,9 @@ export type AngularGeometry = "sphere" | "disk" | "small-angle";
 /** Geometry for a solid angle or a surface brightness: the exact cone Ω = 4π sin²(θ/4), or the small-angle disk Ω = π(θ/2)². */
 export type SolidAngleGeometry = "exact" | "small-angle";
 
-function checkGeometry<G extends string>(geometry: G, allowed: readonly G[]): void {
-  if (!allowed.includes(geometry)) {
-    throw new RangeError(`geometry must be one of ${allowed.map((g) => `"${g}"`).join(", ")}; got ${JSON.stringify(geometry)}`);
-  }
+/** Throw for a geometry name that is not one of `allowed`. */
+function badGeometry(geometry: string, allowed: readonly string[]): never {
+  throw new RangeError(`geometry must be one of ${allowed.map((g) => `"${g}"`).join(", ")}; got ${JSON.stringify(geometry)}`);
 }
 
 /**
@@ -87,17 +105,22 @@ export function angularDiameter<S extends SystemName>(
   distance: Length<NoInfer<S>>,
   geometry: AngularGeometry = "sphere",
 ): Angle {
-  checkGeometry(geometry, ["sphere", "disk", "small-angle"]);
-  positive(sys, "radius", radius, L);
-  positive(sys, "distance", distance, L);
-  if (geometry === "sphere" && !(distance >= radius)) {
-    const u = sys.coherentUnit(L);
-    throw new RangeError(`distance must be >= radius (observer outside the sphere); got distance ${String(distance)} ${u} < radius ${String(radius)} ${u}`);
+  if (geometry === "sphere") {
+    // the one constraint between two inputs, tested on the caller's numbers (one unit, so no conversion)
+    if (!(distance >= radius)) insideSphere(sys, radius, distance);
+    return angularSphere(sys, radius, distance);
   }
-  const r = toSI(sys, radius, L);
-  const d = toSI(sys, distance, L);
-  const f = geometry === "sphere" ? angularDiameterSphereSI : geometry === "disk" ? angularDiameterDiskSI : angularDiameterSmallAngleSI;
-  return kernel(sys, "angular diameter", A, () => f(r, d)) as Angle;
+  if (geometry === "disk") return angularDisk(sys, radius, distance);
+  if (geometry === "small-angle") return angularSmall(sys, radius, distance);
+  return badGeometry(geometry, ["sphere", "disk", "small-angle"]);
+}
+
+/** Throw for a sphere seen from inside (d < R): the input's own message first when one of them is invalid. */
+function insideSphere(sys: UnitSystem<SystemName>, radius: number, distance: number): never {
+  radiusIn.toSI(sys, radius);
+  distanceIn.toSI(sys, distance);
+  const u = radiusIn.unitIn(sys);
+  throw new RangeError(`distance must be >= radius (observer outside the sphere); got distance ${show(distance)}${u} < radius ${show(radius)}${u}`);
 }
 
 /**
@@ -124,12 +147,10 @@ export function radiusFromAngularDiameter<S extends SystemName>(
   distance: Length<NoInfer<S>>,
   geometry: AngularGeometry = "sphere",
 ): Length<S> {
-  checkGeometry(geometry, ["sphere", "disk", "small-angle"]);
-  checkAngle(geometry, angularDiameter);
-  positive(sys, "distance", distance, L);
-  const d = toSI(sys, distance, L);
-  const f = geometry === "sphere" ? radiusFromAngularDiameterSphereSI : geometry === "disk" ? radiusFromAngularDiameterDiskSI : radiusFromAngularDiameterSmallAngleSI;
-  return positiveIn(sys, "radius", kernel(sys, "radius", L, () => f(angularDiameter, d)), L) as Length<S>;
+  if (geometry === "sphere") return radiusSphere(sys, angularDiameter, distance);
+  if (geometry === "disk") return radiusDisk(sys, angularDiameter, distance);
+  if (geometry === "small-angle") return radiusSmall(sys, angularDiameter, distance);
+  return badGeometry(geometry, ["sphere", "disk", "small-angle"]);
 }
 
 /**
@@ -154,22 +175,9 @@ export function distanceFromAngularDiameter<S extends SystemName>(
   radius: Length<NoInfer<S>>,
   geometry: "sphere" | "small-angle" = "sphere",
 ): Length<S> {
-  checkGeometry(geometry, ["sphere", "small-angle"]);
-  checkAngle(geometry, angularDiameter);
-  positive(sys, "radius", radius, L);
-  const r = toSI(sys, radius, L);
-  const f = geometry === "sphere" ? distanceFromAngularDiameterSphereSI : distanceFromAngularDiameterSmallAngleSI;
-  return positiveIn(sys, "distance", kernel(sys, "distance", L, () => f(angularDiameter, r)), L) as Length<S>;
-}
-
-function checkAngle(geometry: AngularGeometry, theta: number): void {
-  if (geometry === "sphere") requireInRange("angular diameter", theta, Number.MIN_VALUE, Math.PI, "rad");
-  else if (geometry === "disk") {
-    requireInRange("angular diameter", theta, Number.MIN_VALUE, Math.PI, "rad");
-    if (!(theta < Math.PI)) throw new RangeError(`angular diameter must be < π rad for a flat disk; got ${String(theta)}`);
-  } else if (!(theta > 0) || theta === Infinity) {
-    throw new RangeError(`angular diameter must be a finite number > 0 rad; got ${String(theta)}`);
-  }
+  if (geometry === "sphere") return distanceSphere(sys, angularDiameter, radius);
+  if (geometry === "small-angle") return distanceSmall(sys, angularDiameter, radius);
+  return badGeometry(geometry, ["sphere", "small-angle"]);
 }
 
 /**
@@ -188,16 +196,10 @@ function checkAngle(geometry: AngularGeometry, theta: number): void {
  * ```
  */
 export function solidAngleOfDisk(angularDiameter: Angle, geometry: SolidAngleGeometry = "exact"): SolidAngle {
-  checkGeometry(geometry, ["exact", "small-angle"]);
-  if (geometry === "exact") {
-    requireInRange("angular diameter", angularDiameter, Number.MIN_VALUE, 2 * Math.PI, "rad");
-    return solidAngleConeSI(angularDiameter) as SolidAngle;
-  }
-  if (!(angularDiameter > 0) || angularDiameter === Infinity) {
-    throw new RangeError(`angular diameter must be a finite number > 0 rad; got ${String(angularDiameter)}`);
-  }
-  // sr in both systems: SI phrases the message
-  return kernel(SI, "solid angle", SA, () => solidAngleSmallAngleSI(angularDiameter)) as SolidAngle;
+  // the same number in every system: SI phrases the messages
+  if (geometry === "exact") return solidAngleCone(SI, angularDiameter);
+  if (geometry === "small-angle") return solidAngleSmall(SI, angularDiameter);
+  return badGeometry(geometry, ["exact", "small-angle"]);
 }
 
 /**
@@ -209,7 +211,7 @@ export function solidAngleOfDisk(angularDiameter: Angle, geometry: SolidAngleGeo
  * @param angularDiameter - θ (exact: 0 < θ ≤ 2π rad; small angle: > 0)
  * @param geometry - `"exact"` (default, Ω = 4π sin²(θ/4)) or `"small-angle"` (Ω = π(θ/2)²)
  * @returns surface brightness F/Ω, in `sys`
- * @throws RangeError naming `flux` or `angular diameter`
+ * @throws RangeError naming `flux` or `angular diameter`, or when F/Ω overflows the double range in `sys`
  * @example
  * ```ts
  * import { SI, surfaceBrightness, units } from "starlume";
@@ -222,11 +224,7 @@ export function surfaceBrightness<S extends SystemName>(
   angularDiameter: Angle,
   geometry: SolidAngleGeometry = "exact",
 ): Radiance<S> {
-  checkGeometry(geometry, ["exact", "small-angle"]);
-  positive(sys, "flux", flux, F);
-  if (geometry === "exact") requireInRange("angular diameter", angularDiameter, Number.MIN_VALUE, 2 * Math.PI, "rad");
-  else positive(sys, "angular diameter", angularDiameter, A);
-  const f = toSI(sys, flux, F);
-  const sb = kernel(sys, "surface brightness", B, () => (geometry === "exact" ? surfaceBrightnessSI : surfaceBrightnessSmallAngleSI)(f, angularDiameter));
-  return positiveIn(sys, "surface brightness", sb, B) as Radiance<S>;
+  if (geometry === "exact") return brightnessCone(sys, flux, angularDiameter);
+  if (geometry === "small-angle") return brightnessSmall(sys, flux, angularDiameter);
+  return badGeometry(geometry, ["exact", "small-angle"]);
 }

@@ -66,11 +66,24 @@ describe("typed extinction", () => {
   });
 
   it("errors name the parameter and the caller's unit; outside 0.1–3.333 µm the law is not extrapolated", () => {
-    expect(() => ccm89Ratio(CGS, CGS.of(5, units.um))).toThrow(/^wavelength must be in \[0\.00001, 0\.0003333\] cm .*; got 0\.0005$/);
-    expect(() => ccm89Ratio(SI, SI.of(50, units.nm))).toThrow(/^wavelength must be in \[1e-7, 0\.000003333\] m .*; got 5e-8$/);
+    expect(() => ccm89Ratio(CGS, CGS.of(5, units.um))).toThrow(/^wavelength must be in \[0\.00001, 0\.0003333\d*\] cm \(x = 1\/λ in \[0\.3, 10\] µm\^-1 for the CCM89 law\); got 0\.0005$/);
+    expect(() => ccm89Ratio(SI, SI.of(50, units.nm))).toThrow(/^wavelength must be in \[1e-7, 0\.000003333\d*\] m .*; got 5e-8$/);
     expect(() => ccm89Ratio(CGS, -1 as Length<"CGS">)).toThrow(/^wavelength must be a finite number > 0 cm; got -1$/);
     expect(() => ccm89Ratio(SI, SI.of(1, units.um), 0)).toThrow(/^R_V must be a finite number > 0/);
     expect(() => ccm89Extinction(SI, SI.of(1, units.um), NaN)).toThrow(/^A_V must be a finite number mag; got NaN$/);
     expect(() => reddenFlux(SI.of(-1, units.Jy), 1)).toThrow(/^flux must be a finite number > 0/);
+  });
+
+  it("the range edges are the CCM89 x = 0.3 and 10 µm^-1 exactly, in SI and CGS; overflow and magnitudes are named in mag", () => {
+    // x = 1/λ: λ = 1e-7 m is x = 10, λ = 1e-6/0.3 m is x = 0.3 (both ends inclusive in the paper's fit)
+    expect(ccm89Ratio(SI, 1e-7 as Length<"SI">)).toBe(ccm89RatioSI(1e-7, 3.1));
+    expect(ccm89Ratio(SI, (1e-6 / 0.3) as Length<"SI">)).toBe(ccm89RatioSI(1e-6 / 0.3, 3.1));
+    // 1e-5 cm is 1e-5 / 100 m (one rounding; just inside the range)
+    expect(ccm89Ratio(CGS, 1e-5 as Length<"CGS">)).toBe(ccm89RatioSI(1e-5 / 100, 3.1));
+    // 1e300 × 10^(25/2.5) = 1e310 is beyond the double range in any unit
+    expect(() => dereddenFlux(SI.of(1e300, units.W_per_m2), 25)).toThrow(/^dereddened flux overflows the double range in its unit for flux=1e\+300, extinction=25 mag$/);
+    expect(() => reddenMagnitude(10, Infinity)).toThrow(/^extinction must be a finite number mag; got Infinity$/);
+    expect(() => aVFromColorExcess(NaN)).toThrow(/^E\(B-V\) must be a finite number mag; got NaN$/);
+    expect(() => colorExcessFromAV(1, -3.1)).toThrow(/^R_V must be a finite number > 0; got -3\.1$/);
   });
 });

@@ -23,31 +23,53 @@
  *
  * @module
  */
-import { requirePositive } from "../internal/checks";
-import { fromSI, positive, toSI } from "../internal/typed";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type { Length } from "../quantity/aliases";
 import type { Dimension } from "../quantity/dimension";
 import type { AnyQuantity, Brand, Pure, SystemName, SystemTag } from "../quantity/quantity";
-import type { UnitSystem } from "../quantity/system";
+import { SI, type UnitSystem } from "../quantity/system";
 import {
-  aVFromColorExcess as aVKernel,
-  ccm89ExtinctionMagSI,
-  ccm89RatioSI,
+  aVFromColorExcessUnchecked,
+  ccm89ExtinctionUnchecked,
+  ccm89RatioUnchecked,
   CCM89_RV_FIT_MAX,
   CCM89_RV_FIT_MIN,
   CCM89_X_MAX_INV_UM,
   CCM89_X_MIN_INV_UM,
-  colorExcessFromAV as ebvKernel,
-  dereddenFlux as dereddenFluxKernel,
-  dereddenMagnitude as dereddenMagnitudeKernel,
-  reddenFlux as reddenFluxKernel,
-  reddenMagnitude as reddenMagnitudeKernel,
+  colorExcessFromAVUnchecked,
+  dereddenFluxUnchecked,
+  dereddenMagnitudeUnchecked,
+  reddenFluxUnchecked,
+  reddenMagnitudeUnchecked,
   RV_DIFFUSE_ISM,
 } from "./kernels/extinction";
-import { finiteMag } from "./typed-common";
 
-const L = kinds.length.dimension;
+/** A magnitude input: a plain number in mag, any finite value. */
+const mag = (name: string) => lawInput(name, kinds.dimensionless, { check: "finite", unit: "mag" });
+
+/** λ in the CCM89 fit range, x = 1/λ in [0.3, 10] µm⁻¹ (bounds in SI: 1e-7 m to 3.333…e-6 m). */
+const wavelengthIn = lawInput("wavelength", kinds.length, {
+  min: 1e-6 / CCM89_X_MAX_INV_UM,
+  max: 1e-6 / CCM89_X_MIN_INV_UM,
+  rangeNote: "x = 1/λ in [0.3, 10] µm^-1 for the CCM89 law",
+});
+const rVIn = lawInput("R_V", kinds.dimensionless);
+const aVIn = mag("A_V");
+const extinctionIn = mag("extinction");
+const magnitudeIn = mag("magnitude");
+/** A flux-like value, read as a plain number in its own unit (the result stays in that unit). */
+const fluxIn = lawInput("flux", kinds.dimensionless);
+
+const ratioLaw = defineLaw({ name: "A_λ/A_V", inputs: [wavelengthIn, rVIn], result: kinds.dimensionless, kernel: ccm89RatioUnchecked });
+const extinctionLaw = defineLaw({ name: "extinction", inputs: [wavelengthIn, aVIn, rVIn], result: kinds.dimensionless, kernel: ccm89ExtinctionUnchecked });
+const aVLaw = defineLaw({ name: "A_V", inputs: [mag("E(B-V)"), rVIn], result: kinds.dimensionless, kernel: aVFromColorExcessUnchecked });
+const colorExcessLaw = defineLaw({ name: "E(B-V)", inputs: [aVIn, rVIn], result: kinds.dimensionless, kernel: colorExcessFromAVUnchecked });
+const reddenFluxLaw = defineLaw({ name: "reddened flux", inputs: [fluxIn, extinctionIn], result: kinds.dimensionless, kernel: reddenFluxUnchecked });
+const dereddenFluxLaw = defineLaw({ name: "dereddened flux", inputs: [fluxIn, extinctionIn], result: kinds.dimensionless, kernel: dereddenFluxUnchecked });
+const reddenMagnitudeLaw = defineLaw({ name: "reddened magnitude", inputs: [magnitudeIn, extinctionIn], result: kinds.dimensionless, kernel: reddenMagnitudeUnchecked });
+const dereddenMagnitudeLaw = defineLaw({ name: "dereddened magnitude", inputs: [magnitudeIn, extinctionIn], result: kinds.dimensionless, kernel: dereddenMagnitudeUnchecked });
 
 /** Mean R_V = A_V / E(B−V) of the diffuse Milky Way ISM: 3.1 (common practice). The default everywhere here. */
 export const RV_DIFFUSE: number = RV_DIFFUSE_ISM;
@@ -83,19 +105,6 @@ export type FluxLike =
         SystemTag
       >);
 
-function xChecked(sys: UnitSystem<SystemName>, wavelength: number): number {
-  positive(sys, "wavelength", wavelength, L);
-  const x = 1e-6 / toSI(sys, wavelength, L);
-  if (!(x >= CCM89_X_MIN_INV_UM && x <= CCM89_X_MAX_INV_UM)) {
-    const lo = fromSI(sys, 1e-6 / CCM89_X_MAX_INV_UM, L);
-    const hi = fromSI(sys, 1e-6 / CCM89_X_MIN_INV_UM, L);
-    throw new RangeError(
-      `wavelength must be in [${String(Number(lo.toPrecision(4)))}, ${String(Number(hi.toPrecision(4)))}] ${sys.coherentUnit(L)} (x = 1/λ in [0.3, 10] µm^-1) for the CCM89 law; got ${String(wavelength)}`,
-    );
-  }
-  return x;
-}
-
 /**
  * CCM89 extinction curve A_λ / A_V = a(x) + b(x)/R_V at a wavelength.
  *
@@ -112,9 +121,7 @@ function xChecked(sys: UnitSystem<SystemName>, wavelength: number): number {
  * ```
  */
 export function ccm89Ratio<S extends SystemName>(sys: UnitSystem<S>, wavelength: Length<NoInfer<S>>, rV: Pure = RV_DIFFUSE_ISM): number {
-  xChecked(sys, wavelength);
-  requirePositive("R_V", rV, "(dimensionless)");
-  return ccm89RatioSI(toSI(sys, wavelength, L), rV);
+  return ratioLaw(sys, wavelength, rV);
 }
 
 /**
@@ -138,10 +145,7 @@ export function ccm89Extinction<S extends SystemName>(
   aV: Pure,
   rV: Pure = RV_DIFFUSE_ISM,
 ): number {
-  xChecked(sys, wavelength);
-  finiteMag("A_V", aV);
-  requirePositive("R_V", rV, "(dimensionless)");
-  return ccm89ExtinctionMagSI(toSI(sys, wavelength, L), aV, rV);
+  return extinctionLaw(sys, wavelength, aV, rV);
 }
 
 /**
@@ -158,7 +162,8 @@ export function ccm89Extinction<S extends SystemName>(
  * ```
  */
 export function aVFromColorExcess(colorExcess: Pure, rV: Pure = RV_DIFFUSE_ISM): number {
-  return aVKernel(colorExcess, rV);
+  // pure numbers are the same in every system: SI phrases the messages
+  return aVLaw(SI, colorExcess, rV);
 }
 
 /**
@@ -175,7 +180,7 @@ export function aVFromColorExcess(colorExcess: Pure, rV: Pure = RV_DIFFUSE_ISM):
  * ```
  */
 export function colorExcessFromAV(aV: Pure, rV: Pure = RV_DIFFUSE_ISM): number {
-  return ebvKernel(aV, rV);
+  return colorExcessLaw(SI, aV, rV);
 }
 
 /**
@@ -193,7 +198,9 @@ export function colorExcessFromAV(aV: Pure, rV: Pure = RV_DIFFUSE_ISM): number {
  * ```
  */
 export function reddenFlux<Q extends FluxLike>(flux: Q, extinction: Pure): Q {
-  return reddenFluxKernel(flux, extinction) as Q;
+  // Q is any flux-like kind in any system: the factor 10^(A/−2.5) keeps it in its own unit
+  const f: number = flux;
+  return reddenFluxLaw(SI, f, extinction) as number as Q;
 }
 
 /**
@@ -210,7 +217,8 @@ export function reddenFlux<Q extends FluxLike>(flux: Q, extinction: Pure): Q {
  * ```
  */
 export function dereddenFlux<Q extends FluxLike>(flux: Q, extinction: Pure): Q {
-  return dereddenFluxKernel(flux, extinction) as Q;
+  const f: number = flux;
+  return dereddenFluxLaw(SI, f, extinction) as number as Q;
 }
 
 /**
@@ -227,7 +235,7 @@ export function dereddenFlux<Q extends FluxLike>(flux: Q, extinction: Pure): Q {
  * ```
  */
 export function reddenMagnitude(magnitude: Pure, extinction: Pure): number {
-  return reddenMagnitudeKernel(magnitude, extinction);
+  return reddenMagnitudeLaw(SI, magnitude, extinction);
 }
 
 /**
@@ -244,5 +252,5 @@ export function reddenMagnitude(magnitude: Pure, extinction: Pure): number {
  * ```
  */
 export function dereddenMagnitude(magnitude: Pure, extinction: Pure): number {
-  return dereddenMagnitudeKernel(magnitude, extinction);
+  return dereddenMagnitudeLaw(SI, magnitude, extinction);
 }

@@ -12,6 +12,11 @@
  * flux is wanted, a radiance (per steradian) where a flux is wanted, or a
  * CGS distance in an SI call does not compile.
  *
+ * Each function is a law of the law toolkit (`defineLaw`): inputs are
+ * checked once, in the caller's unit, and a result that overflows in the
+ * caller's system (possibly only after the ×10ᵏ into CGS) is a RangeError
+ * naming the arguments, never Infinity.
+ *
  * Accuracy: a few correctly rounded operations, ≤ 4e-16 relative to a
  * 50-digit mpmath reference (kernels/inverse-square.test.ts).
  *
@@ -20,17 +25,21 @@
  *
  * @module
  */
-import { positive, toSI } from "../internal/typed";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type { Flux, Length, Power } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
-import { distanceFromLuminosityFluxSI, fluxFromLuminositySI, luminosityFromFluxSI } from "./kernels/inverse-square";
-import { kernel, positiveIn } from "./typed-common";
+import { distanceFromLuminosityFluxUnchecked, fluxFromLuminosityUnchecked, luminosityFromFluxUnchecked } from "./kernels/inverse-square";
 
-const L = kinds.length.dimension;
-const P = kinds.power.dimension;
-const F = kinds.flux.dimension;
+const luminosityIn = lawInput("luminosity", kinds.power);
+const fluxIn = lawInput("flux", kinds.flux);
+const distanceIn = lawInput("distance", kinds.length);
+
+const fluxLaw = defineLaw({ name: "flux", inputs: [luminosityIn, distanceIn], result: kinds.flux, kernel: fluxFromLuminosityUnchecked });
+const luminosityLaw = defineLaw({ name: "luminosity", inputs: [fluxIn, distanceIn], result: kinds.power, kernel: luminosityFromFluxUnchecked });
+const distanceLaw = defineLaw({ name: "distance", inputs: [luminosityIn, fluxIn], result: kinds.length, kernel: distanceFromLuminosityFluxUnchecked });
 
 /**
  * Flux received at a distance from an isotropic emitter: F = L / (4π d²).
@@ -39,7 +48,7 @@ const F = kinds.flux.dimension;
  * @param luminosity - luminosity L, in `sys` (W or erg s⁻¹)
  * @param distance - distance d, in `sys`
  * @returns flux F, in `sys`
- * @throws RangeError naming `luminosity` or `distance` (value and unit of `sys`) unless finite and > 0, or when F is not representable
+ * @throws RangeError naming `luminosity` or `distance` (value and unit of `sys`) unless finite and > 0, or when F overflows the double range in `sys` (naming the arguments; a flux below the smallest double is 0)
  * @example
  * ```ts
  * import { SI, fluxFromLuminosity, units } from "starlume";
@@ -51,10 +60,7 @@ export function fluxFromLuminosity<S extends SystemName>(
   luminosity: Power<NoInfer<S>>,
   distance: Length<NoInfer<S>>,
 ): Flux<S> {
-  positive(sys, "luminosity", luminosity, P);
-  positive(sys, "distance", distance, L);
-  const f = kernel(sys, "flux", F, () => fluxFromLuminositySI(toSI(sys, luminosity, P), toSI(sys, distance, L)));
-  return positiveIn(sys, "flux", f, F) as Flux<S>;
+  return fluxLaw(sys, luminosity, distance);
 }
 
 /**
@@ -65,7 +71,7 @@ export function fluxFromLuminosity<S extends SystemName>(
  * @param flux - flux F, in `sys`
  * @param distance - distance d, in `sys`
  * @returns luminosity L, in `sys`
- * @throws RangeError naming `flux` or `distance` unless finite and > 0, or when L is not representable
+ * @throws RangeError naming `flux` or `distance` unless finite and > 0, or when L overflows the double range in `sys` (naming the arguments)
  * @example
  * ```ts
  * import { CGS, luminosityFromFlux, units } from "starlume";
@@ -77,10 +83,7 @@ export function luminosityFromFlux<S extends SystemName>(
   flux: Flux<NoInfer<S>>,
   distance: Length<NoInfer<S>>,
 ): Power<S> {
-  positive(sys, "flux", flux, F);
-  positive(sys, "distance", distance, L);
-  const l = kernel(sys, "luminosity", P, () => luminosityFromFluxSI(toSI(sys, flux, F), toSI(sys, distance, L)));
-  return positiveIn(sys, "luminosity", l, P) as Power<S>;
+  return luminosityLaw(sys, flux, distance);
 }
 
 /**
@@ -104,8 +107,5 @@ export function distanceFromLuminosityFlux<S extends SystemName>(
   luminosity: Power<NoInfer<S>>,
   flux: Flux<NoInfer<S>>,
 ): Length<S> {
-  positive(sys, "luminosity", luminosity, P);
-  positive(sys, "flux", flux, F);
-  const d = kernel(sys, "distance", L, () => distanceFromLuminosityFluxSI(toSI(sys, luminosity, P), toSI(sys, flux, F)));
-  return positiveIn(sys, "distance", d, L) as Length<S>;
+  return distanceLaw(sys, luminosity, flux);
 }

@@ -129,4 +129,21 @@ describe("typed magnitudes", () => {
     expect(() => luminosityFromAbsoluteBolometricMagnitude(CGS, -800)).toThrow(/luminosity .* cm\^2 g s\^-3/);
     expect(() => magnitudeDifference(SI.of(0, units.Jy), SI.of(1, units.Jy))).toThrow(/^flux1 must be a finite number > 0; got 0$/);
   });
+
+  it("a result that fits in SI but not in CGS is refused in the caller's unit, naming the arguments (magnitudes in mag)", () => {
+    // L₀ 10^(690/2.5) = 3.0e304 W fits; ×10^7 erg s^-1 does not
+    expect(luminosityFromAbsoluteBolometricMagnitude(SI, -690)).toBeGreaterThan(3e304);
+    expect(() => luminosityFromAbsoluteBolometricMagnitude(CGS, -690)).toThrow(
+      /^luminosity overflows the double range in cm\^2 g s\^-3 for absolute bolometric magnitude=-690 mag$/,
+    );
+    // f_λ = f_ν c/λ² = 1e300 × 2.998e8 / 4 = 7.5e307 W m^-3 fits; ×10 erg s^-1 cm^-3 does not
+    expect(fLambdaFromFNu(SI, 1e300 as SpectralFluxPerFrequency<"SI">, 2 as Length<"SI">)).toBeGreaterThan(7e307);
+    expect(() => fLambdaFromFNu(CGS, 1e303 as SpectralFluxPerFrequency<"CGS">, 200 as Length<"CGS">)).toThrow(
+      /^spectral flux density f_lambda overflows the double range in cm\^-1 g s\^-3 for spectral flux density f_nu=1e\+303 g s\^-2, wavelength=200 cm$/,
+    );
+    // 10 pc × 10^(1600/5) overflows in SI already
+    expect(() => distanceFromDistanceModulus(CGS, 1600)).toThrow(/^distance overflows the double range in cm for distance modulus=1600 mag, extinction=0 mag$/);
+    expect(() => fluxRatioFromMagnitudeDifference(-800)).toThrow(/^flux ratio overflows the double range in its unit for magnitude difference=-800 mag$/);
+    expect(() => fNuFromAbMagnitude(SI, NaN)).toThrow(/^AB magnitude must be a finite number mag; got NaN$/);
+  });
 });

@@ -17,6 +17,11 @@
  * different dimensions; converting between them needs the wavelength
  * (f_λ = f_ν c/λ²), and handing one where the other is wanted does not compile.
  *
+ * Each function is a law of the law toolkit (`defineLaw`): inputs are
+ * checked once, in the caller's unit (magnitudes: finite, named in mag), and
+ * a result beyond the double range in the caller's system is a RangeError
+ * naming the arguments, never Infinity.
+ *
  * Accuracy: logarithms and powers of ten (≤ 1 ulp in V8) plus a few roundings;
  * Pogson's relation is exact for exact powers of 100 (100 ↔ −5 mag).
  * Against 50-digit mpmath (kernels/magnitudes.test.ts): ≤ 2e-15 relative for
@@ -28,34 +33,102 @@
  *
  * @module
  */
-import { positive, toSI } from "../internal/typed";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type { Flux, Length, Power, SpectralFluxPerFrequency, SpectralFluxPerWavelength } from "../quantity/aliases";
 import type { AnyQuantity, Pure, SystemName } from "../quantity/quantity";
-import type { UnitSystem } from "../quantity/system";
+import { SI, type UnitSystem } from "../quantity/system";
 import {
-  abMagnitudeSI,
-  absoluteBolometricMagnitudeSI,
-  absoluteMagnitudeSI,
-  apparentBolometricMagnitudeSI,
-  apparentMagnitudeSI,
-  bolometricFluxFromApparentMagnitudeSI,
-  distanceFromDistanceModulusSI,
-  distanceModulusSI,
-  fLambdaFromFNuSI,
-  fluxRatioFromMagnitudeDifference as fluxRatioKernel,
-  fNuFromFLambdaSI,
-  luminosityFromAbsoluteBolometricMagnitudeSI,
-  magnitudeDifferenceFromFluxRatio as magnitudeDifferenceKernel,
-  spectralFluxDensityFromAbMagnitudeSI,
+  abMagnitudeUnchecked,
+  absoluteBolometricMagnitudeUnchecked,
+  absoluteMagnitudeUnchecked,
+  apparentBolometricMagnitudeUnchecked,
+  apparentMagnitudeUnchecked,
+  bolometricFluxFromApparentMagnitudeUnchecked,
+  distanceFromDistanceModulusUnchecked,
+  distanceModulusUnchecked,
+  fLambdaFromFNuUnchecked,
+  fluxRatioFromMagnitudeDifferenceUnchecked,
+  fNuFromFLambdaUnchecked,
+  luminosityFromAbsoluteBolometricMagnitudeUnchecked,
+  magnitudeDifferenceFromFluxRatioUnchecked,
+  magnitudeDifferenceOfFluxesUnchecked,
+  spectralFluxDensityFromAbMagnitudeUnchecked,
 } from "./kernels/magnitudes";
-import { finiteMag, kernel, positiveIn } from "./typed-common";
 
-const L = kinds.length.dimension;
-const P = kinds.power.dimension;
-const F = kinds.flux.dimension;
-const FNU = kinds.spectralFluxPerFrequency.dimension;
-const FLAM = kinds.spectralFluxPerWavelength.dimension;
+/** A magnitude input: a plain number in mag, any finite value. */
+const mag = (name: string) => lawInput(name, kinds.dimensionless, { check: "finite", unit: "mag" });
+
+const distanceIn = lawInput("distance", kinds.length);
+const luminosityIn = lawInput("luminosity", kinds.power);
+const bolometricFluxIn = lawInput("bolometric flux", kinds.flux);
+const fNuIn = lawInput("spectral flux density f_nu", kinds.spectralFluxPerFrequency);
+const fLambdaIn = lawInput("spectral flux density f_lambda", kinds.spectralFluxPerWavelength);
+const wavelengthIn = lawInput("wavelength", kinds.length);
+const extinctionIn = mag("extinction");
+
+const magnitudeDifferenceLaw = defineLaw({
+  name: "magnitude difference",
+  inputs: [lawInput("flux ratio", kinds.dimensionless)],
+  result: kinds.dimensionless,
+  kernel: magnitudeDifferenceFromFluxRatioUnchecked,
+});
+const fluxRatioLaw = defineLaw({
+  name: "flux ratio",
+  inputs: [mag("magnitude difference")],
+  result: kinds.dimensionless,
+  kernel: fluxRatioFromMagnitudeDifferenceUnchecked,
+});
+/** Two fluxes of one (any) kind, in one unit: read as plain numbers, since only their ratio matters. */
+const fluxesMagnitudeDifferenceLaw = defineLaw({
+  name: "magnitude difference",
+  inputs: [lawInput("flux1", kinds.dimensionless), lawInput("flux2", kinds.dimensionless)],
+  result: kinds.dimensionless,
+  kernel: magnitudeDifferenceOfFluxesUnchecked,
+});
+const distanceModulusLaw = defineLaw({ name: "distance modulus", inputs: [distanceIn, extinctionIn], result: kinds.dimensionless, kernel: distanceModulusUnchecked });
+const distanceFromModulusLaw = defineLaw({
+  name: "distance",
+  inputs: [mag("distance modulus"), extinctionIn],
+  result: kinds.length,
+  kernel: distanceFromDistanceModulusUnchecked,
+});
+const absoluteMagnitudeLaw = defineLaw({
+  name: "absolute magnitude",
+  inputs: [mag("apparent magnitude"), distanceIn, extinctionIn],
+  result: kinds.dimensionless,
+  kernel: absoluteMagnitudeUnchecked,
+});
+const apparentMagnitudeLaw = defineLaw({
+  name: "apparent magnitude",
+  inputs: [mag("absolute magnitude"), distanceIn, extinctionIn],
+  result: kinds.dimensionless,
+  kernel: apparentMagnitudeUnchecked,
+});
+const absoluteBolometricLaw = defineLaw({ name: "absolute bolometric magnitude", inputs: [luminosityIn], result: kinds.dimensionless, kernel: absoluteBolometricMagnitudeUnchecked });
+const luminosityFromMagLaw = defineLaw({
+  name: "luminosity",
+  inputs: [mag("absolute bolometric magnitude")],
+  result: kinds.power,
+  kernel: luminosityFromAbsoluteBolometricMagnitudeUnchecked,
+});
+const apparentBolometricLaw = defineLaw({ name: "apparent bolometric magnitude", inputs: [bolometricFluxIn], result: kinds.dimensionless, kernel: apparentBolometricMagnitudeUnchecked });
+const bolometricFluxLaw = defineLaw({
+  name: "bolometric flux",
+  inputs: [mag("apparent bolometric magnitude")],
+  result: kinds.flux,
+  kernel: bolometricFluxFromApparentMagnitudeUnchecked,
+});
+const abMagnitudeLaw = defineLaw({ name: "AB magnitude", inputs: [fNuIn], result: kinds.dimensionless, kernel: abMagnitudeUnchecked });
+const fNuFromAbLaw = defineLaw({
+  name: "spectral flux density f_nu",
+  inputs: [mag("AB magnitude")],
+  result: kinds.spectralFluxPerFrequency,
+  kernel: spectralFluxDensityFromAbMagnitudeUnchecked,
+});
+const fLambdaLaw = defineLaw({ name: "spectral flux density f_lambda", inputs: [fNuIn, wavelengthIn], result: kinds.spectralFluxPerWavelength, kernel: fLambdaFromFNuUnchecked });
+const fNuLaw = defineLaw({ name: "spectral flux density f_nu", inputs: [fLambdaIn, wavelengthIn], result: kinds.spectralFluxPerFrequency, kernel: fNuFromFLambdaUnchecked });
 
 /**
  * Pogson's relation, flux ratio → magnitude difference: m₁ − m₂ = −2.5 log₁₀(F₁/F₂).
@@ -70,7 +143,8 @@ const FLAM = kinds.spectralFluxPerWavelength.dimension;
  * ```
  */
 export function magnitudeDifferenceFromFluxRatio(fluxRatio: Pure): number {
-  return magnitudeDifferenceKernel(fluxRatio);
+  // a pure number is the same in every system: SI phrases the messages
+  return magnitudeDifferenceLaw(SI, fluxRatio);
 }
 
 /**
@@ -86,7 +160,7 @@ export function magnitudeDifferenceFromFluxRatio(fluxRatio: Pure): number {
  * ```
  */
 export function fluxRatioFromMagnitudeDifference(magnitudeDifference: Pure): number {
-  return fluxRatioKernel(magnitudeDifference);
+  return fluxRatioLaw(SI, magnitudeDifference);
 }
 
 /**
@@ -106,11 +180,10 @@ export function fluxRatioFromMagnitudeDifference(magnitudeDifference: Pure): num
  * ```
  */
 export function magnitudeDifference<Q extends AnyQuantity>(flux1: Q, flux2: NoInfer<Q>): number {
-  if (!(flux1 > 0) || flux1 === Infinity) throw new RangeError(`flux1 must be a finite number > 0; got ${String(flux1)}`);
-  if (!(flux2 > 0) || flux2 === Infinity) throw new RangeError(`flux2 must be a finite number > 0; got ${String(flux2)}`);
-  const r = flux1 / flux2;
-  // the quotient of two positive finite doubles can under/overflow; the log of each then still works
-  return r > 0 && r !== Infinity ? magnitudeDifferenceKernel(r) : -2.5 * (Math.log10(flux1) - Math.log10(flux2));
+  // Q is any flux-like kind in any system; both are in one unit, so their plain numbers are all the law needs
+  const f1: number = flux1;
+  const f2: number = flux2;
+  return fluxesMagnitudeDifferenceLaw(SI, f1, f2);
 }
 
 /**
@@ -128,9 +201,7 @@ export function magnitudeDifference<Q extends AnyQuantity>(flux1: Q, flux2: NoIn
  * ```
  */
 export function distanceModulus<S extends SystemName>(sys: UnitSystem<S>, distance: Length<NoInfer<S>>, extinction: Pure = 0): number {
-  positive(sys, "distance", distance, L);
-  finiteMag("extinction", extinction);
-  return distanceModulusSI(toSI(sys, distance, L), extinction);
+  return distanceModulusLaw(sys, distance, extinction);
 }
 
 /**
@@ -141,7 +212,7 @@ export function distanceModulus<S extends SystemName>(sys: UnitSystem<S>, distan
  * @param distanceModulus - m − M, mag
  * @param extinction - A, mag (default 0)
  * @returns distance d, in `sys`
- * @throws RangeError naming `distance modulus` or `extinction`, or when d is not representable
+ * @throws RangeError naming `distance modulus` or `extinction`, or when d overflows the double range in `sys` (a distance below the smallest double is 0)
  * @example
  * ```ts
  * import { CGS, distanceFromDistanceModulus, units } from "starlume";
@@ -149,10 +220,7 @@ export function distanceModulus<S extends SystemName>(sys: UnitSystem<S>, distan
  * ```
  */
 export function distanceFromDistanceModulus<S extends SystemName>(sys: UnitSystem<S>, distanceModulus: Pure, extinction: Pure = 0): Length<S> {
-  finiteMag("distance modulus", distanceModulus);
-  finiteMag("extinction", extinction);
-  const d = kernel(sys, "distance", L, () => distanceFromDistanceModulusSI(distanceModulus, extinction));
-  return positiveIn(sys, "distance", d, L) as Length<S>;
+  return distanceFromModulusLaw(sys, distanceModulus, extinction);
 }
 
 /**
@@ -176,10 +244,7 @@ export function absoluteMagnitude<S extends SystemName>(
   distance: Length<NoInfer<S>>,
   extinction: Pure = 0,
 ): number {
-  finiteMag("apparent magnitude", apparentMagnitude);
-  positive(sys, "distance", distance, L);
-  finiteMag("extinction", extinction);
-  return absoluteMagnitudeSI(apparentMagnitude, toSI(sys, distance, L), extinction);
+  return absoluteMagnitudeLaw(sys, apparentMagnitude, distance, extinction);
 }
 
 /**
@@ -203,10 +268,7 @@ export function apparentMagnitude<S extends SystemName>(
   distance: Length<NoInfer<S>>,
   extinction: Pure = 0,
 ): number {
-  finiteMag("absolute magnitude", absoluteMagnitude);
-  positive(sys, "distance", distance, L);
-  finiteMag("extinction", extinction);
-  return apparentMagnitudeSI(absoluteMagnitude, toSI(sys, distance, L), extinction);
+  return apparentMagnitudeLaw(sys, absoluteMagnitude, distance, extinction);
 }
 
 /**
@@ -223,8 +285,7 @@ export function apparentMagnitude<S extends SystemName>(
  * ```
  */
 export function absoluteBolometricMagnitude<S extends SystemName>(sys: UnitSystem<S>, luminosity: Power<NoInfer<S>>): number {
-  positive(sys, "luminosity", luminosity, P);
-  return kernel(sys, "luminosity", P, () => absoluteBolometricMagnitudeSI(toSI(sys, luminosity, P)));
+  return absoluteBolometricLaw(sys, luminosity);
 }
 
 /**
@@ -233,7 +294,7 @@ export function absoluteBolometricMagnitude<S extends SystemName>(sys: UnitSyste
  * @param sys - `SI` (W) or `CGS` (erg s⁻¹)
  * @param absoluteBolometricMagnitude - M_bol, mag
  * @returns L, in `sys`
- * @throws RangeError naming `absolute bolometric magnitude`, or when L is not representable
+ * @throws RangeError naming `absolute bolometric magnitude`, or when L overflows the double range in `sys` (naming the magnitude; below the smallest double it is 0)
  * @example
  * ```ts
  * import { CGS, luminosityFromAbsoluteBolometricMagnitude } from "starlume";
@@ -241,9 +302,7 @@ export function absoluteBolometricMagnitude<S extends SystemName>(sys: UnitSyste
  * ```
  */
 export function luminosityFromAbsoluteBolometricMagnitude<S extends SystemName>(sys: UnitSystem<S>, absoluteBolometricMagnitude: Pure): Power<S> {
-  finiteMag("absolute bolometric magnitude", absoluteBolometricMagnitude);
-  const l = kernel(sys, "luminosity", P, () => luminosityFromAbsoluteBolometricMagnitudeSI(absoluteBolometricMagnitude));
-  return positiveIn(sys, "luminosity", l, P) as Power<S>;
+  return luminosityFromMagLaw(sys, absoluteBolometricMagnitude);
 }
 
 /**
@@ -260,8 +319,7 @@ export function luminosityFromAbsoluteBolometricMagnitude<S extends SystemName>(
  * ```
  */
 export function apparentBolometricMagnitude<S extends SystemName>(sys: UnitSystem<S>, bolometricFlux: Flux<NoInfer<S>>): number {
-  positive(sys, "bolometric flux", bolometricFlux, F);
-  return kernel(sys, "bolometric flux", F, () => apparentBolometricMagnitudeSI(toSI(sys, bolometricFlux, F)));
+  return apparentBolometricLaw(sys, bolometricFlux);
 }
 
 /**
@@ -270,7 +328,7 @@ export function apparentBolometricMagnitude<S extends SystemName>(sys: UnitSyste
  * @param sys - `SI` (W m⁻²) or `CGS` (erg s⁻¹ cm⁻²)
  * @param apparentBolometricMagnitude - m_bol, mag
  * @returns f, in `sys`
- * @throws RangeError naming `apparent bolometric magnitude`, or when f is not representable
+ * @throws RangeError naming `apparent bolometric magnitude`, or when f overflows the double range in `sys` (below the smallest double it is 0)
  * @example
  * ```ts
  * import { SI, bolometricFluxFromApparentMagnitude, units } from "starlume";
@@ -278,9 +336,7 @@ export function apparentBolometricMagnitude<S extends SystemName>(sys: UnitSyste
  * ```
  */
 export function bolometricFluxFromApparentMagnitude<S extends SystemName>(sys: UnitSystem<S>, apparentBolometricMagnitude: Pure): Flux<S> {
-  finiteMag("apparent bolometric magnitude", apparentBolometricMagnitude);
-  const f = kernel(sys, "bolometric flux", F, () => bolometricFluxFromApparentMagnitudeSI(apparentBolometricMagnitude));
-  return positiveIn(sys, "bolometric flux", f, F) as Flux<S>;
+  return bolometricFluxLaw(sys, apparentBolometricMagnitude);
 }
 
 /**
@@ -299,8 +355,7 @@ export function bolometricFluxFromApparentMagnitude<S extends SystemName>(sys: U
  * ```
  */
 export function abMagnitude<S extends SystemName>(sys: UnitSystem<S>, fNu: SpectralFluxPerFrequency<NoInfer<S>>): number {
-  positive(sys, "spectral flux density f_nu", fNu, FNU);
-  return kernel(sys, "spectral flux density f_nu", FNU, () => abMagnitudeSI(toSI(sys, fNu, FNU)));
+  return abMagnitudeLaw(sys, fNu);
 }
 
 /**
@@ -309,7 +364,7 @@ export function abMagnitude<S extends SystemName>(sys: UnitSystem<S>, fNu: Spect
  * @param sys - `SI` (W m⁻² Hz⁻¹) or `CGS` (erg s⁻¹ cm⁻² Hz⁻¹)
  * @param abMagnitude - m_AB, mag
  * @returns f_ν, in `sys` (read it in Jy with `SI.valueIn(f, units.Jy)`)
- * @throws RangeError naming `AB magnitude`, or when f_ν is not representable
+ * @throws RangeError naming `AB magnitude`, or when f_ν overflows the double range in `sys` (below the smallest double it is 0)
  * @example
  * ```ts
  * import { SI, fNuFromAbMagnitude, units } from "starlume";
@@ -317,9 +372,7 @@ export function abMagnitude<S extends SystemName>(sys: UnitSystem<S>, fNu: Spect
  * ```
  */
 export function fNuFromAbMagnitude<S extends SystemName>(sys: UnitSystem<S>, abMagnitude: Pure): SpectralFluxPerFrequency<S> {
-  finiteMag("AB magnitude", abMagnitude);
-  const f = kernel(sys, "spectral flux density f_nu", FNU, () => spectralFluxDensityFromAbMagnitudeSI(abMagnitude));
-  return positiveIn(sys, "spectral flux density f_nu", f, FNU) as SpectralFluxPerFrequency<S>;
+  return fNuFromAbLaw(sys, abMagnitude);
 }
 
 /**
@@ -343,10 +396,7 @@ export function fLambdaFromFNu<S extends SystemName>(
   fNu: SpectralFluxPerFrequency<NoInfer<S>>,
   wavelength: Length<NoInfer<S>>,
 ): SpectralFluxPerWavelength<S> {
-  positive(sys, "spectral flux density f_nu", fNu, FNU);
-  positive(sys, "wavelength", wavelength, L);
-  const f = kernel(sys, "spectral flux density f_lambda", FLAM, () => fLambdaFromFNuSI(toSI(sys, fNu, FNU), toSI(sys, wavelength, L)));
-  return positiveIn(sys, "spectral flux density f_lambda", f, FLAM) as SpectralFluxPerWavelength<S>;
+  return fLambdaLaw(sys, fNu, wavelength);
 }
 
 /**
@@ -370,8 +420,5 @@ export function fNuFromFLambda<S extends SystemName>(
   fLambda: SpectralFluxPerWavelength<NoInfer<S>>,
   wavelength: Length<NoInfer<S>>,
 ): SpectralFluxPerFrequency<S> {
-  positive(sys, "spectral flux density f_lambda", fLambda, FLAM);
-  positive(sys, "wavelength", wavelength, L);
-  const f = kernel(sys, "spectral flux density f_nu", FNU, () => fNuFromFLambdaSI(toSI(sys, fLambda, FLAM), toSI(sys, wavelength, L)));
-  return positiveIn(sys, "spectral flux density f_nu", f, FNU) as SpectralFluxPerFrequency<S>;
+  return fNuLaw(sys, fLambda, wavelength);
 }

@@ -25,24 +25,35 @@
  *
  * @module
  */
-import { requireInRange } from "../internal/checks";
-import { nonNegative, positive, toSI } from "../internal/typed";
+import { defineLaw } from "../law/define";
+import { lawInput } from "../law/input";
+import { lawOutput } from "../law/output";
 import { kinds } from "../quantity/aliases";
 import type { Angle, Length } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
 import {
-  distanceFromParallaxExactSI,
-  distanceFromParallaxSI,
+  distanceFromParallaxExactUnchecked,
+  distanceFromParallaxUnchecked,
   PARALLAX_FRACTIONAL_ERROR_THRESHOLD,
-  parallaxDistanceSI,
-  parallaxFromDistanceExactSI,
-  parallaxFromDistanceSI,
+  parallaxFromDistanceExactUnchecked,
+  parallaxFromDistanceUnchecked,
 } from "./kernels/parallax";
-import { kernel, positiveIn } from "./typed-common";
 
-const L = kinds.length.dimension;
-const A = kinds.angle.dimension;
+/** The largest double below π/2: the exact geometry needs p < π/2 (tan p is infinite there). */
+const BELOW_HALF_PI = Math.PI / 2 - 2 ** -52;
+
+const parallaxIn = lawInput("parallax", kinds.angle);
+const exactParallaxIn = lawInput("parallax", kinds.angle, { min: Number.MIN_VALUE, max: BELOW_HALF_PI, rangeNote: "the exact geometry needs p < π/2 rad" });
+const sigmaParallaxIn = lawInput("parallax uncertainty", kinds.angle, { check: "nonNegative" });
+const thresholdIn = lawInput("threshold", kinds.dimensionless, { check: "finite", min: Number.MIN_VALUE, max: Number.MAX_VALUE, rangeNote: "dimensionless σ_p/p" });
+const distanceIn = lawInput("distance", kinds.length);
+
+const distanceLaw = defineLaw({ name: "distance", inputs: [parallaxIn], result: kinds.length, kernel: distanceFromParallaxUnchecked });
+const distanceExactLaw = defineLaw({ name: "distance", inputs: [exactParallaxIn], result: kinds.length, kernel: distanceFromParallaxExactUnchecked });
+const parallaxLaw = defineLaw({ name: "parallax", inputs: [distanceIn], result: kinds.angle, kernel: parallaxFromDistanceUnchecked });
+const parallaxExactLaw = defineLaw({ name: "parallax", inputs: [distanceIn], result: kinds.angle, kernel: parallaxFromDistanceExactUnchecked });
+const sigmaDistanceOut = lawOutput("distance uncertainty", kinds.length);
 
 /** Default σ_p/p above which {@link parallaxDistance} flags the inverted distance as biased: 0.1 (common practice). */
 export const PARALLAX_BIAS_THRESHOLD: number = PARALLAX_FRACTIONAL_ERROR_THRESHOLD;
@@ -53,7 +64,7 @@ export const PARALLAX_BIAS_THRESHOLD: number = PARALLAX_FRACTIONAL_ERROR_THRESHO
  * @param sys - `SI` (result in m) or `CGS` (cm)
  * @param parallax - parallax p, an angle (e.g. `SI.of(100, units.mas)`)
  * @returns distance d, in `sys`
- * @throws RangeError naming `parallax` unless finite and > 0 rad
+ * @throws RangeError naming `parallax` unless finite and > 0 rad, or when d overflows the double range in `sys` (naming the parallax)
  * @example
  * ```ts
  * import { SI, distanceFromParallax, units } from "starlume";
@@ -62,8 +73,7 @@ export const PARALLAX_BIAS_THRESHOLD: number = PARALLAX_FRACTIONAL_ERROR_THRESHO
  * ```
  */
 export function distanceFromParallax<S extends SystemName>(sys: UnitSystem<S>, parallax: Angle): Length<S> {
-  positive(sys, "parallax", parallax, A);
-  return positiveIn(sys, "distance", kernel(sys, "distance", L, () => distanceFromParallaxSI(parallax)), L) as Length<S>;
+  return distanceLaw(sys, parallax);
 }
 
 /**
@@ -80,11 +90,7 @@ export function distanceFromParallax<S extends SystemName>(sys: UnitSystem<S>, p
  * ```
  */
 export function distanceFromParallaxExact<S extends SystemName>(sys: UnitSystem<S>, parallax: Angle): Length<S> {
-  positive(sys, "parallax", parallax, A);
-  if (!(parallax < Math.PI / 2)) {
-    throw new RangeError(`parallax must be < π/2 rad for the exact geometry; got ${String(parallax)}`);
-  }
-  return positiveIn(sys, "distance", kernel(sys, "distance", L, () => distanceFromParallaxExactSI(parallax)), L) as Length<S>;
+  return distanceExactLaw(sys, parallax);
 }
 
 /**
@@ -102,8 +108,7 @@ export function distanceFromParallaxExact<S extends SystemName>(sys: UnitSystem<
  * ```
  */
 export function parallaxFromDistance<S extends SystemName>(sys: UnitSystem<S>, distance: Length<NoInfer<S>>): Angle {
-  positive(sys, "distance", distance, L);
-  return kernel(sys, "parallax", A, () => parallaxFromDistanceSI(toSI(sys, distance, L))) as Angle;
+  return parallaxLaw(sys, distance);
 }
 
 /**
@@ -120,8 +125,7 @@ export function parallaxFromDistance<S extends SystemName>(sys: UnitSystem<S>, d
  * ```
  */
 export function parallaxFromDistanceExact<S extends SystemName>(sys: UnitSystem<S>, distance: Length<NoInfer<S>>): Angle {
-  positive(sys, "distance", distance, L);
-  return kernel(sys, "parallax", A, () => parallaxFromDistanceExactSI(toSI(sys, distance, L))) as Angle;
+  return parallaxExactLaw(sys, distance);
 }
 
 /** Options of {@link parallaxDistance}. */
@@ -168,16 +172,20 @@ export function parallaxDistance<S extends SystemName>(
   sigmaParallax: Angle,
   options: ParallaxDistanceOptions = {},
 ): ParallaxDistance<S> {
-  positive(sys, "parallax", parallax, A);
-  nonNegative(sys, "parallax uncertainty", sigmaParallax, A);
-  const threshold = requireInRange("threshold", options.threshold ?? PARALLAX_BIAS_THRESHOLD, Number.MIN_VALUE, Number.MAX_VALUE, "(dimensionless σ_p/p)");
-  const r = kernel(sys, "distance uncertainty", L, () => parallaxDistanceSI(parallax, sigmaParallax, threshold));
-  const sigma = r.sigmaDistanceM === 0 ? 0 : positiveIn(sys, "distance uncertainty", r.sigmaDistanceM, L);
+  const distance = distanceLaw(sys, parallax); // checks the parallax; refuses a distance beyond the double range
+  const sp = sigmaParallaxIn.toSI(sys, sigmaParallax);
+  const threshold = thresholdIn.toSI(sys, options.threshold ?? PARALLAX_BIAS_THRESHOLD);
+  const fractionalParallaxError = sp / parallax;
+  const sdSI = distanceFromParallaxUnchecked(parallax) * fractionalParallaxError;
+  const sigmaDistance = sigmaDistanceOut.fromSI(sys, sdSI);
+  if (sigmaDistance !== sigmaDistance) {
+    throw new RangeError(`${sigmaDistanceOut.reason(sys, sdSI, [parallaxIn, sigmaParallaxIn], [parallax, sigmaParallax])} (too large for a first-order estimate)`);
+  }
   return {
-    distance: positiveIn(sys, "distance", r.distanceM, L) as Length<S>,
-    sigmaDistance: sigma as Length<S>,
-    fractionalParallaxError: r.fractionalParallaxError,
-    inversionBiased: r.inversionBiased,
+    distance,
+    sigmaDistance: sigmaDistance as Length<S>,
+    fractionalParallaxError,
+    inversionBiased: fractionalParallaxError > threshold,
     threshold,
   };
 }

@@ -137,7 +137,8 @@ describe("typed stellar-parameter solver", () => {
       temperature: { value: SI.of(5800, units.K), sigma: SI.of(50, units.K) },
     };
     expect(() => solveStar(CGS, { ...good, bolometricFlux: { value: CGS.of(1e-9, units.erg_per_s_cm2), sigma: -1 as Flux<"CGS"> } })).toThrow(
-      /^bolometricFlux\.sigma must be a finite number > 0 erg s\^-1 cm\^-2; got -1$/,
+      // the law toolkit's one message: the caller's coherent unit (erg s^-1 cm^-2 = g s^-3 in CGS)
+      /^bolometricFlux\.sigma must be a finite number > 0 g s\^-3; got -1$/,
     );
     expect(() => solveStar(SI, { ...good, radius: { value: -7 as Length<"SI">, sigma: SI.of(1, units.km) } })).toThrow(/^radius\.value must be a finite number > 0 m; got -7$/);
     expect(() => solveStar(CGS, { ...good, radius: { value: -7 as Length<"CGS">, sigma: CGS.of(1, units.km) } })).toThrow(/^radius\.value must be a finite number > 0 cm; got -7$/);
@@ -214,7 +215,9 @@ describe("typed batch solver", () => {
       bolometricFlux: { values: assumeArray<FluxArray<"SI">>(c.f), sigmas: assumeArray<FluxArray<"SI">>(c.sf) },
       temperature: { values: assumeArray<TemperatureArray>(c.t), sigmas: assumeArray<TemperatureArray>(c.st) },
     });
-    expect(out.invalid).toBe(0);
+    expect(out.invalid).toEqual([]);
+    expect(out.reasons).toEqual([]);
+    expect(out.values.radius).toBe(out.radius);
     for (let i = 0; i < n; i += 7) {
       const s = solveStar(SI, {
         parallax: { value: c.p[i]! as Angle, sigma: c.sp[i]! as Angle },
@@ -258,7 +261,13 @@ describe("typed batch solver", () => {
       },
       { radius },
     );
-    expect(res.invalid).toBe(3);
+    expect(res.invalid).toEqual([3, 5, 9]);
+    // the sentence the scalar form would throw, in the caller's unit (a batch allows σ = 0, hence >= 0)
+    expect(res.reasons).toEqual([
+      "parallax.value must be a finite number > 0 rad; got -1",
+      "bolometricFlux.value must be a finite number > 0 g s^-3; got NaN",
+      `temperature.sigma must be a finite number >= 0 K; got -2`,
+    ]);
     expect(res.reason.length).toBe(n);
     expect(res.reason[3]).toBe(StarBatchReason.NON_POSITIVE);
     expect(res.reason[5]).toBe(StarBatchReason.NON_FINITE);
@@ -267,7 +276,8 @@ describe("typed batch solver", () => {
       if ([3, 5, 9].includes(i)) expect(radius[i]).toBeNaN();
       else expect(radius[i]).toBeGreaterThan(0);
     }
-    expect(Object.keys(res).sort()).toEqual(["invalid", "reason"]);
+    expect(Object.keys(res).sort()).toEqual(["invalid", "reason", "reasons", "values"]);
+    expect(res.values.radius).toBe(radius);
   });
 
   it("flags a row whose result overflows only in CGS as RESULT_OUT_OF_RANGE (no Infinity written)", () => {
@@ -285,9 +295,13 @@ describe("typed batch solver", () => {
       temperature: { values: assumeArray<TemperatureArray>(one(1000)), sigmas: assumeArray<TemperatureArray>(one(0)) },
       distance: { values: assumeArray<LengthArray<"SI">>(one(1e158)), sigmas: assumeArray<LengthArray<"SI">>(one(0)) },
     });
-    expect(si.invalid).toBe(0);
+    expect(si.invalid).toEqual([]);
     expect(si.luminosity[0]).toBeGreaterThan(7e301);
-    expect(res.invalid).toBe(1);
+    expect(res.invalid).toEqual([0]);
+    expect(res.reasons).toEqual([
+      "derived luminosity is not representable as a finite number > 0 erg s^-1 for radius.value=1e+150 cm, radius.sigma=0 cm, " +
+        "temperature.value=1000 K, temperature.sigma=0 K, distance.value=1e+160 cm, distance.sigma=0 cm; inputs are out of the double-precision range",
+    ]);
     expect(res.reason[0]).toBe(StarBatchReason.RESULT_OUT_OF_RANGE);
     expect(res.luminosity[0]).toBeNaN();
     expect(res.radius[0]).toBeNaN();
@@ -305,5 +319,61 @@ describe("typed batch solver", () => {
     // m_bol ≈ 7 mag through a power of ten and back: a few 1e-15
     expect(rel(res.temperature[0]!, 5800)).toBeLessThan(1e-14);
     expect(rel(res.radius[0]!, 6.957e8)).toBeLessThan(1e-14);
+  });
+
+  it("names each bad row's field in the caller's unit and in mag, in row order, whatever the code's precedence", () => {
+    const col = (...x: number[]) => Float64Array.from(x);
+    const solver = createStarBatchSolver(CGS, ["apparentBolometricMagnitude", "angularDiameter", "parallax"]);
+    const theta = assumeArray<AngleArray>(col(1e-9, 1e-9, 1e-9, 1e-9, 1e-9));
+    const res = solver.solve({
+      // row 0 fine; row 1 magnitude NaN; row 2 its σ negative; row 3 θ ≤ 0 and another σ NaN (NaN wins: NON_FINITE); row 4 fine
+      apparentBolometricMagnitude: { values: col(7, NaN, 7, 7, 7), sigmas: col(0.01, 0.01, -0.5, 0.01, 0.01) },
+      angularDiameter: { values: assumeArray<AngleArray>(col(1e-9, 1e-9, 1e-9, 0, 1e-9)), sigmas: theta },
+      parallax: { values: theta, sigmas: assumeArray<AngleArray>(col(0, 0, 0, NaN, 0)) },
+    });
+    expect(res.invalid).toEqual([1, 2, 3]);
+    expect([...res.reason]).toEqual([0, StarBatchReason.NON_FINITE, StarBatchReason.NEGATIVE_UNCERTAINTY, StarBatchReason.NON_FINITE, 0]);
+    expect(res.reasons).toEqual([
+      "apparentBolometricMagnitude.value must be a finite number mag; got NaN",
+      "apparentBolometricMagnitude.sigma must be a finite number >= 0 mag; got -0.5",
+      "parallax.sigma must be a finite number >= 0 rad; got NaN",
+    ]);
+    expect(res.radius[1]).toBeNaN();
+    expect(res.radius[4]).toBe(res.radius[0]);
+  });
+
+  it("a CGS value valid in its unit but below the double range once in SI is invalid, and says so", () => {
+    const one = (x: number) => Float64Array.of(x);
+    const solver = createStarBatchSolver(CGS, ["radius", "temperature", "distance"]);
+    // 5e-324 cm is 5e-326 m: 0 in doubles
+    const res = solver.solve({
+      radius: { values: assumeArray<LengthArray<"CGS">>(one(5e-324)), sigmas: assumeArray<LengthArray<"CGS">>(one(0)) },
+      temperature: { values: assumeArray<TemperatureArray>(one(5000)), sigmas: assumeArray<TemperatureArray>(one(0)) },
+      distance: { values: assumeArray<LengthArray<"CGS">>(one(1e20)), sigmas: assumeArray<LengthArray<"CGS">>(one(0)) },
+    });
+    expect(res.invalid).toEqual([0]);
+    expect(res.reason[0]).toBe(StarBatchReason.NON_POSITIVE);
+    expect(res.reasons).toEqual(["radius.value = 5e-324 cm is outside the double range once converted to SI (0 m)"]);
+    // and the scalar solver refuses the same value with the same sentence
+    expect(() =>
+      solveStar(CGS, {
+        radius: { value: 5e-324 as Length<"CGS">, sigma: 1 as Length<"CGS"> },
+        temperature: { value: 5000 as Temperature, sigma: 1 as Temperature },
+        distance: { value: 1e20 as Length<"CGS">, sigma: 1 as Length<"CGS"> },
+      }),
+    ).toThrow(/^radius\.value = 5e-324 cm is outside the double range once converted to SI \(0 m\)$/);
+  });
+
+  it("shared-shape errors (a missing column, mismatched lengths) throw before any row is written", () => {
+    const solver = createStarBatchSolver(SI, ["parallax", "bolometricFlux", "temperature"]);
+    const radius = assumeArray<LengthArray<"SI">>(Float64Array.of(-7, -7));
+    const a2 = assumeArray<AngleArray>(Float64Array.of(1e-8, 1e-8));
+    const f2 = assumeArray<FluxArray<"SI">>(Float64Array.of(1e-9, 1e-9));
+    const t1 = assumeArray<TemperatureArray>(Float64Array.of(5000));
+    expect(() =>
+      solver.solve({ parallax: { values: a2, sigmas: a2 }, bolometricFlux: { values: f2, sigmas: f2 }, temperature: { values: t1, sigmas: t1 } }, { radius }),
+    ).toThrow(/^batch columns must all have length 2; got one of length 1$/);
+    expect([...radius]).toEqual([-7, -7]);
+    expect(() => solver.solve({ parallax: { values: a2, sigmas: a2 }, bolometricFlux: { values: f2, sigmas: f2 } } as never)).toThrow(/^input\.temperature must be/);
   });
 });

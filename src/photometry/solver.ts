@@ -24,9 +24,11 @@
  *
  * @module
  */
-import { requireFinite, requirePositive } from "../internal/checks";
-import { arrayFromSIInPlace, arrayToSI, fromSI, toSI } from "../internal/typed";
-import { kinds } from "../quantity/aliases";
+import { show } from "../internal/checks";
+import { BatchLog, type BatchResult } from "../law/batch";
+import { lawInput, type LawInput } from "../law/input";
+import { lawOutput, type LawOutput } from "../law/output";
+import { kinds, type Kind } from "../quantity/aliases";
 import type {
   Angle,
   AngleArray,
@@ -39,9 +41,8 @@ import type {
   Temperature,
   TemperatureArray,
 } from "../quantity/aliases";
-import type { Dimension } from "../quantity/dimension";
 import type { Pure, SystemName } from "../quantity/quantity";
-import type { UnitSystem } from "../quantity/system";
+import { CGS, SI, type UnitSystem } from "../quantity/system";
 import { times10 } from "../quantity/unit";
 import { PhotometryBatchReason } from "./kernels/common";
 import {
@@ -131,15 +132,50 @@ const REQUEST: Readonly<Record<StarQuantity, string>> = {
   angularDiameterRad: "angularDiameter",
 };
 
-const DIM: Readonly<Record<StarObservationName, Dimension | undefined>> = {
-  temperature: kinds.temperature.dimension,
-  luminosity: kinds.power.dimension,
-  radius: kinds.length.dimension,
-  distance: kinds.length.dimension,
-  parallax: kinds.angle.dimension,
-  bolometricFlux: kinds.flux.dimension,
-  apparentBolometricMagnitude: undefined,
-  angularDiameter: kinds.angle.dimension,
+/** Kind of each observation (a magnitude is a pure number, printed in mag). */
+const KIND: Readonly<Record<StarObservationName, Kind>> = {
+  temperature: kinds.temperature,
+  luminosity: kinds.power,
+  radius: kinds.length,
+  distance: kinds.length,
+  parallax: kinds.angle,
+  bolometricFlux: kinds.flux,
+  apparentBolometricMagnitude: kinds.dimensionless,
+  angularDiameter: kinds.angle,
+};
+
+/** The checks of one observation: its value, its σ in {@link solveStar} (> 0) and its σ in a batch (≥ 0). */
+interface ObservationInputs {
+  readonly value: LawInput;
+  readonly sigma: LawInput;
+  readonly batchSigma: LawInput;
+}
+
+const INPUTS = Object.fromEntries(
+  OBSERVATION_NAMES.map((name): [StarObservationName, ObservationInputs] => {
+    const kind = KIND[name];
+    const magnitude = name === "apparentBolometricMagnitude";
+    const unit = magnitude ? { unit: "mag" } : {};
+    return [
+      name,
+      {
+        value: lawInput(`${name}.value`, kind, { check: magnitude ? "finite" : "positive", ...unit }),
+        sigma: lawInput(`${name}.sigma`, kind, { check: "positive", ...unit }),
+        batchSigma: lawInput(`${name}.sigma`, kind, { check: "nonNegative", ...unit }),
+      },
+    ];
+  }),
+) as Readonly<Record<StarObservationName, ObservationInputs>>;
+
+/** Each derived quantity's move from SI into the caller's system. */
+const OUTPUTS = Object.fromEntries(
+  [...STAR_QUANTITY_NAMES, "parallax" as const].map((name): [StarQuantityName | "parallax", LawOutput] => [name, lawOutput(`derived ${name}`, KIND[name])]),
+) as Readonly<Record<StarQuantityName | "parallax", LawOutput>>;
+
+/** Decimal exponent of each of the six quantities' coherent unit over SI, per system (covariance rows and columns). */
+const COVARIANCE_EXP10: Readonly<Record<SystemName, readonly number[]>> = {
+  SI: STAR_QUANTITY_NAMES.map((n) => SI.exp10(KIND[n].dimension)),
+  CGS: STAR_QUANTITY_NAMES.map((n) => CGS.exp10(KIND[n].dimension)),
 };
 
 /** Readable, parseable unit strings of each system's coherent units (for JSON and messages). */
@@ -299,19 +335,12 @@ const plus0 = (x: number): number => x + 0; // JSON cannot keep −0
 
 function validate(sys: UnitSystem<SystemName>, name: StarObservationName, m: Measurement<number>): MeasurementSI {
   if (typeof m !== "object" || m === null) throw new RangeError(`${name} must be { value, sigma }; got ${String(m)}`);
-  const d = DIM[name];
-  const unit = UNIT[sys.name][name];
-  if (d === undefined) requireFinite(`${name}.value`, m.value, unit);
-  else requirePositive(`${name}.value`, m.value, unit);
-  requirePositive(`${name}.sigma`, m.sigma, unit);
-  if (d !== undefined && !(m.sigma / m.value < Infinity)) {
-    throw new RangeError(`${name}.sigma / ${name}.value is not a finite number (got ${String(m.sigma)} / ${String(m.value)} ${unit})`);
-  }
-  if (d === undefined) return { value: m.value, sigma: m.sigma };
-  const value = toSI(sys, m.value, d);
-  const sigma = toSI(sys, m.sigma, d);
-  if (!(value > 0) || value === Infinity || !(sigma > 0) || sigma === Infinity) {
-    throw new RangeError(`${name} is out of the double-precision range once converted to SI; got value ${String(m.value)} ${unit}, sigma ${String(m.sigma)} ${unit}`);
+  const checks = INPUTS[name];
+  // each checked in the caller's unit and moved to SI (a RangeError names the field, value and unit)
+  const value = checks.value.toSI(sys, m.value);
+  const sigma = checks.sigma.toSI(sys, m.sigma);
+  if (name !== "apparentBolometricMagnitude" && !(m.sigma / m.value < Infinity)) {
+    throw new RangeError(`${name}.sigma / ${name}.value is not a finite number (got ${show(m.sigma)} / ${show(m.value)}${checks.value.unitIn(sys)})`);
   }
   return { value, sigma };
 }
@@ -363,15 +392,15 @@ export function solveStar<S extends SystemName>(sys: UnitSystem<S>, observations
 
   const units = UNIT[sys.name];
   const estimate = (name: StarQuantityName | "parallax", q: { value: number; sigma: number; relativeSigma: number; measured: boolean }) => {
-    const d = DIM[name]!;
-    const value = fromSI(sys, q.value, d);
-    const sigma = fromSI(sys, q.sigma, d);
-    if (!(value > 0) || value === Infinity || !(sigma >= 0) || sigma === Infinity) {
+    const out = OUTPUTS[name];
+    const value = out.fromSI(sys, q.value); // NaN when not finite in `sys`
+    const sigma = out.fromSI(sys, q.sigma);
+    if (!(value > 0) || !(sigma >= 0)) {
       throw new RangeError(`derived ${name} is not representable as a finite number > 0 ${units[name]}; inputs are out of the double-precision range`);
     }
     return { value, sigma, relativeSigma: q.relativeSigma, measured: q.measured };
   };
-  const exps = STAR_QUANTITY_NAMES.map((n) => sys.exp10(DIM[n]!));
+  const exps = COVARIANCE_EXP10[sys.name];
   const matrix = r.covariance.map((row, i) => row.map((c, j) => plus0(fromSIBoth(c, exps[i]!, exps[j]!))));
   for (const row of matrix) {
     for (const c of row) {
@@ -512,12 +541,21 @@ export interface StarBatchColumns<S extends SystemName> {
 /** Caller-supplied output columns: any subset of {@link StarBatchColumns}; only those are written. */
 export type StarBatchOutput<S extends SystemName> = Partial<StarBatchColumns<S>>;
 
-/** Result of a batch solve. */
-export interface StarBatchResult {
-  /** One {@link StarBatchReason} code per row (0 = OK); invalid rows are NaN in every output column. */
+/**
+ * Result of a batch solve: the one batch contract of starlume
+ * ({@link BatchResult}: `values`, `invalid` ascending, `reasons` aligned with
+ * it), plus the per-row reason codes. Nothing is dropped: every input row has
+ * an output row, NaN in every written column when invalid.
+ */
+export interface StarBatchResult<V = StarBatchOutput<SystemName>> extends BatchResult<V> {
+  /** The output columns written (with `reason`). */
+  readonly values: V;
+  /** Ascending indices of the rows whose reason is not OK; empty when every row is valid. */
+  readonly invalid: number[];
+  /** `reasons[k]` says why row `invalid[k]` is invalid, naming the field, its value and the caller's unit. */
+  readonly reasons: string[];
+  /** One {@link StarBatchReason} code per row (0 = OK). */
   readonly reason: Uint8Array;
-  /** Number of rows whose reason is not OK. Nothing is dropped: every input row has an output row. */
-  readonly invalid: number;
 }
 
 /**
@@ -539,13 +577,13 @@ export interface StarBatchSolver<S extends SystemName, N extends StarObservation
    * Never throws mid-array.
    * @throws RangeError only for a missing input column or mismatched lengths, before any row is written
    */
-  solve(input: StarBatchInput<S, N>): StarBatchColumns<S> & StarBatchResult;
+  solve(input: StarBatchInput<S, N>): StarBatchColumns<S> & StarBatchResult<StarBatchColumns<S>>;
   /**
    * Solve every row into the caller's output columns (only those given are
    * written; `reason` is allocated when not given). Never throws mid-array.
    * @throws RangeError only for a missing input column or mismatched lengths, before any row is written
    */
-  solve(input: StarBatchInput<S, N>, output: StarBatchOutput<S>): StarBatchResult;
+  solve(input: StarBatchInput<S, N>, output: StarBatchOutput<S>): StarBatchResult<StarBatchOutput<S>>;
 }
 
 const OUTPUT_KEYS: readonly (readonly [keyof StarBatchColumns<SystemName>, keyof StarBatchOutputSI, StarQuantityName])[] = [
@@ -570,7 +608,11 @@ const OUTPUT_KEYS: readonly (readonly [keyof StarBatchColumns<SystemName>, keyof
  * `sys` (magnitudes: plain `Float64Array`s). Each output is a product of
  * powers of the inputs, evaluated without a log/exp round trip (a few ulp);
  * σ is first order with independent inputs, and σ = 0 inputs are allowed.
- * Invalid rows are written as NaN with a reason code; nothing is dropped.
+ * Never throws part-way (the one batch contract, {@link BatchResult}): an
+ * invalid row is written as NaN, listed in `invalid` (ascending) with the
+ * sentence its scalar form would throw in `reasons` (in the caller's unit),
+ * and keeps a reason code in `reason`; nothing is dropped. Every valid row
+ * costs nothing extra: reasons are written only when a row is invalid.
  * In SI the kernel reads and writes the caller's arrays directly; in CGS the
  * system-dependent inputs are copied to SI and the outputs converted in place.
  * The common set {parallax, bolometricFlux, temperature} runs a specialised
@@ -590,7 +632,8 @@ const OUTPUT_KEYS: readonly (readonly [keyof StarBatchColumns<SystemName>, keyof
  *   bolometricFlux: { values: SI.arrayOf([3.2e-9, 1e-11, 1e-11], units.W_per_m2), sigmas: SI.arrayOf([5e-11, 1e-13, 1e-13], units.W_per_m2) },
  *   temperature: { values: SI.arrayOf([5800, 4500, 4500], units.K), sigmas: SI.arrayOf([50, 80, 80], units.K) },
  * });
- * out.invalid; // 1 (row 2: negative parallax; out.reason[2] === 2, its outputs NaN)
+ * out.invalid; // [2] (its outputs NaN, out.reason[2] === StarBatchReason.NON_POSITIVE)
+ * out.reasons; // ["parallax.value must be a finite number > 0 rad; got -4.848…e-9"]
  * SI.arrayIn(out.radius, units.Rsol); // [≈ 3.13, ≈ 5.82, NaN]
  * ```
  */
@@ -610,12 +653,12 @@ export function createStarBatchSolver<S extends SystemName, const N extends Star
   requireSufficient(inputs);
   const names = [inputs[0], inputs[1], inputs[2]] as const;
   const kernelSolver = createStarBatchSolverSI([KIND_OF[names[0]], KIND_OF[names[1]], KIND_OF[names[2]]]);
-  const inDims = names.map((n) => DIM[n]);
-  const convertOutputs = sys.name !== "SI";
+  const checks = names.map((n) => INPUTS[n]);
+  const inSI = sys.name === "SI";
 
-  function solve(input: StarBatchInput<S, N>): StarBatchColumns<S> & StarBatchResult;
-  function solve(input: StarBatchInput<S, N>, output: StarBatchOutput<S>): StarBatchResult;
-  function solve(input: StarBatchInput<S, N>, output?: StarBatchOutput<S>): StarBatchResult {
+  function solve(input: StarBatchInput<S, N>): StarBatchColumns<S> & StarBatchResult<StarBatchColumns<S>>;
+  function solve(input: StarBatchInput<S, N>, output: StarBatchOutput<S>): StarBatchResult<StarBatchOutput<S>>;
+  function solve(input: StarBatchInput<S, N>, output?: StarBatchOutput<S>): StarBatchResult<StarBatchOutput<S>> {
     const cols = names.map((n) => {
       const c = (input as Partial<Record<StarObservationName, StarBatchColumn<Float64Array>>>)[n];
       if (c === undefined || !(c.values instanceof Float64Array) || !(c.sigmas instanceof Float64Array)) {
@@ -624,54 +667,137 @@ export function createStarBatchSolver<S extends SystemName, const N extends Star
       return c;
     });
     const n = cols[0]!.values.length;
-    const values = cols.map((c, k) => (inDims[k] === undefined ? c.values : arrayToSI(sys, c.values, inDims[k]!)));
-    const sigmas = cols.map((c, k) => (inDims[k] === undefined ? c.sigmas : arrayToSI(sys, c.sigmas, inDims[k]!)));
+    // In SI the kernel reads the caller's arrays; in CGS the dimensioned columns are copied to SI
+    // (unchecked: the kernel's own row checks then give each bad row its code).
+    const values = cols.map((c, k) => (inSI ? c.values : copyToSI(c.values, checks[k]!.value)));
+    const sigmas = cols.map((c, k) => (inSI ? c.sigmas : copyToSI(c.sigmas, checks[k]!.value)));
     const out: Partial<Record<keyof StarBatchColumns<SystemName>, Float64Array | Uint8Array>> =
       output === undefined ? Object.fromEntries(OUTPUT_KEYS.map(([k]) => [k, new Float64Array(n)])) : { ...output };
     const reason = out.reason instanceof Uint8Array ? out.reason : new Uint8Array(n);
+    out.reason = reason;
     const outSI: Record<string, Float64Array | Uint8Array> = { reason };
     for (const [k, kk] of OUTPUT_KEYS) {
       const a = out[k];
       if (a !== undefined) outSI[kk] = a;
     }
-    let invalid = kernelSolver.solve(
+    let count = kernelSolver.solve(
       { values: [values[0]!, values[1]!, values[2]!], sigmas: [sigmas[0]!, sigmas[1]!, sigmas[2]!] },
       outSI as unknown as StarBatchOutputSI,
     );
-    if (convertOutputs) invalid = toSystemInPlace(sys, out, reason, invalid);
-    return output === undefined ? ({ ...out, reason, invalid } as StarBatchColumns<S> & StarBatchResult) : { reason, invalid };
+    let overflowed: Map<number, StarQuantityName> | undefined;
+    if (!inSI) {
+      overflowed = new Map();
+      count += toSystemInPlace(sys, out, reason, overflowed);
+    }
+    // the common case (every row valid) costs one comparison
+    const log = count === 0 ? { invalid: [], reasons: [] } : batchReasons(sys, names, cols, values, reason, overflowed);
+    const result: StarBatchResult<StarBatchOutput<S>> = { values: out as StarBatchOutput<S>, invalid: log.invalid, reasons: log.reasons, reason };
+    return output === undefined ? { ...out, ...result } : result;
   }
 
   return { system: sys.name, inputs: names, solve };
 }
 
+/** A caller's column in CGS copied to SI by the input's exact power of ten (no checks; pure numbers are shared). */
+function copyToSI(column: Float64Array, input: LawInput): Float64Array {
+  const scale = input.cgs;
+  if (scale.exp10 === 0) return column;
+  const out = new Float64Array(column.length);
+  for (let i = 0; i < column.length; i++) out[i] = scale.apply(column[i]!);
+  return out;
+}
+
 /**
- * Convert SI output columns to `sys` in place; a valid row whose converted
- * value overflows becomes RESULT_OUT_OF_RANGE with NaN in every column.
- * Returns the updated count of invalid rows.
+ * The invalid rows of a batch, ascending, each with the sentence its scalar
+ * form would throw (run only when some row is invalid): the first field that
+ * fails the check its code names, in the caller's unit; or, for a result out
+ * of range, the quantity (when known) and the row's inputs.
+ */
+function batchReasons(
+  sys: UnitSystem<SystemName>,
+  names: readonly StarObservationName[],
+  cols: readonly StarBatchColumn<Float64Array>[],
+  valuesSI: readonly Float64Array[],
+  reason: Uint8Array,
+  overflowed: Map<number, StarQuantityName> | undefined,
+): { invalid: number[]; reasons: string[] } {
+  const log = new BatchLog();
+  for (let i = 0; i < reason.length; i++) {
+    const code = reason[i]!;
+    if (code !== PhotometryBatchReason.OK) log.add(i, rowReason(sys, names, cols, valuesSI, i, code, overflowed?.get(i)));
+  }
+  return log;
+}
+
+function rowReason(
+  sys: UnitSystem<SystemName>,
+  names: readonly StarObservationName[],
+  cols: readonly StarBatchColumn<Float64Array>[],
+  valuesSI: readonly Float64Array[],
+  i: number,
+  code: number,
+  quantity: StarQuantityName | undefined,
+): string {
+  for (let k = 0; k < names.length; k++) {
+    const checks = INPUTS[names[k]!];
+    const v = cols[k]!.values[i]!;
+    const s = cols[k]!.sigmas[i]!;
+    if (code === PhotometryBatchReason.NON_FINITE) {
+      if (!(v - v === 0)) return checks.value.reason(sys, v);
+      if (!(s - s === 0)) return checks.batchSigma.reason(sys, s);
+    } else if (code === PhotometryBatchReason.NON_POSITIVE) {
+      // a caller's value that passes may still leave the double range once in SI: reason() says so
+      if (checks.value.check === "positive" && !(valuesSI[k]![i]! > 0)) return checks.value.reason(sys, v);
+    } else if (code === PhotometryBatchReason.NEGATIVE_UNCERTAINTY) {
+      if (s < 0) return checks.batchSigma.reason(sys, s);
+    }
+  }
+  const args = names
+    .map((name, k) => {
+      const checks = INPUTS[name];
+      return `${name}.value=${show(cols[k]!.values[i]!)}${checks.value.unitIn(sys)}, ${name}.sigma=${show(cols[k]!.sigmas[i]!)}${checks.value.unitIn(sys)}`;
+    })
+    .join(", ");
+  return quantity === undefined
+    ? `a derived quantity or its σ is not representable as a finite double in ${sys.name} for ${args}; inputs are out of the double-precision range`
+    : `derived ${quantity} is not representable as a finite number > 0 ${UNIT[sys.name][quantity]} for ${args}; inputs are out of the double-precision range`;
+}
+
+/**
+ * Convert SI output columns to `sys` in place (each by its quantity's exact
+ * power of ten); a valid row whose converted value overflows becomes
+ * RESULT_OUT_OF_RANGE with NaN in every column, and `overflowed` records the
+ * first quantity that did. Returns the number of rows newly made invalid.
  */
 function toSystemInPlace(
   sys: UnitSystem<SystemName>,
   out: Partial<Record<keyof StarBatchColumns<SystemName>, Float64Array | Uint8Array>>,
   reason: Uint8Array,
-  invalid: number,
+  overflowed: Map<number, StarQuantityName>,
 ): number {
   const present: Float64Array[] = [];
+  let added = 0;
   for (const [k, , q] of OUTPUT_KEYS) {
     const a = out[k] as Float64Array | undefined;
     if (a === undefined) continue;
     present.push(a);
-    arrayFromSIInPlace(sys, a, DIM[q]!);
+    const o = OUTPUTS[q];
     for (let i = 0; i < a.length; i++) {
       const v = a[i]!;
-      if (reason[i] === PhotometryBatchReason.OK && !(v >= 0 && v !== Infinity)) {
+      if (reason[i] !== PhotometryBatchReason.OK) continue;
+      const c = o.fromSI(sys, v); // NaN when not finite in `sys`
+      a[i] = c;
+      if (!(c >= 0)) {
         reason[i] = PhotometryBatchReason.RESULT_OUT_OF_RANGE;
-        invalid++;
+        overflowed.set(i, q);
+        added++;
       }
     }
   }
-  for (let i = 0; i < reason.length; i++) {
-    if (reason[i] === PhotometryBatchReason.RESULT_OUT_OF_RANGE) for (const a of present) a[i] = NaN;
+  if (added > 0) {
+    for (let i = 0; i < reason.length; i++) {
+      if (overflowed.has(i)) for (const a of present) a[i] = NaN;
+    }
   }
-  return invalid;
+  return added;
 }

@@ -4,6 +4,8 @@
  * typecheck mode: if it ever compiles, the directive is unused and both fail.
  */
 import { describe, expectTypeOf, test } from "vitest";
+import type { BatchResult } from "../../src/law/index";
+import type { StarBatchColumns, StarBatchOutput } from "../../src/photometry/index";
 import {
   abMagnitude,
   absoluteBolometricMagnitude,
@@ -46,6 +48,7 @@ import {
   type Length,
   type LengthArray,
   type Power,
+  type PowerArray,
   type Radiance,
   type SolidAngle,
   type SpectralFluxPerFrequency,
@@ -295,6 +298,20 @@ describe("honest photometry code compiles", () => {
     });
     expectTypeOf(out.radius).toEqualTypeOf<LengthArray<"CGS">>();
     expectTypeOf(out.reason).toEqualTypeOf<Uint8Array>();
-    expectTypeOf(out.invalid).toEqualTypeOf<number>();
+    // the one batch contract: indices of invalid rows and a reason for each
+    expectTypeOf(out.invalid).toEqualTypeOf<number[]>();
+    expectTypeOf(out.reasons).toEqualTypeOf<string[]>();
+    expectTypeOf(out).toExtend<BatchResult<StarBatchColumns<"CGS">>>();
+    expectTypeOf(out.values.luminosity).toEqualTypeOf<PowerArray<"CGS">>();
+    const into = solver.solve(
+      {
+        apparentBolometricMagnitude: { values: new Float64Array(2), sigmas: new Float64Array(2) },
+        angularDiameter: { values: angles, sigmas: angles },
+        parallax: { values: angles, sigmas: angles },
+      },
+      { radius: assumeArray<LengthArray<"CGS">>(new Float64Array(2)) },
+    );
+    expectTypeOf(into).toExtend<BatchResult<StarBatchOutput<"CGS">>>();
+    expectTypeOf(into.values.radius).toEqualTypeOf<LengthArray<"CGS"> | undefined>();
   });
 });

@@ -44,7 +44,12 @@ export function angularDiameterSphereSI(radiusM: number, distanceM: number): num
   if (!(distanceM >= radiusM)) {
     throw new RangeError(`distance must be >= radius (observer outside the sphere); got distance ${String(distanceM)} m < radius ${String(radiusM)} m`);
   }
-  return requirePositiveResult("angular diameter", 2 * Math.asin(radiusM / distanceM), "rad");
+  return requirePositiveResult("angular diameter", angularDiameterSphereUnchecked(radiusM, distanceM), "rad");
+}
+
+/** θ = 2 asin(R/d) without input checks (see {@link angularDiameterSphereSI}); NaN when d < R. @internal */
+export function angularDiameterSphereUnchecked(radiusM: number, distanceM: number): number {
+  return 2 * Math.asin(radiusM / distanceM);
 }
 
 /**
@@ -63,7 +68,12 @@ export function angularDiameterSphereSI(radiusM: number, distanceM: number): num
 export function radiusFromAngularDiameterSphereSI(angularDiameterRad: number, distanceM: number): number {
   requireInRange("angular diameter", angularDiameterRad, Number.MIN_VALUE, Math.PI, "rad");
   requirePositive("distance", distanceM, "m");
-  return requirePositiveResult("radius", distanceM * Math.sin(angularDiameterRad / 2), "m");
+  return requirePositiveResult("radius", radiusFromAngularDiameterSphereUnchecked(angularDiameterRad, distanceM), "m");
+}
+
+/** R = d sin(θ/2) without input or result checks (see {@link radiusFromAngularDiameterSphereSI}). @internal */
+export function radiusFromAngularDiameterSphereUnchecked(angularDiameterRad: number, distanceM: number): number {
+  return distanceM * Math.sin(angularDiameterRad / 2);
 }
 
 /**
@@ -83,7 +93,12 @@ export function radiusFromAngularDiameterSphereSI(angularDiameterRad: number, di
 export function distanceFromAngularDiameterSphereSI(angularDiameterRad: number, radiusM: number): number {
   requireInRange("angular diameter", angularDiameterRad, Number.MIN_VALUE, Math.PI, "rad");
   requirePositive("radius", radiusM, "m");
-  return requirePositiveResult("distance", radiusM / Math.sin(angularDiameterRad / 2), "m");
+  return requirePositiveResult("distance", distanceFromAngularDiameterSphereUnchecked(angularDiameterRad, radiusM), "m");
+}
+
+/** d = R / sin(θ/2) without input or result checks (see {@link distanceFromAngularDiameterSphereSI}). @internal */
+export function distanceFromAngularDiameterSphereUnchecked(angularDiameterRad: number, radiusM: number): number {
+  return radiusM / Math.sin(angularDiameterRad / 2);
 }
 
 /**
@@ -103,7 +118,12 @@ export function distanceFromAngularDiameterSphereSI(angularDiameterRad: number, 
 export function angularDiameterDiskSI(radiusM: number, distanceM: number): number {
   requirePositive("radius", radiusM, "m");
   requirePositive("distance", distanceM, "m");
-  return requirePositiveResult("angular diameter", 2 * Math.atan(radiusM / distanceM), "rad");
+  return requirePositiveResult("angular diameter", angularDiameterDiskUnchecked(radiusM, distanceM), "rad");
+}
+
+/** θ = 2 atan(R/d) without input or result checks (see {@link angularDiameterDiskSI}). @internal */
+export function angularDiameterDiskUnchecked(radiusM: number, distanceM: number): number {
+  return 2 * Math.atan(radiusM / distanceM);
 }
 
 /**
@@ -125,7 +145,12 @@ export function radiusFromAngularDiameterDiskSI(angularDiameterRad: number, dist
     throw new RangeError(`angular diameter must be < π rad for a flat disk; got ${String(angularDiameterRad)}`);
   }
   requirePositive("distance", distanceM, "m");
-  return requirePositiveResult("radius", distanceM * Math.tan(angularDiameterRad / 2), "m");
+  return requirePositiveResult("radius", radiusFromAngularDiameterDiskUnchecked(angularDiameterRad, distanceM), "m");
+}
+
+/** R = d tan(θ/2) without input or result checks (see {@link radiusFromAngularDiameterDiskSI}). @internal */
+export function radiusFromAngularDiameterDiskUnchecked(angularDiameterRad: number, distanceM: number): number {
+  return distanceM * Math.tan(angularDiameterRad / 2);
 }
 
 /**
@@ -144,7 +169,12 @@ export function radiusFromAngularDiameterDiskSI(angularDiameterRad: number, dist
 export function angularDiameterSmallAngleSI(radiusM: number, distanceM: number): number {
   requirePositive("radius", radiusM, "m");
   requirePositive("distance", distanceM, "m");
-  return requirePositiveResult("angular diameter", (2 * radiusM) / distanceM, "rad");
+  return requirePositiveResult("angular diameter", angularDiameterSmallAngleUnchecked(radiusM, distanceM), "rad");
+}
+
+/** θ = 2R/d without input or result checks (see {@link angularDiameterSmallAngleSI}). @internal */
+export function angularDiameterSmallAngleUnchecked(radiusM: number, distanceM: number): number {
+  return (2 * radiusM) / distanceM;
 }
 
 /**
@@ -163,7 +193,12 @@ export function angularDiameterSmallAngleSI(radiusM: number, distanceM: number):
 export function radiusFromAngularDiameterSmallAngleSI(angularDiameterRad: number, distanceM: number): number {
   requirePositive("angular diameter", angularDiameterRad, "rad");
   requirePositive("distance", distanceM, "m");
-  return requirePositiveResult("radius", (angularDiameterRad / 2) * distanceM, "m");
+  return requirePositiveResult("radius", radiusFromAngularDiameterSmallAngleUnchecked(angularDiameterRad, distanceM), "m");
+}
+
+/** R = θd/2 without input or result checks (see {@link radiusFromAngularDiameterSmallAngleSI}). @internal */
+export function radiusFromAngularDiameterSmallAngleUnchecked(angularDiameterRad: number, distanceM: number): number {
+  return (angularDiameterRad / 2) * distanceM;
 }
 
 /**
@@ -182,7 +217,12 @@ export function radiusFromAngularDiameterSmallAngleSI(angularDiameterRad: number
 export function distanceFromAngularDiameterSmallAngleSI(angularDiameterRad: number, radiusM: number): number {
   requirePositive("angular diameter", angularDiameterRad, "rad");
   requirePositive("radius", radiusM, "m");
-  return requirePositiveResult("distance", (2 * radiusM) / angularDiameterRad, "m");
+  return requirePositiveResult("distance", distanceFromAngularDiameterSmallAngleUnchecked(angularDiameterRad, radiusM), "m");
+}
+
+/** d = 2R/θ without input or result checks (see {@link distanceFromAngularDiameterSmallAngleSI}). @internal */
+export function distanceFromAngularDiameterSmallAngleUnchecked(angularDiameterRad: number, radiusM: number): number {
+  return (2 * radiusM) / angularDiameterRad;
 }
 
 /**
@@ -201,8 +241,13 @@ export function distanceFromAngularDiameterSmallAngleSI(angularDiameterRad: numb
  */
 export function solidAngleConeSI(angularDiameterRad: number): number {
   requireInRange("angular diameter", angularDiameterRad, Number.MIN_VALUE, 2 * Math.PI, "rad");
+  return requirePositiveResult("solid angle", solidAngleConeUnchecked(angularDiameterRad), "sr");
+}
+
+/** Ω = 4π sin²(θ/4) without input or result checks (see {@link solidAngleConeSI}). @internal */
+export function solidAngleConeUnchecked(angularDiameterRad: number): number {
   const s = Math.sin(angularDiameterRad / 4);
-  return requirePositiveResult("solid angle", 4 * Math.PI * s * s, "sr");
+  return 4 * Math.PI * s * s;
 }
 
 /**
@@ -219,8 +264,13 @@ export function solidAngleConeSI(angularDiameterRad: number): number {
  */
 export function solidAngleSmallAngleSI(angularDiameterRad: number): number {
   requirePositive("angular diameter", angularDiameterRad, "rad");
+  return requirePositiveResult("solid angle", solidAngleSmallAngleUnchecked(angularDiameterRad), "sr");
+}
+
+/** Ω = π(θ/2)² without input or result checks (see {@link solidAngleSmallAngleSI}); 0 on underflow. @internal */
+export function solidAngleSmallAngleUnchecked(angularDiameterRad: number): number {
   const h = angularDiameterRad / 2;
-  return requirePositiveResult("solid angle", Math.PI * h * h, "sr");
+  return Math.PI * h * h;
 }
 
 /**
@@ -246,6 +296,11 @@ export function surfaceBrightnessSI(fluxWm2: number, angularDiameterRad: number)
   return requirePositiveResult("surface brightness", fluxWm2 / omega, "W m^-2 sr^-1");
 }
 
+/** F / (4π sin²(θ/4)) without input or result checks (see {@link surfaceBrightnessSI}); +Infinity when Ω underflows. @internal */
+export function surfaceBrightnessUnchecked(fluxWm2: number, angularDiameterRad: number): number {
+  return fluxWm2 / solidAngleConeUnchecked(angularDiameterRad);
+}
+
 /**
  * Mean surface brightness in the small-angle approximation: F / (π(θ/2)²).
  * For a uniformly bright sphere whose flux is F = (θ/2)² σT⁴ this is σT⁴/π.
@@ -263,7 +318,12 @@ export function surfaceBrightnessSI(fluxWm2: number, angularDiameterRad: number)
 export function surfaceBrightnessSmallAngleSI(fluxWm2: number, angularDiameterRad: number): number {
   requirePositive("flux", fluxWm2, "W m^-2");
   requirePositive("angular diameter", angularDiameterRad, "rad");
+  return requirePositiveResult("surface brightness", surfaceBrightnessSmallAngleUnchecked(fluxWm2, angularDiameterRad), "W m^-2 sr^-1");
+}
+
+/** F / (π(θ/2)²) without input or result checks (see {@link surfaceBrightnessSmallAngleSI}). @internal */
+export function surfaceBrightnessSmallAngleUnchecked(fluxWm2: number, angularDiameterRad: number): number {
   const h = angularDiameterRad / 2;
   // F / π / h / h avoids underflow of h² for tiny angles.
-  return requirePositiveResult("surface brightness", fluxWm2 / Math.PI / h / h, "W m^-2 sr^-1");
+  return fluxWm2 / Math.PI / h / h;
 }

@@ -318,3 +318,46 @@ export function dereddenMagnitude(magObserved: number, extinctionMag: number): n
   requireFinite("extinction", extinctionMag, "mag");
   return requireFiniteResult("dereddened magnitude", magObserved - extinctionMag, "mag");
 }
+
+// ---- unchecked cores (for the typed laws, which check their inputs in the caller's unit) ----
+
+/** A_λ/A_V = a(x) + b(x)/R_V at x = 1/λ (µm⁻¹) without input checks (see {@link ccm89RatioSI}): the caller keeps λ in the fit range. @internal */
+export function ccm89RatioUnchecked(wavelengthM: number, rV: number): number {
+  const x = 1e-6 / wavelengthM;
+  return aUnchecked(x) + bUnchecked(x) / rV;
+}
+
+/** A_λ = A_V (a(x) + b(x)/R_V) without input or result checks (see {@link ccm89ExtinctionMagSI}). @internal */
+export function ccm89ExtinctionUnchecked(wavelengthM: number, aVMag: number, rV: number): number {
+  return aVMag * ccm89RatioUnchecked(wavelengthM, rV);
+}
+
+/** A_V = R_V E(B−V) without input or result checks (see {@link aVFromColorExcess}). @internal */
+export function aVFromColorExcessUnchecked(colorExcessBVMag: number, rV: number): number {
+  return rV * colorExcessBVMag;
+}
+
+/** E(B−V) = A_V / R_V without input or result checks (see {@link colorExcessFromAV}). @internal */
+export function colorExcessFromAVUnchecked(aVMag: number, rV: number): number {
+  return aVMag / rV;
+}
+
+/** F × 10^(A/−2.5) without input or result checks (see {@link reddenFlux}). @internal */
+export function reddenFluxUnchecked(fluxIntrinsic: number, extinctionMag: number): number {
+  return fluxIntrinsic * 10 ** (extinctionMag / -2.5);
+}
+
+/** F × 10^(A/2.5) without input or result checks (see {@link dereddenFlux}); +Infinity on overflow. @internal */
+export function dereddenFluxUnchecked(fluxObserved: number, extinctionMag: number): number {
+  return fluxObserved * 10 ** (extinctionMag / 2.5);
+}
+
+/** m + A without input or result checks (see {@link reddenMagnitude}). @internal */
+export function reddenMagnitudeUnchecked(magIntrinsic: number, extinctionMag: number): number {
+  return magIntrinsic + extinctionMag;
+}
+
+/** m − A without input or result checks (see {@link dereddenMagnitude}). @internal */
+export function dereddenMagnitudeUnchecked(magObserved: number, extinctionMag: number): number {
+  return magObserved - extinctionMag;
+}

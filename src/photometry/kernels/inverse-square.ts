@@ -36,7 +36,12 @@ import { FOUR_PI, requirePositiveResult } from "./common";
 export function fluxFromLuminositySI(luminosityW: number, distanceM: number): number {
   requirePositive("luminosity", luminosityW, "W");
   requirePositive("distance", distanceM, "m");
-  return requirePositiveResult("flux", luminosityW / FOUR_PI / distanceM / distanceM, "W m^-2");
+  return requirePositiveResult("flux", fluxFromLuminosityUnchecked(luminosityW, distanceM), "W m^-2");
+}
+
+/** F = L / (4π d²) without input or result checks (see {@link fluxFromLuminositySI}); 0 on underflow. @internal */
+export function fluxFromLuminosityUnchecked(luminosityW: number, distanceM: number): number {
+  return luminosityW / FOUR_PI / distanceM / distanceM;
 }
 
 /**
@@ -56,7 +61,12 @@ export function fluxFromLuminositySI(luminosityW: number, distanceM: number): nu
 export function luminosityFromFluxSI(fluxWm2: number, distanceM: number): number {
   requirePositive("flux", fluxWm2, "W m^-2");
   requirePositive("distance", distanceM, "m");
-  return requirePositiveResult("luminosity", FOUR_PI * fluxWm2 * distanceM * distanceM, "W");
+  return requirePositiveResult("luminosity", luminosityFromFluxUnchecked(fluxWm2, distanceM), "W");
+}
+
+/** L = 4π d² F without input or result checks (see {@link luminosityFromFluxSI}); +Infinity on overflow. @internal */
+export function luminosityFromFluxUnchecked(fluxWm2: number, distanceM: number): number {
+  return FOUR_PI * fluxWm2 * distanceM * distanceM;
 }
 
 /**
@@ -79,7 +89,11 @@ export function luminosityFromFluxSI(fluxWm2: number, distanceM: number): number
 export function distanceFromLuminosityFluxSI(luminosityW: number, fluxWm2: number): number {
   requirePositive("luminosity", luminosityW, "W");
   requirePositive("flux", fluxWm2, "W m^-2");
+  return requirePositiveResult("distance", distanceFromLuminosityFluxUnchecked(luminosityW, fluxWm2), "m");
+}
+
+/** d = √(L / (4π F)) without input or result checks (see {@link distanceFromLuminosityFluxSI}). @internal */
+export function distanceFromLuminosityFluxUnchecked(luminosityW: number, fluxWm2: number): number {
   const q = luminosityW / (FOUR_PI * fluxWm2);
-  const d = q > 0 && q !== Infinity ? Math.sqrt(q) : Math.sqrt(luminosityW / FOUR_PI) / Math.sqrt(fluxWm2);
-  return requirePositiveResult("distance", d, "m");
+  return q > 0 && q !== Infinity ? Math.sqrt(q) : Math.sqrt(luminosityW / FOUR_PI) / Math.sqrt(fluxWm2);
 }

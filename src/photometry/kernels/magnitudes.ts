@@ -304,3 +304,85 @@ export function fNuFromFLambdaSI(fLambdaWm3: number, wavelengthM: number): numbe
   requirePositive("wavelength", wavelengthM, "m");
   return requirePositiveResult("f_nu", ((fLambdaWm3 * wavelengthM) / C) * wavelengthM, "W m^-2 Hz^-1");
 }
+
+// ---- unchecked cores (for the typed laws, which check their inputs in the caller's unit) ----
+
+/** m₁ − m₂ = −2.5 log₁₀(r) without input checks (see {@link magnitudeDifferenceFromFluxRatio}). @internal */
+export function magnitudeDifferenceFromFluxRatioUnchecked(fluxRatio: number): number {
+  return pogsonMag(fluxRatio);
+}
+
+/** F₁/F₂ = 10^(Δm/−2.5) without input or result checks (see {@link fluxRatioFromMagnitudeDifference}); +Infinity on overflow. @internal */
+export function fluxRatioFromMagnitudeDifferenceUnchecked(magnitudeDifference: number): number {
+  return 10 ** (magnitudeDifference / -2.5);
+}
+
+/**
+ * m₁ − m₂ = −2.5 log₁₀(F₁/F₂) for two positive finite fluxes in one unit,
+ * without input checks: when the quotient under- or overflows, the
+ * difference of the logarithms is used instead. @internal
+ */
+export function magnitudeDifferenceOfFluxesUnchecked(flux1: number, flux2: number): number {
+  const r = flux1 / flux2;
+  return r > 0 && r !== Infinity ? pogsonMag(r) : -2.5 * (Math.log10(flux1) - Math.log10(flux2));
+}
+
+/** m − M = 5 log₁₀(d / 10 pc) + A without input checks (see {@link distanceModulusSI}). @internal */
+export function distanceModulusUnchecked(distanceM: number, extinctionMag: number): number {
+  return 5 * Math.log10(distanceM / TEN_PARSECS_M) + extinctionMag;
+}
+
+/** d = 10 pc × 10^((μ − A)/5) without input or result checks (see {@link distanceFromDistanceModulusSI}). @internal */
+export function distanceFromDistanceModulusUnchecked(distanceModulusMag: number, extinctionMag: number): number {
+  return TEN_PARSECS_M * 10 ** ((distanceModulusMag - extinctionMag) / 5);
+}
+
+/** M = m − 5 log₁₀(d / 10 pc) − A without input or result checks (see {@link absoluteMagnitudeSI}). @internal */
+export function absoluteMagnitudeUnchecked(apparentMag: number, distanceM: number, extinctionMag: number): number {
+  return apparentMag - distanceModulusUnchecked(distanceM, extinctionMag);
+}
+
+/** m = M + 5 log₁₀(d / 10 pc) + A without input or result checks (see {@link apparentMagnitudeSI}). @internal */
+export function apparentMagnitudeUnchecked(absoluteMag: number, distanceM: number, extinctionMag: number): number {
+  return absoluteMag + distanceModulusUnchecked(distanceM, extinctionMag);
+}
+
+/** M_bol = −2.5 log₁₀(L / L₀) without input checks (see {@link absoluteBolometricMagnitudeSI}). @internal */
+export function absoluteBolometricMagnitudeUnchecked(luminosityW: number): number {
+  return pogsonMag(luminosityW / L0);
+}
+
+/** L = L₀ 10^(M_bol/−2.5) without input or result checks (see {@link luminosityFromAbsoluteBolometricMagnitudeSI}). @internal */
+export function luminosityFromAbsoluteBolometricMagnitudeUnchecked(absoluteBolometricMag: number): number {
+  return L0 * 10 ** (absoluteBolometricMag / -2.5);
+}
+
+/** m_bol = −2.5 log₁₀(f / f₀) without input checks (see {@link apparentBolometricMagnitudeSI}). @internal */
+export function apparentBolometricMagnitudeUnchecked(bolometricFluxWm2: number): number {
+  return pogsonMag(bolometricFluxWm2 / F0);
+}
+
+/** f = f₀ 10^(m_bol/−2.5) without input or result checks (see {@link bolometricFluxFromApparentMagnitudeSI}). @internal */
+export function bolometricFluxFromApparentMagnitudeUnchecked(apparentBolometricMag: number): number {
+  return F0 * 10 ** (apparentBolometricMag / -2.5);
+}
+
+/** m_AB = −2.5 log₁₀(f_ν / 3631 Jy) without input checks (see {@link abMagnitudeSI}). @internal */
+export function abMagnitudeUnchecked(fNuWm2Hz: number): number {
+  return pogsonMag(fNuWm2Hz / AB_ZERO_POINT);
+}
+
+/** f_ν = 3631 Jy × 10^(m_AB/−2.5) without input or result checks (see {@link spectralFluxDensityFromAbMagnitudeSI}). @internal */
+export function spectralFluxDensityFromAbMagnitudeUnchecked(abMag: number): number {
+  return AB_ZERO_POINT * 10 ** (abMag / -2.5);
+}
+
+/** f_λ = f_ν c / λ² without input or result checks (see {@link fLambdaFromFNuSI}). @internal */
+export function fLambdaFromFNuUnchecked(fNuWm2Hz: number, wavelengthM: number): number {
+  return (fNuWm2Hz * (C / wavelengthM)) / wavelengthM;
+}
+
+/** f_ν = f_λ λ² / c without input or result checks (see {@link fNuFromFLambdaSI}). @internal */
+export function fNuFromFLambdaUnchecked(fLambdaWm3: number, wavelengthM: number): number {
+  return ((fLambdaWm3 * wavelengthM) / C) * wavelengthM;
+}

@@ -48,7 +48,12 @@ export function distanceFromParallaxExactSI(parallaxRad: number): number {
   if (!(parallaxRad < Math.PI / 2)) {
     throw new RangeError(`parallax must be < π/2 rad for the exact geometry; got ${String(parallaxRad)}`);
   }
-  return requirePositiveResult("distance", AU / Math.tan(parallaxRad), "m");
+  return requirePositiveResult("distance", distanceFromParallaxExactUnchecked(parallaxRad), "m");
+}
+
+/** d = 1 au / tan p without input or result checks (see {@link distanceFromParallaxExactSI}). @internal */
+export function distanceFromParallaxExactUnchecked(parallaxRad: number): number {
+  return AU / Math.tan(parallaxRad);
 }
 
 /**
@@ -67,7 +72,12 @@ export function distanceFromParallaxExactSI(parallaxRad: number): number {
  */
 export function distanceFromParallaxSI(parallaxRad: number): number {
   requirePositive("parallax", parallaxRad, "rad");
-  return requirePositiveResult("distance", AU / parallaxRad, "m");
+  return requirePositiveResult("distance", distanceFromParallaxUnchecked(parallaxRad), "m");
+}
+
+/** d = 1 au / p without input or result checks (see {@link distanceFromParallaxSI}); +Infinity on overflow. @internal */
+export function distanceFromParallaxUnchecked(parallaxRad: number): number {
+  return AU / parallaxRad;
 }
 
 /**
@@ -85,7 +95,12 @@ export function distanceFromParallaxSI(parallaxRad: number): number {
  */
 export function parallaxFromDistanceSI(distanceM: number): number {
   requirePositive("distance", distanceM, "m");
-  return requirePositiveResult("parallax", AU / distanceM, "rad");
+  return requirePositiveResult("parallax", parallaxFromDistanceUnchecked(distanceM), "rad");
+}
+
+/** p = 1 au / d without input or result checks (see {@link parallaxFromDistanceSI}); 0 on underflow. @internal */
+export function parallaxFromDistanceUnchecked(distanceM: number): number {
+  return AU / distanceM;
 }
 
 /**
@@ -103,7 +118,12 @@ export function parallaxFromDistanceSI(distanceM: number): number {
  */
 export function parallaxFromDistanceExactSI(distanceM: number): number {
   requirePositive("distance", distanceM, "m");
-  return requirePositiveResult("parallax", Math.atan(AU / distanceM), "rad");
+  return requirePositiveResult("parallax", parallaxFromDistanceExactUnchecked(distanceM), "rad");
+}
+
+/** p = atan(1 au / d) without input or result checks (see {@link parallaxFromDistanceExactSI}). @internal */
+export function parallaxFromDistanceExactUnchecked(distanceM: number): number {
+  return Math.atan(AU / distanceM);
 }
 
 /**
