@@ -81,7 +81,7 @@ describe("typed extinction", () => {
     // 1e-5 cm is 1e-5 / 100 m (one rounding; just inside the range)
     expect(ccm89Ratio(CGS, 1e-5 as Length<"CGS">)).toBe(ccm89RatioSI(1e-5 / 100, 3.1));
     // 1e300 × 10^(25/2.5) = 1e310 is beyond the double range in any unit
-    expect(() => dereddenFlux(SI.of(1e300, units.W_per_m2), 25)).toThrow(/^dereddened flux overflows the double range in its unit for flux=1e\+300, extinction=25 mag$/);
+    expect(() => dereddenFlux(SI.of(1e300, units.W_per_m2), 25)).toThrow(/^dereddened flux overflows the double range for flux=1e\+300, extinction=25 mag$/);
     expect(() => reddenMagnitude(10, Infinity)).toThrow(/^extinction must be a finite number mag; got Infinity$/);
     expect(() => aVFromColorExcess(NaN)).toThrow(/^E\(B-V\) must be a finite number mag; got NaN$/);
     expect(() => colorExcessFromAV(1, -3.1)).toThrow(/^R_V must be a finite number > 0; got -3\.1$/);
