@@ -17,7 +17,7 @@
  *
  * Items = stars: 10⁵ stars take 10⁵ × (ns/item) × 1e-9 s.
  */
-import { C1L, C2 } from "../src/constants/values";
+import { C1L, C2 } from "../src/values/constants";
 import { prepareBandSI, type PreparedBandSI } from "../src/fit/kernels/bands";
 import { createBlackbodyFitterSI, type BlackbodyFitterSI } from "../src/fit/kernels/blackbody-fit";
 import { bandMeanRadianceWavelengthSI, type ResponseCurveSI } from "../src/radiation/kernels/band-response";

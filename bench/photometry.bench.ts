@@ -14,7 +14,7 @@
  * sites stay monomorphic.
  */
 import type { BenchCase } from "./case";
-import { AU, SIGMA } from "../src/constants/values";
+import { AU, SIGMA } from "../src/values/constants";
 import { createStarBatchSolverSI } from "../src/photometry/kernels/solver";
 import { createStarBatchSolver } from "../src/photometry/solver";
 import { assumeArray, type AngleArray, type FluxArray, type LengthArray, type PowerArray, type TemperatureArray } from "../src/quantity/index";

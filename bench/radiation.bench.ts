@@ -7,7 +7,7 @@
  * robustness (double-double exponent, Wien-tail and log-space branches) and,
  * for batches, the invalid-row bookkeeping.
  */
-import { C, C1L, C2, H, SIGMA } from "../src/constants/values";
+import { C, C1L, C2, H, SIGMA } from "../src/values/constants";
 import { planckRadianceWavelengthBatchSI } from "../src/radiation/kernels/planck";
 import { blackbodyFractionBelowWavelengthSI } from "../src/radiation/kernels/band-fraction";
 import { planckRadianceWavelength, planckRadianceWavelengthBatch } from "../src/radiation/planck";

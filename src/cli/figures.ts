@@ -9,7 +9,7 @@
  *
  * @module
  */
-import { AB_ZERO_POINT, C } from "../constants/values";
+import { AB_ZERO_POINT, C } from "../values/constants";
 import { ccm89Ratio } from "../photometry/index";
 import type { LengthArray } from "../quantity/aliases";
 import { SI } from "../quantity/system";

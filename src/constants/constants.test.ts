@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import fixture from "../../test/fixtures/constants.json";
 import { constants } from "./index";
-import { WIEN_X_ENERGY_FREQUENCY, WIEN_X_ENERGY_WAVELENGTH, WIEN_X_PHOTON_FREQUENCY, WIEN_X_PHOTON_WAVELENGTH } from "./wien-roots";
+import { WIEN_X_ENERGY_FREQUENCY, WIEN_X_ENERGY_WAVELENGTH, WIEN_X_PHOTON_FREQUENCY, WIEN_X_PHOTON_WAVELENGTH } from "../values/wien-roots";
 
 /** Relative difference. */
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);

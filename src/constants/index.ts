@@ -15,8 +15,8 @@
  */
 import { kinds } from "../quantity/aliases";
 import { defineConstant } from "./constant";
-import * as V from "./values";
-import { WIEN_X_ENERGY_FREQUENCY, WIEN_X_ENERGY_WAVELENGTH } from "./wien-roots";
+import * as V from "../values/constants";
+import { WIEN_X_ENERGY_FREQUENCY, WIEN_X_ENERGY_WAVELENGTH } from "../values/wien-roots";
 
 const CODATA = "CODATA 2018";
 const k = kinds;

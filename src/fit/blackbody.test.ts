@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { AB_ZERO_POINT, C, SIGMA } from "../constants/values";
+import { AB_ZERO_POINT, C, SIGMA } from "../values/constants";
 import { CGS, SI } from "../quantity/system";
 import { units } from "../quantity/units";
 import { kinds } from "../quantity/aliases";

@@ -22,7 +22,7 @@
  *
  * @module
  */
-import { AB_ZERO_POINT, C } from "../constants/values";
+import { AB_ZERO_POINT, C } from "../values/constants";
 import { requireFinite, requirePositive } from "../internal/checks";
 import { arrayToSI, finite, fromSI, positive, toSI } from "../internal/typed";
 import { kinds } from "../quantity/aliases";

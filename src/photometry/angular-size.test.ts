@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { AU, R_SUN, SIGMA, T_SUN } from "../constants/values";
+import { AU, R_SUN, SIGMA, T_SUN } from "../values/constants";
 import type { Angle, Flux, Length, Radiance } from "../quantity/aliases";
 import { CGS, SI } from "../quantity/system";
 import { times10 } from "../quantity/unit";

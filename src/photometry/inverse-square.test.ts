@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { S_SUN } from "../constants/values";
+import { S_SUN } from "../values/constants";
 import { toSI } from "../internal/typed";
 import { kinds } from "../quantity/aliases";
 import { CGS, SI } from "../quantity/system";

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { C, L0 } from "../constants/values";
+import { C, L0 } from "../values/constants";
 import type { Dimensionless, Flux, Length, Power, SpectralFluxPerFrequency, SpectralFluxPerWavelength } from "../quantity/aliases";
 import { CGS, SI } from "../quantity/system";
 import { times10 } from "../quantity/unit";

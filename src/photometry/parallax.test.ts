@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { PARSEC } from "../constants/values";
+import { PARSEC } from "../values/constants";
 import type { Angle, Length } from "../quantity/aliases";
 import { CGS, SI } from "../quantity/system";
 import { times10 } from "../quantity/unit";

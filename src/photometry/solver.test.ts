@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { AU, F0, S_SUN, SIGMA } from "../constants/values";
+import { AU, F0, S_SUN, SIGMA } from "../values/constants";
 import { toSI } from "../internal/typed";
 import { kinds } from "../quantity/aliases";
 import type { Angle, AngleArray, Flux, FluxArray, Length, LengthArray, Power, Temperature, TemperatureArray } from "../quantity/aliases";

@@ -1,10 +1,10 @@
 /**
- * The unit catalogue. Sizes come from `src/constants/values.ts` (CODATA 2018,
+ * The unit catalogue. Sizes come from `src/values/constants.ts` (CODATA 2018,
  * IAU 2012 B2, IAU 2015 B2/B3) or are exact by definition.
  *
  * @module
  */
-import * as V from "../constants/values";
+import * as V from "../values/constants";
 import { kinds } from "./aliases";
 import { defineUnit, type Unit } from "./unit";
 

@@ -43,7 +43,7 @@ import {
   unreachableRatioError,
 } from "./kernels/colour-temperature";
 import { lnPlanckLambdaUnchecked } from "./kernels/planck";
-import type { ResponseCurve } from "./response";
+import type { ResponseCurve } from "./response-curve";
 import { responseCurveSI } from "./response-check";
 
 const wavelength1Input = lawInput("wavelength1", kinds.length, { vacuum: true });

@@ -11,7 +11,7 @@ import { kinds } from "../quantity/aliases";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
 import type { ResponseCurveSI } from "./kernels/band-response";
-import type { ResponseCurve } from "./response";
+import type { ResponseCurve } from "./response-curve";
 
 /** One grid wavelength: finite, > 0 (the name is per index, given on the error path). */
 const gridPoint = lawInput("wavelength", kinds.length);

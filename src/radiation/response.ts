@@ -34,6 +34,7 @@ import type { UnitSystem } from "../quantity/system";
 import { bandMeanDerivativeTUnchecked, bandMeanUnchecked, trapezoidWeights, type ResponseConvention } from "./kernels/band-response";
 import { derivativeKinds, type SpectralRadiancePerWavelengthPerTemperature } from "./planck";
 import { responseCurveSI } from "./response-check";
+import type { ResponseCurve } from "./response-curve";
 
 export type { ResponseConvention } from "./kernels/band-response";
 
@@ -41,30 +42,7 @@ const temperatureInput = lawInput("temperature", kinds.temperature);
 const meanOutput = lawOutput("the band-mean radiance", kinds.spectralRadiancePerWavelength);
 const derivativeOutput = lawOutput("the band-mean ∂B_λ/∂T", derivativeKinds.spectralRadiancePerWavelengthPerTemperature);
 
-/**
- * A tabulated response curve in system `S`: wavelengths (in `S`: m or cm)
- * and the dimensionless response at each.
- *
- * Requirements, checked on every use (RangeError naming the field, index
- * and the caller's unit): at least 2 points; `wavelengths` finite, > 0 and
- * strictly increasing; `response` of the same length, finite and ≥ 0, and
- * not all 0. The overall scale of `response` does not matter.
- *
- * @example
- * ```ts
- * import { CGS, units, type ResponseCurve } from "starlume";
- * const v: ResponseCurve<"CGS"> = {
- *   wavelengths: CGS.arrayOf([480, 500, 550, 600, 650], units.nm),
- *   response: [0, 0.5, 1, 0.5, 0],
- * };
- * ```
- */
-export interface ResponseCurve<S extends SystemName> {
-  /** Grid wavelengths, strictly increasing, in system `S`. */
-  readonly wavelengths: LengthArray<S>;
-  /** Response at each grid wavelength (dimensionless, ≥ 0). */
-  readonly response: ArrayLike<number>;
-}
+export type { ResponseCurve } from "./response-curve";
 
 /**
  * Check (T, convention, curve) in the caller's units, run a band-mean core on

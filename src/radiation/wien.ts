@@ -16,7 +16,7 @@
  * c/ν_max ≈ 1.76 λ_max. Each peak belongs to its own density: pick the
  * function for the density you plot or measure.
  *
- * The roots x₂…x₅ are computed once (src/constants/wien-roots.ts) and shared
+ * The roots x₂…x₅ are computed once (src/values/wien-roots.ts) and shared
  * with the typed constants `constants.wienB` and `constants.wienBPrime`.
  * Accuracy: each result is one multiplication or division by a constant, so
  * ≤ 2 ulp from the exact-constant value (see kernels/wien.test.ts).

@@ -26,7 +26,7 @@
  *
  * @module
  */
-import { C } from "../constants/values";
+import { C } from "../values/constants";
 import { show } from "../internal/checks";
 import { defineLaw } from "../law/define";
 import { LawInput, lawInput } from "../law/input";

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { C, H, M_E, RYDBERG } from "../constants/values";
+import { C, H, M_E, RYDBERG } from "../values/constants";
 import { CGS, SI } from "../quantity/system";
 import { times10 } from "../quantity/unit";
 import { units } from "../quantity/units";

@@ -20,7 +20,7 @@
  *
  * @module
  */
-import { C, H } from "../constants/values";
+import { C, H } from "../values/constants";
 import { show } from "../internal/checks";
 import { defineLaw } from "../law/define";
 import { lawInput } from "../law/input";

@@ -6,7 +6,7 @@ import { csvRecords, runCli } from "../test-util";
 import { diracCentroidTransitionEnergySI, transitionEnergySI, transitionVacuumWavelengthSI } from "../../spectra/kernels/transitions";
 import { vacuumToAirWavelengthSI } from "../../spectra/kernels/air-vacuum";
 import { relativisticDopplerWavelengthSI } from "../../spectra/kernels/doppler";
-import { H, C, EV } from "../../constants/values";
+import { H, C, EV } from "../../values/constants";
 import { ALPHA_PARTICLE_MASS_KG, PROTON_MASS_KG as M_P } from "../../spectra/kernels/hydrogen-like";
 
 const scratch = mkdtempSync(join(tmpdir(), "starlume-lines-"));

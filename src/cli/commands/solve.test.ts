@@ -5,7 +5,7 @@ import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { main } from "../main";
 import { MemoryStream, csvRecords, runCli } from "../test-util";
-import { L_SUN, PARSEC, R_SUN, SIGMA } from "../../constants/values";
+import { L_SUN, PARSEC, R_SUN, SIGMA } from "../../values/constants";
 import { solveStar, type StarObservations } from "../../photometry/index";
 import { SI } from "../../quantity/system";
 import { units } from "../../quantity/units";

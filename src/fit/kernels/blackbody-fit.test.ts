@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { AB_ZERO_POINT, C } from "../../constants/values";
+import { AB_ZERO_POINT, C } from "../../values/constants";
 import { chiSquareLogSurvival } from "../../photometry/kernels/chi-square";
 import { ccm89RatioSI } from "../../photometry/kernels/extinction";
 import { bandMeanRadianceDerivativeTSI, bandMeanRadianceWavelengthSI, responseWeights } from "../../radiation/kernels/band-response";

@@ -87,7 +87,7 @@
  *
  * @internal
  */
-import { AB_ZERO_POINT, C, C1L, C2 } from "../../constants/values";
+import { AB_ZERO_POINT, C, C1L, C2 } from "../../values/constants";
 import { requireFinite, requirePositive } from "../../internal/checks";
 import { ccm89RatioSI, RV_DIFFUSE_ISM } from "../../photometry/kernels/extinction";
 import { colourTemperatureFromRatioSI } from "../../radiation/kernels/colour-temperature";

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import fixture from "../../../test/fixtures/photometry.json";
-import { AU, R_SUN, S_SUN, SIGMA } from "../../constants/values";
+import { AU, R_SUN, S_SUN, SIGMA } from "../../values/constants";
 import {
   angularDiameterDiskSI,
   angularDiameterSmallAngleSI,

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import fixture from "../../../test/fixtures/photometry.json";
-import { AU, L_SUN, S_SUN } from "../../constants/values";
+import { AU, L_SUN, S_SUN } from "../../values/constants";
 import { distanceFromLuminosityFluxSI, fluxFromLuminositySI, luminosityFromFluxSI } from "./inverse-square";
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);

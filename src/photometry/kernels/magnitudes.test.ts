@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import fixture from "../../../test/fixtures/photometry.json";
-import { AB_ZERO_POINT, F0, JANSKY, L0, L_SUN, PARSEC, S_SUN } from "../../constants/values";
+import { AB_ZERO_POINT, F0, JANSKY, L0, L_SUN, PARSEC, S_SUN } from "../../values/constants";
 import {
   abMagnitudeSI,
   absoluteBolometricMagnitudeSI,

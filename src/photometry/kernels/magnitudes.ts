@@ -16,7 +16,7 @@
  *
  * @module
  */
-import { AB_ZERO_POINT, C, F0, L0, PARSEC } from "../../constants/values";
+import { AB_ZERO_POINT, C, F0, L0, PARSEC } from "../../values/constants";
 import { requireFinite, requirePositive } from "../../internal/checks";
 import { requireFiniteResult, requirePositiveResult } from "./common";
 

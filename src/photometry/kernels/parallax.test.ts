@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import fixture from "../../../test/fixtures/photometry.json";
-import { AU, PARSEC } from "../../constants/values";
+import { AU, PARSEC } from "../../values/constants";
 import {
   distanceFromParallaxExactSI,
   distanceFromParallaxSI,

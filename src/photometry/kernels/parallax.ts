@@ -24,7 +24,7 @@
  *
  * @module
  */
-import { AU } from "../../constants/values";
+import { AU } from "../../values/constants";
 import { requireInRange, requireNonNegative, requirePositive } from "../../internal/checks";
 import { requirePositiveResult } from "./common";
 

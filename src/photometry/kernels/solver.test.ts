@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import fixture from "../../../test/fixtures/photometry.json";
-import { AU, L_SUN, PARSEC, R_SUN, S_SUN, SIGMA } from "../../constants/values";
+import { AU, L_SUN, PARSEC, R_SUN, S_SUN, SIGMA } from "../../values/constants";
 import { PhotometryBatchReason } from "./common";
 import { gaussian, mulberry32 } from "../../../test/support/random";
 import {

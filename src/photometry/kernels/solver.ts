@@ -59,7 +59,7 @@
  *
  * @module
  */
-import { AU, F0, L0, PARSEC, R_SUN, SIGMA, T_SUN } from "../../constants/values";
+import { AU, F0, L0, PARSEC, R_SUN, SIGMA, T_SUN } from "../../values/constants";
 import { requireFinite, requirePositive } from "../../internal/checks";
 import { chiSquareLogSurvival, sigmaFromLogTailProbability } from "./chi-square";
 import { PhotometryBatchReason } from "./common";

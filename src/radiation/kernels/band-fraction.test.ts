@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import fx from "../../../test/fixtures/planck_band_fraction.json";
-import { C, SIGMA } from "../../constants/values";
+import { C, SIGMA } from "../../values/constants";
 import {
   bandPhotonRadianceWavelengthSI,
   bandRadianceWavelengthSI,

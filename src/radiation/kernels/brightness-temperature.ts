@@ -9,7 +9,7 @@
  * Rayleigh–Jeans: T_RJ = λ⁴B_λ/(2ck) = c²B_ν/(2kν²).
  * Source: e.g. Rybicki & Lightman, Radiative Processes in Astrophysics (1979), §1.5.
  */
-import { C, C1L, K_B } from "../../constants/values";
+import { C, C1L, K_B } from "../../values/constants";
 import { requirePositive } from "../../internal/checks";
 import { C2_HI, H_OVER_K_HI } from "./exact";
 import { TWO_H_OVER_C2 } from "./planck-core";

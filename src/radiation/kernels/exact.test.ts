@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { C, H, K_B } from "../../constants/values";
+import { C, H, K_B } from "../../values/constants";
 import { C2_HI, C2_LO, H_OVER_K_HI, ddDivProduct, ddMulDiv, dd, exactDecimalOf, rationalToDD } from "./exact";
 import fx from "../../../test/fixtures/planck_constants.json";
 

@@ -13,7 +13,7 @@
  *
  * @internal
  */
-import { C, H, K_B } from "../../constants/values";
+import { C, H, K_B } from "../../values/constants";
 
 /** A decimal string parsed exactly: value = mant × 10^exp10. */
 interface ExactDecimal {

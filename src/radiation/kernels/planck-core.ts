@@ -41,7 +41,7 @@
  *
  * @internal
  */
-import { C, C1L, H } from "../../constants/values";
+import { C, C1L, H } from "../../values/constants";
 import { C2_HI, C2_LO, H_OVER_K_HI, H_OVER_K_LO, dd, ddDivProduct, ddMulDiv } from "./exact";
 
 /** Spectral variable / counting form. */

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { C, SIGMA } from "../../constants/values";
+import { C, SIGMA } from "../../values/constants";
 import fx from "../../../test/fixtures/planck.json";
 import {
   logPlanckRadianceWavelengthSI,

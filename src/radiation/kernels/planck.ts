@@ -19,7 +19,7 @@
  * Infinity for finite positive input (a true value beyond ~1.8e308, which
  * needs T ≳ 1e200 K, throws a RangeError instead).
  */
-import { C1L } from "../../constants/values";
+import { C1L } from "../../values/constants";
 import { requirePositive } from "../../internal/checks";
 import { batchOut, type RadiationBatchResult } from "./batch";
 import { C2_HI } from "./exact";

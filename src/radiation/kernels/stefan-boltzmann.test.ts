@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { C1, C1L, C2, L_SUN, R_SUN, SIGMA, T_SUN } from "../../constants/values";
+import { C1, C1L, C2, L_SUN, R_SUN, SIGMA, T_SUN } from "../../values/constants";
 import fx from "../../../test/fixtures/planck_constants.json";
 import {
   SIGMA_PHOTON,

@@ -15,7 +15,7 @@
  * +Infinity there instead).
  * Source: J. Stefan (1879), L. Boltzmann (1884); IAU 2015 B3 for L = 4πR²σT⁴.
  */
-import { C, H, K_B, SIGMA } from "../../constants/values";
+import { C, H, K_B, SIGMA } from "../../values/constants";
 import { requirePositive } from "../../internal/checks";
 
 /** ζ(3) by Apéry's alternating series, summed smallest term first. */

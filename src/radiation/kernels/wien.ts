@@ -8,7 +8,7 @@
  *   the same peak, since ν = cσ̃ is a linear change of variable), x₃ ≈ 2.821439;
  * - n = 4: peak of the photon radiance per unit wavelength, x₄ ≈ 3.920690;
  * - n = 2: peak of the photon radiance per unit frequency / wavenumber, x₂ ≈ 1.593624.
- * The four roots are computed once, in src/constants/wien-roots.ts (the same
+ * The four roots are computed once, in src/values/wien-roots.ts (the same
  * roots behind the typed constants `constants.wienB` and `constants.wienBPrime`),
  * and imported here so that kernels and constants share one value; the
  * displacement constants follow: b = c₂/x₅ (m K), b′ = x₃k/h (Hz K^-1).
@@ -24,13 +24,13 @@
  * (which prints b = 2.897 771 955... × 10^-3 m K and
  * b′ = 5.878 925 757... × 10^10 Hz K^-1).
  */
-import { C, C2, H, K_B } from "../../constants/values";
+import { C, C2, H, K_B } from "../../values/constants";
 import {
   WIEN_X_ENERGY_FREQUENCY,
   WIEN_X_ENERGY_WAVELENGTH,
   WIEN_X_PHOTON_FREQUENCY as X2,
   WIEN_X_PHOTON_WAVELENGTH as X4,
-} from "../../constants/wien-roots";
+} from "../../values/wien-roots";
 import { requireInRange, requirePositive } from "../../internal/checks";
 
 /**
@@ -61,13 +61,13 @@ export function solveWienPeakX(n: number): number {
   return x;
 }
 
-/** x₅: peak of B_λ (energy per unit wavelength); from src/constants/wien-roots.ts. */
+/** x₅: peak of B_λ (energy per unit wavelength); from src/values/wien-roots.ts. */
 export const WIEN_X_WAVELENGTH = WIEN_X_ENERGY_WAVELENGTH;
-/** x₃: peak of B_ν and of B_σ̃ (energy per unit frequency or wavenumber); from src/constants/wien-roots.ts. */
+/** x₃: peak of B_ν and of B_σ̃ (energy per unit frequency or wavenumber); from src/values/wien-roots.ts. */
 export const WIEN_X_FREQUENCY = WIEN_X_ENERGY_FREQUENCY;
-/** x₄: peak of the photon radiance per unit wavelength; from src/constants/wien-roots.ts. */
+/** x₄: peak of the photon radiance per unit wavelength; from src/values/wien-roots.ts. */
 export const WIEN_X_PHOTON_WAVELENGTH = X4;
-/** x₂: peak of the photon radiance per unit frequency or wavenumber; from src/constants/wien-roots.ts. */
+/** x₂: peak of the photon radiance per unit frequency or wavenumber; from src/values/wien-roots.ts. */
 export const WIEN_X_PHOTON_FREQUENCY = X2;
 
 /** Wien wavelength displacement constant b = c₂/x₅, m K (CODATA 2018: 2.897 771 955e-3). */

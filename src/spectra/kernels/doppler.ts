@@ -18,7 +18,7 @@
  * @packageDocumentation
  */
 
-import { C } from "../../constants/values";
+import { C } from "../../values/constants";
 import { requireFinite, requirePositive, show } from "../../internal/checks";
 import { BatchLog, type BatchResult } from "../../law/batch";
 import { requireOutputLength } from "./batch";

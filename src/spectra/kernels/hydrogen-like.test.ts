@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { ALPHA, C, EV, M_E, M_P, M_U } from "../../constants/values";
+import { ALPHA, C, EV, M_E, M_P, M_U } from "../../values/constants";
 import fx from "../../../test/fixtures/hydrogen-levels.json";
 import {
   ALPHA_PARTICLE_MASS_KG,

@@ -15,12 +15,12 @@
  *   next recoil term −μ²c²(f − 1)²/(2(m_e + M)) (≈ 7e-9 relative for H 1S).
  *
  * Energies are measured from the ionisation limit (negative for bound
- * levels). Constants: CODATA 2018 via src/constants/values.ts.
+ * levels). Constants: CODATA 2018 via src/values/constants.ts.
  *
  * @packageDocumentation
  */
 
-import { ALPHA, C, H, M_E, M_P, M_U, RYDBERG } from "../../constants/values";
+import { ALPHA, C, H, M_E, M_P, M_U, RYDBERG } from "../../values/constants";
 import { show } from "../../internal/checks";
 
 /**
@@ -37,7 +37,7 @@ export const ALPHA_PARTICLE_MASS_KG = 6.6446573357e-27;
  */
 export const DEUTERON_MASS_KG = 3.3435837724e-27;
 
-/** Proton mass, kg (CODATA 2018, from src/constants/values.ts): the ¹H nucleus. */
+/** Proton mass, kg (CODATA 2018, from src/values/constants.ts): the ¹H nucleus. */
 export const PROTON_MASS_KG = M_P;
 
 /** Hydrogen-like ion: nuclear charge number Z and nuclear mass in kg. */

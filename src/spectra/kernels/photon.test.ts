@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { EV } from "../../constants/values";
+import { EV } from "../../values/constants";
 import {
   frequencyFromPhotonEnergySI,
   frequencyFromWavelengthSI,

@@ -8,7 +8,7 @@
  * @packageDocumentation
  */
 
-import { C, H } from "../../constants/values";
+import { C, H } from "../../values/constants";
 import { requirePositive } from "../../internal/checks";
 
 const HC = H * C;

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { C, H } from "../../constants/values";
+import { C, H } from "../../values/constants";
 import fx from "../../../test/fixtures/hydrogen-levels.json";
 import { vacuumToAirWavelengthSI } from "./air-vacuum";
 import { HELIUM_II, HYDROGEN, PROTON_MASS_KG, bohrLevelEnergySI } from "./hydrogen-like";

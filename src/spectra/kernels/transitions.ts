@@ -11,7 +11,7 @@
  * @packageDocumentation
  */
 
-import { C, H, RYDBERG } from "../../constants/values";
+import { C, H, RYDBERG } from "../../values/constants";
 import { show } from "../../internal/checks";
 import {
   diracFMinusOne,

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { C, K_B, M_U } from "../../constants/values";
+import { C, K_B, M_U } from "../../values/constants";
 import {
   atomicMassKg,
   dopplerVelocityWidthSI,

@@ -14,7 +14,7 @@
  * @packageDocumentation
  */
 
-import { C, K_B, M_U } from "../../constants/values";
+import { C, K_B, M_U } from "../../values/constants";
 import { requireNonNegative, requirePositive } from "../../internal/checks";
 
 /**
