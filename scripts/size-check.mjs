@@ -2,7 +2,7 @@
 // and zlib (gzip level 9). Fails when a bundle grows past its budget.
 // Budgets are set a little above the sizes measured when they were last
 // reviewed; raise them deliberately, in the same commit as the growth.
-// The one-law budget rose from 13 KB to 18.5 KB with the law toolkit: dist/index.js is
+// The one-law budget rose from 13 KB to 23 KB with the law toolkit: dist/index.js is
 // still one file, so module-level law tables of other areas stay in a one-law
 // bundle; per-module output (open work) is the real fix.
 import { build } from "esbuild";
@@ -10,7 +10,7 @@ import { gzipSync } from "node:zlib";
 
 const cases = [
   { name: "whole library (import *)", contents: 'export * from "./dist/index.js";', budget: 56_000 },
-  { name: "one law alone, tree-shaken (SI + units + Planck B_λ)", contents: 'import { SI, units, planckRadianceWavelength } from "./dist/index.js"; console.log(planckRadianceWavelength(SI, SI.of(500, units.nm), SI.of(5772, units.K)));', budget: 18_500 },
+  { name: "one law alone, tree-shaken (SI + units + Planck B_λ)", contents: 'import { SI, units, planckRadianceWavelength } from "./dist/index.js"; console.log(planckRadianceWavelength(SI, SI.of(500, units.nm), SI.of(5772, units.K)));', budget: 23_000 },
 ];
 
 let failed = false;
