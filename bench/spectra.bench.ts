@@ -72,13 +72,13 @@ function setup(): void {
     tau0s[k] = t0;
     lines.push({ centreM: c, dopplerWidthM: b, lorentzHwhmM: a * b, tau0: t0 });
     typedLinesSI.push({
-      center: vacuumWavelength(SI, assume<Length<"SI">>(c)),
+      centre: vacuumWavelength(SI, assume<Length<"SI">>(c)),
       dopplerWidth: assume<Length<"SI">>(b),
       lorentzHwhm: assume<Length<"SI">>(a * b),
       tau0: t0,
     });
     typedLinesCGS.push({
-      center: vacuumWavelength(CGS, assume<Length<"CGS">>(c * 100)),
+      centre: vacuumWavelength(CGS, assume<Length<"CGS">>(c * 100)),
       dopplerWidth: assume<Length<"CGS">>(b * 100),
       lorentzHwhm: assume<Length<"CGS">>(a * b * 100),
       tau0: t0,

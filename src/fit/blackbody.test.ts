@@ -55,8 +55,8 @@ describe("typed photometric fits", () => {
     expect(rel(b.angularDiameter, a.angularDiameter)).toBeLessThan(1e-12);
     expect(Math.abs(b.extinctionAV - a.extinctionAV)).toBeLessThan(1e-12);
     expect(rel(CGS.valueIn(b.modelFluxPerWavelength[2] as never, units.erg_per_s_cm2_A), SI.valueIn(a.modelFluxPerWavelength[2] as never, units.erg_per_s_cm2_A))).toBeLessThan(1e-12);
-    expect(a.json.temperatureK).toBe(a.temperature);
-    expect(JSON.parse(JSON.stringify(a.json))).toEqual(a.json);
+    expect(a.si.temperatureK).toBe(a.temperature);
+    expect(JSON.parse(JSON.stringify(a.si))).toEqual(a.si);
   });
 
   it("f_ν data (Jy) give the same fit as the equivalent f_λ data (pivot conversion is exact)", () => {
@@ -140,7 +140,7 @@ describe("typed photometric fits", () => {
     bad2[2] = { ...bad2[2]!, fluxPerWavelength: assume<SpectralFluxPerWavelength<"SI">>(NaN) };
     expect(() => fitBlackbody(SI, bad2)).toThrow(/observations\[2\]\.fluxPerWavelength must be a finite number m\^-1 kg s\^-3; got NaN/);
     expect(() => fitBlackbody(SI, [...obs.slice(0, 2), { band: shapes[2]!, abMagnitude: 12, sigma: 0 }])).toThrow(/observations\[2\]\.sigma must be a finite number > 0 mag/);
-    expect(() => topHatBand(CGS, CGS.of(-5, units.angstrom), CGS.of(10, units.angstrom))).toThrow(/center must be a finite number > 0 cm/);
+    expect(() => topHatBand(CGS, CGS.of(-5, units.angstrom), CGS.of(10, units.angstrom))).toThrow(/centre must be a finite number > 0 cm/);
     expect(() => responseBand(SI, SI.arrayOf([500, 400], units.nm), [1, 1], "photon")).toThrow(/strictly increasing/);
   });
 });
@@ -157,7 +157,7 @@ describe("reusable fitter for catalogues", () => {
       const b = fitBlackbody(SI, obs, { extinction: { rV: 3.1 } });
       expect(a.temperature).toBe(b.temperature);
       expect(a.extinctionAV).toBe(b.extinctionAV);
-      expect(a.json).toEqual(b.json);
+      expect(a.si).toEqual(b.si);
     }
     expect(() => fitter.fit([])).toThrow(/one entry per band \(5\)/);
     expect(() => fitter.fit(bandsSI.map(() => ({ abMagnitude: 10, sigma: 0.01, fluxPerWavelength: assume<SpectralFluxPerWavelength<"SI">>(1) })))).toThrow(/exactly one of/);
@@ -246,7 +246,7 @@ describe("hand-off to radius and luminosity", () => {
     const star = stellarParametersFromFit(SI, fit, { distance: SI.of(50, units.pc), sigma: SI.of(0.5, units.pc) });
     expect(rel(star.radius, (theta * d) / 2)).toBeLessThan(1e-6);
     expect(rel(star.luminosity, Math.PI * theta ** 2 * d ** 2 * SIGMA * T ** 4)).toBeLessThan(1e-5);
-    const lc = fit.json.lnCovariance;
+    const lc = fit.si.lnCovariance;
     const vT = lc[0]![0]!;
     const vTh = lc[1]![1]!;
     const c = lc[0]![1]!;
@@ -294,7 +294,7 @@ describe("hand-off to radius and luminosity", () => {
     const predR = ref.sigmaRadius / ref.radius;
     expect(rel(sd0(lnL), predL)).toBeLessThan(0.1);
     expect(rel(sd0(lnR), predR)).toBeLessThan(0.1);
-    const lc = ref.json.lnCovariance;
+    const lc = ref.si.lnCovariance;
     const iT = 0;
     const iTh = 5;
     const iD = 3;

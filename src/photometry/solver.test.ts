@@ -154,8 +154,8 @@ describe("typed stellar-parameter solver", () => {
     const s = solveStar(SI, { temperature: m(st.t), radius: m(st.r), distance: m(st.d), luminosity: m(st.l * 1.2) });
     expect(s.consistency.dof).toBe(1);
     // ln 1.2 = 0.182 against σ_ln L = 0.01 and the model σ: several sigma; dof 1 → sigma = √χ²
-    expect(s.consistency.sigma).toBeGreaterThan(3);
-    expect(s.consistency.sigma).toBeCloseTo(Math.sqrt(s.consistency.chi2), 12);
+    expect(s.consistency.tensionSigma).toBeGreaterThan(3);
+    expect(s.consistency.tensionSigma).toBeCloseTo(Math.sqrt(s.consistency.chi2), 12);
     expect(Object.keys(s.consistency.pulls).sort()).toEqual(["distance", "luminosity", "radius", "temperature"]);
     expect(s.luminosity.measured).toBe(true);
     expect(s.bolometricFlux.measured).toBe(false);

@@ -253,8 +253,8 @@ export interface StarConsistencyReport {
   readonly pValue: number;
   /** ln pValue, finite even when pValue underflows. */
   readonly lnPValue: number;
-  /** Two-sided Gaussian-equivalent disagreement, in σ. */
-  readonly sigma: number;
+  /** Two-sided Gaussian-equivalent disagreement (tension), in σ. Named `tensionSigma` because `sigma` means an uncertainty (docs/naming.md §6). */
+  readonly tensionSigma: number;
   /** Normalised residual (observed − fitted)/σ of each observation, in log space. */
   readonly pulls: Readonly<Partial<Record<StarObservationName, number>>>;
 }
@@ -432,7 +432,7 @@ export function solveStar<S extends SystemName>(sys: UnitSystem<S>, observations
       dof: r.consistency.dof,
       pValue: r.consistency.pValue,
       lnPValue: plus0(r.consistency.lnPValue),
-      sigma: plus0(r.consistency.sigma),
+      tensionSigma: plus0(r.consistency.tensionSigma),
       pulls,
     },
   };

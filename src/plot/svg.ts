@@ -77,7 +77,7 @@ export interface LineSeries {
   /** y values, one per x; a non-finite point (or one outside a log axis) breaks the line. */
   readonly y: ArrayLike<number>;
   /** Any SVG colour; default from the palette. */
-  readonly color?: string;
+  readonly colour?: string;
   /** Stroke width in px (default 1.5). */
   readonly width?: number;
   /** Draw the line dashed (default false). */
@@ -107,7 +107,7 @@ export interface ScatterSeries {
   /** Horizontal error towards larger x (≥ 0). */
   readonly xErrHigh?: ArrayLike<number>;
   /** Any SVG colour; default from the palette. */
-  readonly color?: string;
+  readonly colour?: string;
   /** Point radius in px (default 3): half the width of the marker. */
   readonly radius?: number;
   /** Marker shape (default `"circle"`); `"dash"` is a short horizontal line. */
@@ -128,7 +128,7 @@ export interface BandCurve {
   /** Response at each x (any scale; negative values are drawn as 0), same length as `x`. */
   readonly response: ArrayLike<number>;
   /** Any SVG colour; default from the palette, after the series colours. */
-  readonly color?: string;
+  readonly colour?: string;
 }
 
 /** A labelled vertical line at `x`, drawn only if `x` is inside the x range. */
@@ -138,7 +138,7 @@ export interface MarkerLine {
   /** Text drawn beside the line, rotated along it (plain text; none when omitted or empty). */
   readonly label?: string;
   /** Any SVG colour (default `"#555555"`). */
-  readonly color?: string;
+  readonly colour?: string;
 }
 
 /** Everything {@link svgChart} needs. Only `title` is required. */
@@ -322,8 +322,8 @@ export function svgChart(spec: ChartSpec): string {
   const bandYScale: Scale = { ...bandScale, ticks: { major: [], minor: [], labels: [] } };
   const inline = spec.bandLabels === "inline";
   bands.forEach((b, i) => {
-    const color = b.color ?? PALETTE[(series.length + i) % PALETTE.length] ?? "#000";
-    drawBand(o, b, color, bandRect, xScale, bandYScale, inline);
+    const colour = b.colour ?? PALETTE[(series.length + i) % PALETTE.length] ?? "#000";
+    drawBand(o, b, colour, bandRect, xScale, bandYScale, inline);
   });
 
   // ---- markers
@@ -332,12 +332,12 @@ export function svgChart(spec: ChartSpec): string {
     const u = norm(m.x, xScale);
     if (!(u >= 0 && u <= 1)) continue;
     const x = main.x + u * main.w;
-    const color = escapeXml(m.color ?? "#555555");
+    const colour = escapeXml(m.colour ?? "#555555");
     const y1 = lowest.y + lowest.h;
-    o.push(`<line x1="${px(x)}" y1="${px(main.y)}" x2="${px(x)}" y2="${px(y1)}" stroke="${color}" stroke-width="1" stroke-dasharray="4 3"/>`);
+    o.push(`<line x1="${px(x)}" y1="${px(main.y)}" x2="${px(x)}" y2="${px(y1)}" stroke="${colour}" stroke-width="1" stroke-dasharray="4 3"/>`);
     if (m.label !== undefined && m.label !== "") {
       o.push(
-        `<text x="${px(x - 3)}" y="${px(main.y + 4)}" transform="rotate(-90 ${px(x - 3)} ${px(main.y + 4)})" text-anchor="end" font-size="10" fill="${color}">${escapeXml(m.label)}</text>`,
+        `<text x="${px(x - 3)}" y="${px(main.y + 4)}" transform="rotate(-90 ${px(x - 3)} ${px(main.y + 4)})" text-anchor="end" font-size="10" fill="${colour}">${escapeXml(m.label)}</text>`,
       );
     }
   }
@@ -345,9 +345,9 @@ export function svgChart(spec: ChartSpec): string {
   // ---- series (the pixel points they cover are collected for the legend placement)
   const covered: number[] = [];
   series.forEach((s, i) => {
-    const color = s.color ?? PALETTE[i % PALETTE.length] ?? "#000";
-    if (s.type === "line") drawLine(o, s, color, main, xScale, yScale, covered);
-    else drawScatter(o, s, color, main, xScale, yScale, covered);
+    const colour = s.colour ?? PALETTE[i % PALETTE.length] ?? "#000";
+    if (s.type === "line") drawLine(o, s, colour, main, xScale, yScale, covered);
+    else drawScatter(o, s, colour, main, xScale, yScale, covered);
   });
   if (residScale !== null) {
     if (resid?.zeroLine ?? true) {
@@ -358,9 +358,9 @@ export function svgChart(spec: ChartSpec): string {
       }
     }
     residSeries.forEach((s, i) => {
-      const color = s.color ?? PALETTE[i % PALETTE.length] ?? "#000";
-      if (s.type === "line") drawLine(o, s, color, residRect, xScale, residScale, []);
-      else drawScatter(o, s, color, residRect, xScale, residScale, []);
+      const colour = s.colour ?? PALETTE[i % PALETTE.length] ?? "#000";
+      if (s.type === "line") drawLine(o, s, colour, residRect, xScale, residScale, []);
+      else drawScatter(o, s, colour, residRect, xScale, residScale, []);
     });
   }
 
@@ -778,7 +778,7 @@ function coverPieces(pieces: readonly number[][], covered: number[]): void {
   }
 }
 
-function drawLine(o: string[], s: LineSeries, color: string, r: Rect, xs: Scale, ys: Scale, covered: number[]): void {
+function drawLine(o: string[], s: LineSeries, colour: string, r: Rect, xs: Scale, ys: Scale, covered: number[]): void {
   const pieces = clippedPieces(s.x, s.y, r, xs, ys);
   const d = pathData(pieces);
   if (d === "") return;
@@ -786,7 +786,7 @@ function drawLine(o: string[], s: LineSeries, color: string, r: Rect, xs: Scale,
   const w = s.width !== undefined && s.width > 0 && Number.isFinite(s.width) ? s.width : 1.5;
   const dash = s.dashed === true ? ' stroke-dasharray="6 4"' : "";
   o.push(
-    `<path d="${d}" fill="none" stroke="${escapeXml(color)}" stroke-width="${px(w)}" stroke-linejoin="round"${dash}><title>${escapeXml(plainTextFromMarkup(s.name))}</title></path>`,
+    `<path d="${d}" fill="none" stroke="${escapeXml(colour)}" stroke-width="${px(w)}" stroke-linejoin="round"${dash}><title>${escapeXml(plainTextFromMarkup(s.name))}</title></path>`,
   );
 }
 
@@ -811,7 +811,7 @@ function markerShape(shape: MarkerShape, cx: number, cy: number, rad: number, ho
   }
 }
 
-function drawScatter(o: string[], s: ScatterSeries, color: string, r: Rect, xs: Scale, ys: Scale, covered: number[]): void {
+function drawScatter(o: string[], s: ScatterSeries, colour: string, r: Rect, xs: Scale, ys: Scale, covered: number[]): void {
   const rad = s.radius !== undefined && s.radius > 0 && Number.isFinite(s.radius) ? s.radius : 3;
   const shape = s.marker ?? "circle";
   const hollow = s.hollow === true;
@@ -860,14 +860,14 @@ function drawScatter(o: string[], s: ScatterSeries, color: string, r: Rect, xs: 
       bars.push(d);
     }
   }
-  const c = escapeXml(color);
+  const c = escapeXml(colour);
   o.push(`<g fill="${c}" stroke="${c}"><title>${escapeXml(plainTextFromMarkup(s.name))}</title>`);
   if (bars.length > 0) o.push(`<path d="${bars.join("")}" fill="none" stroke-width="1"/>`);
   o.push(...dots);
   o.push("</g>");
 }
 
-function drawBand(o: string[], b: BandCurve, color: string, r: Rect, xs: Scale, ys: Scale, inlineLabel: boolean): void {
+function drawBand(o: string[], b: BandCurve, colour: string, r: Rect, xs: Scale, ys: Scale, inlineLabel: boolean): void {
   let peak = 0;
   for (let i = 0; i < b.response.length; i++) {
     const v = b.response[i] ?? NaN;
@@ -888,7 +888,7 @@ function drawBand(o: string[], b: BandCurve, color: string, r: Rect, xs: Scale, 
     for (let k = 0; k < p.length; k += 2) fill += `L${px(p[k] ?? 0)} ${px(p[k + 1] ?? 0)}`;
     fill += `L${px(p[p.length - 2] ?? 0)} ${px(base)}Z`;
   }
-  const c = escapeXml(color);
+  const c = escapeXml(colour);
   o.push(
     `<path d="${fill}" fill="${c}" fill-opacity="0.25" stroke="${c}" stroke-width="1.2"><title>${escapeXml(plainTextFromMarkup(b.name))}</title></path>`,
   );
@@ -959,7 +959,7 @@ function drawLegend(
     row++;
   };
   series.forEach((s, i) => {
-    const c = escapeXml(s.color ?? PALETTE[i % PALETTE.length] ?? "#000");
+    const c = escapeXml(s.colour ?? PALETTE[i % PALETTE.length] ?? "#000");
     if (s.type === "line") {
       const dash = s.dashed === true ? ' stroke-dasharray="6 4"' : "";
       entry(`<line x1="${px(x0 + 6)}" y1="{Y}" x2="${px(x0 + 22)}" y2="{Y}" stroke="${c}" stroke-width="2"${dash}/>`, s.name);
@@ -977,7 +977,7 @@ function drawLegend(
     }
   });
   bands.forEach((b, i) => {
-    const c = escapeXml(b.color ?? PALETTE[(bandColourOffset + i) % PALETTE.length] ?? "#000");
+    const c = escapeXml(b.colour ?? PALETTE[(bandColourOffset + i) % PALETTE.length] ?? "#000");
     const y = y0 + 4 + row * rowH + rowH / 2;
     entry(`<rect x="${px(x0 + 6)}" y="${px(y - 5)}" width="16" height="10" fill="${c}" fill-opacity="0.25" stroke="${c}"/>`, b.name);
   });

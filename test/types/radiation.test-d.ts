@@ -27,6 +27,7 @@ import {
   type SpectralRadiancePerWavelengthArray,
   type SystemName,
   type Temperature,
+  type TemperatureArray,
   type UnitSystem,
   type Wavenumber,
 } from "../../src/quantity/index";
@@ -85,6 +86,7 @@ declare const fLambdaSI: SpectralFluxPerWavelength<"SI">;
 declare const fNuSI: SpectralFluxPerFrequency<"SI">;
 declare const gridSI: LengthArray<"SI">;
 declare const gridCGS: LengthArray<"CGS">;
+declare const temps: TemperatureArray;
 const curveSI: ResponseCurve<"SI"> = { wavelengths: SI.arrayOf([500, 550, 600], units.nm), response: [0, 1, 0] };
 const curveCGS: ResponseCurve<"CGS"> = { wavelengths: CGS.arrayOf([500, 550, 600], units.nm), response: [0, 1, 0] };
 
@@ -108,6 +110,14 @@ describe("must not compile: systems never mix", () => {
   test("a CGS wavelength grid into an SI batch", () => {
     // @ts-expect-error Float64Array of cm vs m
     planckRadianceWavelengthBatch(SI, gridCGS, tempK);
+  });
+  test("a CGS wavelength into an SI batch over temperatures", () => {
+    // @ts-expect-error cm vs m (the wavelength is shared by every temperature row)
+    planckRadianceWavelengthBatch(SI, lamCGS, temps);
+  });
+  test("a length array where the temperatures go", () => {
+    // @ts-expect-error a LengthArray is not a TemperatureArray
+    planckRadianceWavelengthBatch(SI, lamSI, gridSI);
   });
   test("a CGS exitance into an SI inversion", () => {
     // @ts-expect-error erg s^-1 cm^-2 where W m^-2 is wanted
@@ -246,6 +256,8 @@ describe("must compile: honest code", () => {
     expectTypeOf(bandPhotonRadianceWavelength(CGS, lamCGS, CGS.of(600, units.nm), tempK)).toEqualTypeOf<PhotonRadiance<"CGS">>();
     expectTypeOf(bandMeanRadiance(CGS, curveCGS, tempK, "photon")).toEqualTypeOf<SpectralRadiancePerWavelength<"CGS">>();
     expectTypeOf(planckRadianceWavelengthBatch(SI, gridSI, tempK).values).toEqualTypeOf<SpectralRadiancePerWavelengthArray<"SI">>();
+    expectTypeOf(planckRadianceWavelengthBatch(CGS, lamCGS, temps).values).toEqualTypeOf<SpectralRadiancePerWavelengthArray<"CGS">>();
+    expectTypeOf(planckRadianceWavelengthBatch(SI, gridSI, temps).values).toEqualTypeOf<SpectralRadiancePerWavelengthArray<"SI">>();
   });
   test("system-free arguments fit either system", () => {
     const t = CGS.of(5772, units.K); // a temperature built through CGS works in SI calls

@@ -148,15 +148,15 @@ describe("medium mix-ups that must not compile", () => {
   });
   test("synthesis: line centres in another medium than the grid", () => {
     // @ts-expect-error a vacuum line on an air grid
-    synthesizeSpectrum(SI, airGridSI, contSI, [{ center: vacSI, dopplerWidth: widthSI, tau0: 1 }]);
+    synthesizeSpectrum(SI, airGridSI, contSI, [{ centre: vacSI, dopplerWidth: widthSI, tau0: 1 }]);
     // @ts-expect-error an air line on a vacuum grid
-    synthesizeSpectrum(SI, vacGridSI, contSI, [{ center: airSI, dopplerWidth: widthSI, tau0: 1 }]);
+    synthesizeSpectrum(SI, vacGridSI, contSI, [{ centre: airSI, dopplerWidth: widthSI, tau0: 1 }]);
   });
   test("a Planck continuum on an air grid (B_λ is per vacuum wavelength)", () => {
     // @ts-expect-error synthesizePlanckSpectrum needs a vacuum or unbranded grid
     synthesizePlanckSpectrum(SI, airGridSI, SI.of(5772, units.K), []);
     // @ts-expect-error and vacuum (or unbranded) line centres
-    synthesizePlanckSpectrum(SI, gridSI, SI.of(5772, units.K), [{ center: airSI, dopplerWidth: widthSI, tau0: 1 }]);
+    synthesizePlanckSpectrum(SI, gridSI, SI.of(5772, units.K), [{ centre: airSI, dopplerWidth: widthSI, tau0: 1 }]);
   });
   test("a measurement window in another medium than the grid; the centroid keeps the grid's medium", () => {
     // @ts-expect-error vacuum window on an air grid
@@ -193,7 +193,7 @@ describe("system and dimension mix-ups that must not compile", () => {
     // @ts-expect-error rest wavelength in cm, observed in m
     radialVelocityFromWavelengths(SI, vacSI, vacCGS);
     // @ts-expect-error a line centre in cm on an SI grid
-    synthesizeSpectrum(SI, gridSI, contSI, [{ center: vacCGS, dopplerWidth: widthSI, tau0: 1 }]);
+    synthesizeSpectrum(SI, gridSI, contSI, [{ centre: vacCGS, dopplerWidth: widthSI, tau0: 1 }]);
     // @ts-expect-error a window bound in cm on an SI grid
     equivalentWidth(SI, gridSI, contSI, contSI, lenCGS, plainSI);
   });
@@ -249,13 +249,13 @@ describe("system and dimension mix-ups that must not compile", () => {
   });
   test("synthesis lines: exactly one width and one strength", () => {
     // @ts-expect-error both a Doppler width and a σ
-    const both: SynthesisLine<"SI"> = { center: vacSI, dopplerWidth: widthSI, gaussianSigma: widthSI, tau0: 1 };
+    const both: SynthesisLine<"SI"> = { centre: vacSI, dopplerWidth: widthSI, gaussianSigma: widthSI, tau0: 1 };
     // @ts-expect-error no strength
-    const none: SynthesisLine<"SI"> = { center: vacSI, dopplerWidth: widthSI };
+    const none: SynthesisLine<"SI"> = { centre: vacSI, dopplerWidth: widthSI };
     // @ts-expect-error an equivalent width must be a length, not a number
-    const w: SynthesisLine<"SI"> = { center: vacSI, dopplerWidth: widthSI, equivalentWidth: 1e-12 };
+    const w: SynthesisLine<"SI"> = { centre: vacSI, dopplerWidth: widthSI, equivalentWidth: 1e-12 };
     // @ts-expect-error τ₀ is dimensionless, not a length
-    const t: SynthesisLine<"SI"> = { center: vacSI, dopplerWidth: widthSI, tau0: widthSI };
+    const t: SynthesisLine<"SI"> = { centre: vacSI, dopplerWidth: widthSI, tau0: widthSI };
     void [both, none, w, t];
   });
 });
@@ -306,15 +306,15 @@ describe("honest code compiles", () => {
   });
   test("synthesis and measurement: any continuum type, result of the same type", () => {
     const lines: SynthesisLine<"SI">[] = [
-      { center: vacSI, dopplerWidth: widthSI, tau0: 0.5 },
-      { center: plainSI, gaussianSigma: widthSI, lorentzHwhm: widthSI, equivalentWidth: SI.of(0.01, units.nm) },
+      { centre: vacSI, dopplerWidth: widthSI, tau0: 0.5 },
+      { centre: plainSI, gaussianSigma: widthSI, lorentzHwhm: widthSI, equivalentWidth: SI.of(0.01, units.nm) },
     ];
     expectTypeOf(synthesizeSpectrum(SI, gridSI, contSI, lines).flux).toEqualTypeOf<SpectralFluxPerWavelengthArray<"SI">>();
     expectTypeOf(synthesizeSpectrum(SI, vacGridSI, radianceSI, lines).flux).toEqualTypeOf<SpectralRadiancePerWavelengthArray<"SI">>();
     expectTypeOf(synthesizeSpectrum(CGS, gridCGS, normalised, []).flux).toEqualTypeOf<DimensionlessArray>();
     // air lines on an air grid, and on an unbranded one
-    expectTypeOf(synthesizeSpectrum(SI, airGridSI, contSI, [{ center: airSI, dopplerWidth: widthSI, tau0: 1 }]).invalid).toEqualTypeOf<number[]>();
-    expectTypeOf(synthesizeSpectrum(SI, gridSI, contSI, [{ center: airSI, dopplerWidth: widthSI, tau0: z }]).invalid).toEqualTypeOf<number[]>();
+    expectTypeOf(synthesizeSpectrum(SI, airGridSI, contSI, [{ centre: airSI, dopplerWidth: widthSI, tau0: 1 }]).invalid).toEqualTypeOf<number[]>();
+    expectTypeOf(synthesizeSpectrum(SI, gridSI, contSI, [{ centre: airSI, dopplerWidth: widthSI, tau0: z }]).invalid).toEqualTypeOf<number[]>();
     expectTypeOf(synthesizePlanckSpectrum(CGS, gridCGS, SI.of(5772, units.K), []).flux).toEqualTypeOf<SpectralRadiancePerWavelengthArray<"CGS">>();
     expectTypeOf(equivalentWidth(SI, gridSI, contSI, contSI, plainSI, vacSI)).toEqualTypeOf<Length<"SI">>();
     expectTypeOf(lineCentroid(SI, airGridSI, contSI, contSI, airSI, plainSI)).toEqualTypeOf<AirWavelength<"SI">>();

@@ -198,7 +198,7 @@ export function sedData(name: string, o: Extract<FitOutcome, { ok: true }>): Sed
     angularDiameterRad: f.angularDiameter,
     sigmaAngularDiameterRad: f.sigmaAngularDiameter,
     extinctionAV: f.extinctionAV,
-    rV: f.json.rV,
+    rV: f.si.rV,
     modelFLambdaSI: Array.from(f.modelFluxPerWavelength),
     pulls: [...f.pulls],
     chi2: f.chi2,

@@ -155,7 +155,7 @@ export function linesSvg(s: LinesSetup, rows: readonly LineRow[], temperatureK: 
   for (let i = 0; i < n; i++) grid[i] = lo + ((hi - lo) * i) / (n - 1);
   const lines = rows
     .filter((r) => r.nUpper !== null)
-    .map((r, k) => ({ center: r.observedVacuumM as VacuumWavelength<"SI">, gaussianSigma: SI.of(sigmaOf(r.observedVacuumM), units.m), tau0: 2.5 / Math.sqrt(k + 1) }));
+    .map((r, k) => ({ centre: r.observedVacuumM as VacuumWavelength<"SI">, gaussianSigma: SI.of(sigmaOf(r.observedVacuumM), units.m), tau0: 2.5 / Math.sqrt(k + 1) }));
   const { flux } = synthesizePlanckSpectrum(SI, SI.arrayOf(grid, units.m), SI.of(temperatureK, units.K), lines);
   const yUnit = units.W_per_m2_sr_nm;
   const markers: MarkerLine[] = rows.map((r, i) => ({ x: r.observedVacuumM * 1e9, ...(i < 10 || r.nUpper === null ? { label: r.label } : {}) }));

@@ -124,7 +124,7 @@ export function planckSvg(s: PlanckSetup): string {
   const series = s.temperatures.map((t, i) => {
     const y = Array.from(s.grid, (g) => valueAt(s, g, t));
     for (const v of y) if (v > peak) peak = v;
-    return { type: "line" as const, name: formatK(t), x, y, color: PALETTE[i % PALETTE.length] as string };
+    return { type: "line" as const, name: formatK(t), x, y, colour: PALETTE[i % PALETTE.length] as string };
   });
   const symbol = s.axis === "wavelength" ? "λ" : "ν";
   return svgChart({

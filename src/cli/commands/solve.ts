@@ -181,7 +181,7 @@ function worstPull(sol: StarSolution<SystemName>): string {
 }
 
 /** The consistency columns of an exactly determined star (as the scalar solver reports them: χ² 0, dof 0, p 1, tension 0). */
-const EXACT_CONSISTENCY = { chi2: 0, dof: 0, pValue: 1, sigma: 0 } as const;
+const EXACT_CONSISTENCY = { chi2: 0, dof: 0, pValue: 1, tensionSigma: 0 } as const;
 
 /** Cap on rows kept for the report. */
 const REPORT_ROWS = 100;
@@ -233,7 +233,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
   };
   const observationKey = new Map(INPUTS.map((q) => [q.key, q.observation]));
   /** The output row of a solved star, from each quantity's value and σ in `sys`. */
-  const solvedRow = (line: number, idText: string, used: string, est: readonly (readonly [number, number])[], c: { chi2: number; dof: number; pValue: number; sigma: number }, worst: string): CellValue[] => {
+  const solvedRow = (line: number, idText: string, used: string, est: readonly (readonly [number, number])[], c: { chi2: number; dof: number; pValue: number; tensionSigma: number }, worst: string): CellValue[] => {
     const row: CellValue[] = [line];
     if (id !== -1) row.push(idText);
     row.push("ok", used);
@@ -241,7 +241,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
       const e = est[j] as readonly [number, number];
       row.push(valueIn(sys, e[0], units[k].unit), valueIn(sys, e[1], units[k].unit));
     });
-    row.push(c.chi2, c.dof, c.pValue, c.sigma, worst, "");
+    row.push(c.chi2, c.dof, c.pValue, c.tensionSigma, worst, "");
     keep(row);
     if (points.length < REPORT_POINTS) {
       const t = est[0] as readonly [number, number];

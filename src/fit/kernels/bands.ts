@@ -115,18 +115,18 @@ function requirePoints(points: number): number {
  * @param centreM - centre λ_c, m (> 0)
  * @param widthM - full width Δλ, m (> 0, < 2 λ_c)
  * @param points - number of nodes (integer, 3 … 100000; default 201)
- * @throws RangeError naming `center`, `width` or `points`
+ * @throws RangeError naming `centre`, `width` or `points`
  * @example
  * ```ts
  * const box = topHatResponseSI(550e-9, 90e-9);
  * ```
  */
 export function topHatResponseSI(centreM: number, widthM: number, points = 201): ResponseCurveSI {
-  requirePositive("center", centreM, "m");
+  requirePositive("centre", centreM, "m");
   requirePositive("width", widthM, "m");
   requirePoints(points);
   if (!(widthM < 2 * centreM)) {
-    throw new RangeError(`width must be < 2 × center (${2 * centreM} m) so that the band stays at positive wavelengths; got ${widthM} m`);
+    throw new RangeError(`width must be < 2 × centre (${2 * centreM} m) so that the band stays at positive wavelengths; got ${widthM} m`);
   }
   const lo = centreM - widthM / 2;
   const l = new Float64Array(points);
@@ -146,14 +146,14 @@ export const GAUSSIAN_BAND_HALF_WIDTH_SIGMA = 5;
  * @param centreM - centre λ_c, m (> 0)
  * @param fwhmM - full width at half maximum, m (> 0, with λ_c − 5s > 0)
  * @param points - number of nodes (integer, 3 … 100000; default 201)
- * @throws RangeError naming `center`, `fwhm` or `points`
+ * @throws RangeError naming `centre`, `fwhm` or `points`
  * @example
  * ```ts
  * const g = gaussianResponseSI(2.2e-6, 0.35e-6);
  * ```
  */
 export function gaussianResponseSI(centreM: number, fwhmM: number, points = 201): ResponseCurveSI {
-  requirePositive("center", centreM, "m");
+  requirePositive("centre", centreM, "m");
   requirePositive("fwhm", fwhmM, "m");
   requirePoints(points);
   const s = fwhmM / (2 * Math.sqrt(2 * Math.LN2));

@@ -103,7 +103,7 @@ describe("bands: weights, pivot wavelength, shapes", () => {
 
   it("rejects bad shapes, naming the parameter", () => {
     expect(() => topHatResponseSI(550e-9, 2e-6)).toThrow(/width/);
-    expect(() => gaussianResponseSI(-1, 1e-7)).toThrow(/center/);
+    expect(() => gaussianResponseSI(-1, 1e-7)).toThrow(/centre/);
     expect(() => gaussianResponseSI(1e-6, 1e-6)).toThrow(/fwhm/);
     expect(() => topHatResponseSI(5e-7, 1e-7, 2)).toThrow(/points/);
   });

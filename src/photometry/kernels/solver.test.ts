@@ -118,7 +118,7 @@ describe("stellar-parameter solver: references", () => {
     expect(s.consistency.dof).toBe(1);
     // residual is exactly 3 combined sigmas by construction: χ² = 9 to rounding of the logs (1e-10)
     expect(Math.abs(s.consistency.chi2 - 9)).toBeLessThan(1e-10);
-    expect(Math.abs(s.consistency.sigma - 3)).toBeLessThan(1e-10);
+    expect(Math.abs(s.consistency.tensionSigma - 3)).toBeLessThan(1e-10);
     // p for 3σ two-sided = 0.002699796 (normal table, 7 digits)
     expect(rel(s.consistency.pValue, 0.002699796)).toBeLessThan(5e-7);
     // the luminosity is pulled down, radius and temperature up

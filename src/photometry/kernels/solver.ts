@@ -122,8 +122,8 @@ export interface StarConsistencySI {
   readonly pValue: number;
   /** Natural log of pValue (finite even when pValue underflows to 0). */
   readonly lnPValue: number;
-  /** Two-sided Gaussian-equivalent disagreement: erfc(sigma/√2) = pValue (= √χ² when dof = 1). */
-  readonly sigma: number;
+  /** Two-sided Gaussian-equivalent disagreement (tension) in σ: erfc(tensionSigma/√2) = pValue (= √χ² when dof = 1). */
+  readonly tensionSigma: number;
   /** Normalised residual (input − fitted)/σ in log space, per input kind. */
   readonly pulls: Readonly<Partial<Record<StarInputKindSI, number>>>;
 }
@@ -527,10 +527,10 @@ export function solveStarSI(obs: StarObservationsSI): StarSolutionSI {
   }
   const dof = n - 3;
   let lnPValue = 0;
-  let sigma = 0;
+  let tensionSigma = 0;
   if (dof > 0) {
     lnPValue = chiSquareLogSurvival(chi2, dof);
-    sigma = dof === 1 ? Math.sqrt(chi2) : sigmaFromLogTailProbability(lnPValue);
+    tensionSigma = dof === 1 ? Math.sqrt(chi2) : sigmaFromLogTailProbability(lnPValue);
   } else {
     chi2 = 0;
   }
@@ -559,7 +559,7 @@ export function solveStarSI(obs: StarObservationsSI): StarSolutionSI {
     quantities: [...STAR_QUANTITIES],
     lnCovariance,
     covariance,
-    consistency: { chi2, dof, pValue: Math.exp(lnPValue), lnPValue, sigma, pulls },
+    consistency: { chi2, dof, pValue: Math.exp(lnPValue), lnPValue, tensionSigma, pulls },
   };
 }
 

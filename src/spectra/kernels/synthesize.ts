@@ -367,23 +367,23 @@ export function synthesizeSpectrumUnchecked(
     if (!(t0 > tauCut)) continue;
     const b = lines.dopplerWidthM[i] as number;
     const a = (lines.lorentzHwhmM[i] as number) / b;
-    const center = lines.centreM[i] as number;
+    const centre = lines.centreM[i] as number;
     const k0 = voigtK(0, a);
     const uCore = Math.sqrt(Math.log(t0 / tauCut));
     const uWing = a > 0 ? Math.sqrt((t0 * a) / (SQRT_PI * k0 * tauCut)) : 0;
     const half = 1.1 * b * Math.max(uCore, uWing);
-    const j0 = lowerBound(wavelengthsM, center - half);
-    const j1 = lowerBound(wavelengthsM, center + half);
+    const j0 = lowerBound(wavelengthsM, centre - half);
+    const j1 = lowerBound(wavelengthsM, centre + half);
     const scale = t0 / k0;
     const invB = 1 / b;
     if (a === 0) {
       for (let j = j0; j < j1; j++) {
-        const u = ((wavelengthsM[j] as number) - center) * invB;
+        const u = ((wavelengthsM[j] as number) - centre) * invB;
         tau[j] = (tau[j] as number) + scale * Math.exp(-u * u);
       }
     } else {
       for (let j = j0; j < j1; j++) {
-        faddeeva(((wavelengthsM[j] as number) - center) * invB, a, w);
+        faddeeva(((wavelengthsM[j] as number) - centre) * invB, a, w);
         tau[j] = (tau[j] as number) + scale * (w[0] as number);
       }
     }

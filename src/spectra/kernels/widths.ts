@@ -81,8 +81,8 @@ export function dopplerWidthWavelengthSI(
  * Doppler width x₀ b / c of a line centred at x₀ (a wavelength in m, or a
  * frequency in Hz) for the velocity width b (m s⁻¹), without checks. @internal
  */
-export function dopplerWidthUnchecked(center: number, velocityWidthMs: number): number {
-  return (center * velocityWidthMs) / C;
+export function dopplerWidthUnchecked(centre: number, velocityWidthMs: number): number {
+  return (centre * velocityWidthMs) / C;
 }
 
 /**
