@@ -51,7 +51,7 @@ export function readUnit(text: string, where: string): Unit {
 /**
  * Parse a unit and check its kind.
  *
- * @param where - what to name in messages, e.g. `column 'parallax [kg]'` or `--value-unit`
+ * @param where - what to name in messages, e.g. `column 'parallax [kg]'` or `--unit value`
  * @throws UsageError naming `where`, the unit, its kind and the kind expected
  */
 export function unitOfKind(text: string, kind: KindLike, where: string, hint?: string): Unit {

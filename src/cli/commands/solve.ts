@@ -22,7 +22,7 @@ import { formatValueUncertainty } from "../io/write";
 import type { CellValue } from "../io/write";
 import type { ColumnSpec } from "../io/header";
 import { optList, optString, type ParsedArgs } from "../args";
-import type { Command } from "../command";
+import { INTERNAL_EXIT, type Command } from "../command";
 import { UsageError, say, type CliIO } from "../context";
 import { hrFigure, roundedK, luminosityLabel, planckFamilyFigure, spreadByTemperature } from "../figures";
 import { writeReport } from "../report-write";
@@ -467,6 +467,19 @@ is checked to be of the right kind. Table format: docs/guides/table-format.md.`,
     { name: "unit", short: "u", kind: "list", valueName: "KEY=UNIT", help: "output unit of a quantity, e.g. --unit radius=km (repeatable)" },
     { name: "column", kind: "list", valueName: "KEY=NAME", help: "use column NAME for input KEY, e.g. --column parallax=plx_dr9 (repeatable)" },
     { name: "assume-sigma", kind: "value", valueName: "REL", help: "relative uncertainty for values without one, e.g. 0.02" },
+  ],
+  exitCodes: [
+    { code: 0, meaning: "every row solved" },
+    {
+      code: 1,
+      meaning:
+        "some rows rejected: a value <= 0, an empty sigma(x) cell, or inputs that do not\ndetermine the star; rejected rows stay in the output with status 'rejected' and\nthe reason, and are listed on stderr with their line numbers",
+    },
+    {
+      code: 2,
+      meaning: "usage: unknown option or bad value, unreadable input, a header unit of the\nwrong kind, or no solver input column",
+    },
+    INTERNAL_EXIT,
   ],
   examples: [
     { args: ["examples/demo-survey/solve-input.csv", "--format", "table"], note: "solve the demo stars (temperature, angular diameter, parallax, bolometric flux)" },
