@@ -81,7 +81,7 @@ describe("SED figure", () => {
     expect(legend.match(/<text /g)).toHaveLength(3);
     // Band names are written above their curves instead.
     for (const b of bandSet.bands) expect(svg).toContain(`fill="#333333">${b.name}</text>`);
-    expect(svg).toContain("normalised response</text>");
+    expect(svg).toContain("normalized response</text>");
     expect(svg).toContain("(photon counting)</text>");
     expect(svg).toContain('f<tspan dy="3.9" font-size="9.75">λ</tspan><tspan dy="-3.9"> [W m⁻² µm⁻¹]</tspan>');
   });

@@ -191,7 +191,7 @@ export function sedFigure(d: SedData, bands: readonly CliBand[]): SedFigure {
     },
     bands: bandCurves(bands),
     bandPlacement: "panel",
-    bandLabel: `normalised response\n(${countingOf(bands)})`,
+    bandLabel: `normalized response\n(${countingOf(bands)})`,
     bandLabels: "inline",
     legend: true,
   });

@@ -5,7 +5,7 @@
  * (`--from "300 nm"`, or a bare number in a default unit).
  *
  * Magnitudes are not units of the library (they are logarithms, not scales);
- * the tool recognises the unit texts `mag` (any magnitude, e.g. apparent
+ * the tool recognizes the unit texts `mag` (any magnitude, e.g. apparent
  * bolometric) and `AB mag` (AB magnitudes in the fit command) itself.
  *
  * @module

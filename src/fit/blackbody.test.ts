@@ -91,7 +91,7 @@ describe("typed photometric fits", () => {
     expect(rel(m.sigmaTemperature, fl.sigmaTemperature)).toBeLessThan(1e-6);
     // With noise, magnitude-space and flux-space (first-order σ_f = 0.4 ln10 f σ_m) fits weight the
     // bands differently by O(σ_ln) (σ_f follows the noisy f), so they differ by O(σ_ln)·σ_T: a small
-    // fraction of σ_T that shrinks in proportion to σ_m. Measured over 20 seeded realisations each.
+    // fraction of σ_T that shrinks in proportion to σ_m. Measured over 20 seeded realizations each.
     const worst = (sm: number): number => {
       const normal = gaussian(mulberry32(99));
       let w = 0;
@@ -268,7 +268,7 @@ describe("hand-off to radius and luminosity", () => {
     expect(() => stellarParametersFromFit(SI, fit, { distance: SI.of(-1, units.pc), sigma: SI.of(1, units.pc) })).toThrow(/distance must be a finite number > 0 m/);
   });
 
-  it("Monte Carlo: refitting 1000 noisy realisations with a noisy distance reproduces σ(ln L) and σ(ln R)", { timeout: 60000 }, () => {
+  it("Monte Carlo: refitting 1000 noisy realizations with a noisy distance reproduces σ(ln L) and σ(ln R)", { timeout: 60000 }, () => {
     // Seeded (mulberry32 + Box–Muller). Relative SE of a sample SD from 1000 draws is 1/√2000 = 2.2 %;
     // the tolerance is 10 % (4.5 SE; measured −2.6 % for L, −4.9 % for R with this seed, and within 1 %
     // with 3000 draws of another seed). The independent-inputs σ(ln L) (ignoring c: 0.047 vs 0.024)

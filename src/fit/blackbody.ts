@@ -66,7 +66,7 @@ const FX = kinds.flux.dimension;
 declare const bandSystem: unique symbol;
 
 /**
- * A photometric band prepared for fitting (normalised quadrature weights
+ * A photometric band prepared for fitting (normalized quadrature weights
  * computed once). Bound to the system it was built in: a band built with
  * `CGS` cannot be used in an `SI` fit.
  */

@@ -33,7 +33,7 @@ describe("typed extinction", () => {
     );
   });
 
-  it("is normalised at V (a = 1, b = 0 at x = 1.82 µm^-1; CCM89) and defaults to R_V = 3.1 (common practice)", () => {
+  it("is normalized at V (a = 1, b = 0 at x = 1.82 µm^-1; CCM89) and defaults to R_V = 3.1 (common practice)", () => {
     expect(RV_DIFFUSE).toBe(3.1);
     expect(CCM89_RV_RANGE).toEqual([2.6, 5.5]);
     // λ = 1/1.82 µm: x reproduced to ~1 ulp; da/dx ≈ 0.18 there → 1e-15

@@ -4,7 +4,7 @@
  * and E(B−V) ↔ A_V.
  *
  * CCM89 (ApJ 345, 245, eqs. 2–5; coefficients from memory, checked by the
- * continuity of the pieces and the normalisation a = 1, b = 0 at V in
+ * continuity of the pieces and the normalization a = 1, b = 0 at V in
  * kernels/extinction.test.ts):
  *
  *   A_λ / A_V = a(x) + b(x) / R_V,   x = 1/λ in µm⁻¹,   R_V = A_V / E(B−V)

@@ -255,7 +255,7 @@ export interface StarConsistencyReport {
   readonly lnPValue: number;
   /** Two-sided Gaussian-equivalent disagreement (tension), in σ. Named `tensionSigma` because `sigma` means an uncertainty (docs/naming.md §6). */
   readonly tensionSigma: number;
-  /** Normalised residual (observed − fitted)/σ of each observation, in log space. */
+  /** Normalized residual (observed − fitted)/σ of each observation, in log space. */
   readonly pulls: Readonly<Partial<Record<StarObservationName, number>>>;
 }
 
@@ -615,7 +615,7 @@ const OUTPUT_KEYS: readonly (readonly [keyof StarBatchColumns<SystemName>, keyof
  * costs nothing extra: reasons are written only when a row is invalid.
  * In SI the kernel reads and writes the caller's arrays directly; in CGS the
  * system-dependent inputs are copied to SI and the outputs converted in place.
- * The common set {parallax, bolometricFlux, temperature} runs a specialised
+ * The common set {parallax, bolometricFlux, temperature} runs a specialized
  * loop.
  *
  * @param sys - `SI` or `CGS`

@@ -15,7 +15,7 @@
  *   and explicit tick values and labels;
  * - an optional residual panel under the main one (its own linear y axis,
  *   a zero line, the same x axis), e.g. (measured − model)/σ;
- * - band response curves, normalised to a peak of 1, either against a
+ * - band response curves, normalized to a peak of 1, either against a
  *   secondary 0–1 axis on the right (`bandPlacement: "axis"`) or in a lower
  *   panel sharing the x axis (`"panel"`, range 0–1.1), named in the legend or
  *   by a label above each curve (`bandLabels: "inline"`);
@@ -175,7 +175,7 @@ export interface ChartSpec {
   readonly legendPosition?: "auto" | "top-right" | "top-left" | "bottom-right" | "bottom-left";
 }
 
-/** A panel under the main one with its own linear y axis, e.g. normalised residuals. */
+/** A panel under the main one with its own linear y axis, e.g. normalized residuals. */
 export interface ResidualPanel {
   /** Linear y axis; unset `min`/`max` give a symmetric range ±max(3, largest |value| rounded up). */
   readonly y?: AxisSpec;
@@ -205,7 +205,7 @@ interface Rect {
   readonly h: number;
 }
 
-/** Largest normalised coordinate kept before clipping; keeps arithmetic finite. */
+/** Largest normalized coordinate kept before clipping; keeps arithmetic finite. */
 const LIMIT = 1e6;
 
 /**
@@ -818,7 +818,7 @@ function drawScatter(o: string[], s: ScatterSeries, colour: string, r: Rect, xs:
   const bars: string[] = [];
   const dots: string[] = [];
   const okErr = (e: number | undefined): e is number => e !== undefined && e >= 0 && Number.isFinite(e);
-  /** Normalised ends of an error bar along one axis; off-axis ends are clipped (and lose their cap). */
+  /** Normalized ends of an error bar along one axis; off-axis ends are clipped (and lose their cap). */
   const ends = (value: number, u: number, eLo: number | undefined, eHi: number | undefined, sc: Scale): { a: number; b: number; capA: boolean; capB: boolean } | null => {
     if (!okErr(eLo) && !okErr(eHi)) return null;
     // "a" is the end at value − eLo, "b" at value + eHi; on a reversed axis a lies above b in u.

@@ -152,7 +152,7 @@ describe("properties", () => {
       { numRuns: 100 },
     );
   });
-  it("every series line lies below its limit, and the gap is the upper level's ionisation energy", () => {
+  it("every series line lies below its limit, and the gap is the upper level's ionization energy", () => {
     fc.assert(
       fc.property(fc.constantFrom(...seriesNames), fc.integer({ min: 1, max: 500 }), fc.constantFrom(...models), (s, k, model) => {
         const o = { model };

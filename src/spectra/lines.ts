@@ -334,7 +334,7 @@ export function seriesLineVacuumWavelength<S extends SystemName>(
 }
 
 /**
- * Series-limit energy (n_upper → ∞): the ionisation energy of the series'
+ * Series-limit energy (n_upper → ∞): the ionization energy of the series'
  * lower level, h c R∞ Z² (μ/m_e)/n₁² (Bohr) or −Ē_{n₁} (Dirac centroid).
  *
  * @example

@@ -11,7 +11,7 @@
  * - Depth d = 1 − min(F/F_c) (`Dimensionless`, grid points only).
  *
  * Flux and continuum must have one type (any quantity array in the system,
- * or `DimensionlessArray` for normalised spectra); the window bounds must
+ * or `DimensionlessArray` for normalized spectra); the window bounds must
  * be in the grid's medium (medium.ts rule 4). These are reductions, not
  * row-wise maps: a non-finite flux or a continuum that is not > 0 inside
  * the window, a grid that is not strictly increasing, or fewer than two

@@ -64,7 +64,7 @@ describe("profiles: typed = kernel (SI); CGS = SI × 10⁻² exactly (per cm ins
     for (let i = 0; i < 3; i++) expect(r.values[i]).toBe(voigtProfile(CGS, lenCGS(offsets[i] as number), b, g));
     expect(r.values[3]).toBeNaN();
   });
-  it("property: the profiles are normalised per unit wavelength (∫ φ dΔ = 1), in CGS", () => {
+  it("property: the profiles are normalized per unit wavelength (∫ φ dΔ = 1), in CGS", () => {
     fc.assert(
       fc.property(fc.double({ min: Math.log(1e-3), max: Math.log(1), noNaN: true }).map(Math.exp), (a) => {
         // b = 0.3 Å; trapezoid at b/20 over ±L = ±2000 b: the Lorentz wings beyond L hold

@@ -1,7 +1,7 @@
 /**
  * Line profiles and line widths, typed.
  *
- * Profiles are area-normalised functions of the wavelength offset from line
+ * Profiles are area-normalized functions of the wavelength offset from line
  * centre, Δ = λ − λ₀ (`Length<S>`), with ∫ φ dΔ = 1, so their value is *per
  * unit wavelength*: the result type is `Wavenumber<S>` (dimension 1/length:
  * m⁻¹ in SI, cm⁻¹ in CGS — read it in e.g. `units.per_cm`; it is a profile

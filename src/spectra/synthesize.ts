@@ -12,7 +12,7 @@
  *
  * The continuum is any array quantity in the system — a spectral flux or
  * radiance per wavelength, photon or energy, or a `DimensionlessArray` for
- * a normalised spectrum — and the flux comes back with the same type.
+ * a normalized spectrum — and the flux comes back with the same type.
  * {@link synthesizePlanckSpectrum} builds a blackbody continuum B_λ(T) with
  * the radiation module's `planckRadianceWavelengthBatch`.
  *

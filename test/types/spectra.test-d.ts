@@ -87,7 +87,7 @@ const vacGridSI = vacuumWavelengthArray(SI, SI.arrayOf([656.0, 656.5, 657.0], un
 declare const contSI: SpectralFluxPerWavelengthArray<"SI">;
 declare const contCGS: SpectralFluxPerWavelengthArray<"CGS">;
 declare const radianceSI: SpectralRadiancePerWavelengthArray<"SI">;
-declare const normalised: DimensionlessArray;
+declare const normalized: DimensionlessArray;
 declare function wantsVacuumSI(w: VacuumWavelength<"SI">): void;
 declare function wantsAirSI(w: AirWavelength<"SI">): void;
 declare function wantsVacuumArraySI(w: VacuumWavelengthArray<"SI">): void;
@@ -311,7 +311,7 @@ describe("honest code compiles", () => {
     ];
     expectTypeOf(synthesizeSpectrum(SI, gridSI, contSI, lines).flux).toEqualTypeOf<SpectralFluxPerWavelengthArray<"SI">>();
     expectTypeOf(synthesizeSpectrum(SI, vacGridSI, radianceSI, lines).flux).toEqualTypeOf<SpectralRadiancePerWavelengthArray<"SI">>();
-    expectTypeOf(synthesizeSpectrum(CGS, gridCGS, normalised, []).flux).toEqualTypeOf<DimensionlessArray>();
+    expectTypeOf(synthesizeSpectrum(CGS, gridCGS, normalized, []).flux).toEqualTypeOf<DimensionlessArray>();
     // air lines on an air grid, and on an unbranded one
     expectTypeOf(synthesizeSpectrum(SI, airGridSI, contSI, [{ centre: airSI, dopplerWidth: widthSI, tau0: 1 }]).invalid).toEqualTypeOf<number[]>();
     expectTypeOf(synthesizeSpectrum(SI, gridSI, contSI, [{ centre: airSI, dopplerWidth: widthSI, tau0: z }]).invalid).toEqualTypeOf<number[]>();
@@ -319,8 +319,8 @@ describe("honest code compiles", () => {
     expectTypeOf(equivalentWidth(SI, gridSI, contSI, contSI, plainSI, vacSI)).toEqualTypeOf<Length<"SI">>();
     expectTypeOf(lineCentroid(SI, airGridSI, contSI, contSI, airSI, plainSI)).toEqualTypeOf<AirWavelength<"SI">>();
     expectTypeOf(lineCentroid(SI, gridSI, contSI, contSI, airSI, plainSI)).toEqualTypeOf<Length<"SI">>();
-    expectTypeOf(lineDepth(CGS, gridCGS, normalised, normalised, lenCGS, lenCGS)).toEqualTypeOf<Dimensionless>();
+    expectTypeOf(lineDepth(CGS, gridCGS, normalized, normalized, lenCGS, lenCGS)).toEqualTypeOf<Dimensionless>();
     const flux = assumeArray<DimensionlessArray>(new Float64Array(3));
-    expectTypeOf(lineDepth(SI, vacGridSI, flux, normalised, vacSI, plainSI)).toEqualTypeOf<Dimensionless>();
+    expectTypeOf(lineDepth(SI, vacGridSI, flux, normalized, vacSI, plainSI)).toEqualTypeOf<Dimensionless>();
   });
 });

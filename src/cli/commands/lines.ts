@@ -176,7 +176,7 @@ export const linesCommand: Command = {
   usage: "[options]",
   description: `
 Lists the first --count lines of a series of hydrogen (H), deuterium (D) or
-ionised helium (HeII): label, levels, rest wavelength in vacuum or standard air
+ionized helium (HeII): label, levels, rest wavelength in vacuum or standard air
 (Edlén 1966 formula, defined for 200 nm – 20 µm in air; lines outside are kept
 with status 'rejected' and the reason, exit code 1), the wavelength observed
 from a source with radial velocity --velocity (relativistic Doppler, positive

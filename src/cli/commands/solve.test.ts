@@ -120,7 +120,7 @@ describe("starlume solve", () => {
     // L = 2 L☉ disagrees with 4πR²σT⁴ ≈ 1 L☉ by ln 2 / √((4·10/5772)² + 0.02² + 0.01²) ≈ 29σ in log space.
     expect(Number(row.tension_sigma)).toBeGreaterThan(20);
     expect(Number(row.p_value)).toBeLessThan(1e-100);
-    // The largest normalised residual (the weighted fit spreads the disagreement over the inputs).
+    // The largest normalized residual (the weighted fit spreads the disagreement over the inputs).
     expect(row.worst_pull).toMatch(/^(teff|radius|distance|luminosity):[+-]\d+\.\d\d$/);
     expect(Math.abs(Number(row.worst_pull?.split(":")[1]))).toBeGreaterThan(5);
   });
@@ -231,7 +231,7 @@ describe("starlume solve", () => {
       const m = (v: number, sg: number, u: (typeof units)[keyof typeof units]): { value: number; sigma: number } => ({ value: SI.of(v, u as never) as number, sigma: SI.of(sg, u as never) as number });
       let row: string;
       switch (i % 7) {
-        case 0: // teff + parallax + fbol: the batch solver's specialised set
+        case 0: // teff + parallax + fbol: the batch solver's specialized set
           row = [cell(t, 50), cell(null, null), cell(null, null), cell(p, 0.05), cell(f, f / 50), cell(null, null)].join(",");
           expected.push({ temperature: m(t, 50, units.K), parallax: m(p, 0.05, units.mas), bolometricFlux: m(f, f / 50, units.W_per_m2) } as unknown as Obs);
           break;

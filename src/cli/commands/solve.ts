@@ -36,7 +36,7 @@ interface InputQuantity {
   /** Key used in `--column KEY=NAME` and in messages. */
   readonly key: string;
   readonly observation: StarObservationName;
-  /** Column names recognised by default (case-insensitive). */
+  /** Column names recognized by default (case-insensitive). */
   readonly names: readonly string[];
   /** Kind of the unit; null for magnitudes. */
   readonly kind: KindLike | null;

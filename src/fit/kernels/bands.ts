@@ -1,5 +1,5 @@
 /**
- * Photometric bands for blackbody fitting, prepared once: normalised
+ * Photometric bands for blackbody fitting, prepared once: normalized
  * quadrature weights on the band's wavelength grid, pivot and mean
  * wavelengths, and (built here) top-hat and Gaussian response curves.
  *
@@ -12,7 +12,7 @@
  *
  * Both integrals use the trapezoid rule on the given grid
  * (`responseWeights` of band-response.ts, so the weights are exactly those of
- * `bandMeanRadianceWavelengthSI`), and the weights are normalised to sum to 1:
+ * `bandMeanRadianceWavelengthSI`), and the weights are normalized to sum to 1:
  * ⟨f_λ⟩ = Σ ŵᵢ f_λ(λᵢ). Grid points with zero weight are dropped.
  *
  * ## Pivot wavelength and f_ν
@@ -21,10 +21,10 @@
  *
  *   ⟨f_ν⟩ = ⟨f_λ⟩ λ_p² / c,   λ_p² = Σ Wᵢ / Σ (Wᵢ / λᵢ²)
  *
- * where Wᵢ are the (unnormalised) trapezoid weights of the convention
+ * where Wᵢ are the (unnormalized) trapezoid weights of the convention
  * (photon: λ_p² = ∫ R λ dλ / ∫ R λ⁻¹ dλ; energy: ∫ R dλ / ∫ R λ⁻² dλ; Tokunaga &
  * Vacca 2005, PASP 117, 421; Bessell & Murphy 2012). It is exact for the
- * discretised integrals too (the same nodes and weights appear on both
+ * discretized integrals too (the same nodes and weights appear on both
  * sides), so converting f_ν data to f_λ at λ_p loses nothing.
  *
  * @internal
@@ -34,11 +34,11 @@ import { responseWeights, type ResponseConvention, type ResponseCurveSI } from "
 
 export type { ResponseConvention, ResponseCurveSI };
 
-/** A band ready for the fitter: grid points with positive weight and their normalised weights. */
+/** A band ready for the fitter: grid points with positive weight and their normalized weights. */
 export interface PreparedBandSI {
   /** Grid wavelengths with positive weight, m (strictly increasing). */
   readonly wavelengthsM: Float64Array;
-  /** Normalised quadrature weights ŵᵢ (> 0, Σ = 1): ⟨f_λ⟩ = Σ ŵᵢ f_λ(λᵢ). */
+  /** Normalized quadrature weights ŵᵢ (> 0, Σ = 1): ⟨f_λ⟩ = Σ ŵᵢ f_λ(λᵢ). */
   readonly weights: Float64Array;
   /** Detector counting convention of the band. */
   readonly convention: ResponseConvention;

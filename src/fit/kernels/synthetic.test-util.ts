@@ -33,7 +33,7 @@ export function fiveCurves(n = 200): ResponseCurveSI[] {
 /**
  * Band-mean f_λ (W m⁻³) of a reddened blackbody disc of angular diameter θ:
  * π(θ/2)² ⟨B_λ 10^(−0.4 A_V k)⟩, via the radiation kernel on a curve whose
- * response carries the extinction factor, renormalised by the weight sums.
+ * response carries the extinction factor, renormalized by the weight sums.
  */
 export function syntheticBandFlux(
   curve: ResponseCurveSI,

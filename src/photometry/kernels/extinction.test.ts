@@ -37,7 +37,7 @@ describe("CCM89 extinction law (Cardelli, Clayton & Mathis 1989, ApJ 345, 245, e
     expect(worst).toBeLessThan(1e-14);
   });
 
-  it("is normalised at V: a(1.82) = 1, b(1.82) = 0, so A_V/A_V = 1 for any R_V (CCM89 construction)", () => {
+  it("is normalized at V: a(1.82) = 1, b(1.82) = 0, so A_V/A_V = 1 for any R_V (CCM89 construction)", () => {
     expect(ccm89AInverseMicron(1.82)).toBe(1);
     expect(ccm89BInverseMicron(1.82)).toBe(0);
     // at λ = 0.549 µm (x = 1.8215, y ≈ 0.0015) the ratio is 1 within the slope × Δy:

@@ -4,7 +4,7 @@
  *
  * CCM89 (Cardelli, Clayton & Mathis 1989, ApJ 345, 245, eqs. 2–5; coefficients
  * from memory, cross-checked by the continuity of the four pieces at their
- * joins and by the paper's normalisation a = 1, b = 0 at V, see the tests):
+ * joins and by the paper's normalization a = 1, b = 0 at V, see the tests):
  *
  *   A_λ / A_V = a(x) + b(x) / R_V,   x = 1/λ in µm⁻¹, R_V = A_V / E(B−V)
  *

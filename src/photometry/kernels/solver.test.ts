@@ -427,7 +427,7 @@ describe("batch solver", () => {
   });
 });
 
-describe("batch solver: specialised {parallax, flux, temperature} loop vs the general loop", () => {
+describe("batch solver: specialized {parallax, flux, temperature} loop vs the general loop", () => {
   const all = () => {
     const n = 2000;
     const c = () => new Float64Array(n);
@@ -442,9 +442,9 @@ describe("batch solver: specialised {parallax, flux, temperature} loop vs the ge
   };
 
   it("is chosen for the three kinds in any order, and only for them", () => {
-    expect(createStarBatchSolverSI(["temperatureK", "parallaxRad", "bolometricFluxWm2"]).specialised).toBe(true);
-    expect(createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialise: false }).specialised).toBe(false);
-    expect(createStarBatchSolverSI(["distanceM", "bolometricFluxWm2", "temperatureK"]).specialised).toBe(false);
+    expect(createStarBatchSolverSI(["temperatureK", "parallaxRad", "bolometricFluxWm2"]).specialized).toBe(true);
+    expect(createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialize: false }).specialized).toBe(false);
+    expect(createStarBatchSolverSI(["distanceM", "bolometricFluxWm2", "temperatureK"]).specialized).toBe(false);
   });
 
   it("gives the general loop's values (≤ 3e-15) and identical reason codes, bad rows included, in any column order", () => {
@@ -467,9 +467,9 @@ describe("batch solver: specialised {parallax, flux, temperature} loop vs the ge
       }
       if (i % 11 === 0) sp[i] = 0; // zero uncertainty is allowed in a batch
     }
-    // specialised, column order (T, p, f); general, order (p, f, T)
+    // specialized, column order (T, p, f); general, order (p, f, T)
     const fast = createStarBatchSolverSI(["temperatureK", "parallaxRad", "bolometricFluxWm2"]);
-    const general = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialise: false });
+    const general = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialize: false });
     const nf = fast.solve({ values: [t, p, f], sigmas: [st, sp, sf] }, a);
     const ng = general.solve({ values: [p, f, t], sigmas: [sp, sf, st] }, b);
     expect(nf).toBe(ng);
@@ -486,11 +486,11 @@ describe("batch solver: specialised {parallax, flux, temperature} loop vs the ge
           expect(y).toBeNaN();
         } else if (y === 0) {
           // σ of a zero-uncertainty input; or the general loop's r² underflowed (relative σ < 1.5e-154)
-          // where the specialised one multiplies by r directly: then x/value is below that too
+          // where the specialized one multiplies by r directly: then x/value is below that too
           const valueKey = k.replace(/^sigma(.)/, (_m, c: string) => c.toLowerCase()) as typeof k;
           expect(x / (a[valueKey] as Float64Array)[i]!).toBeLessThan(1.5e-154);
         } else {
-          // general: products of scaled powers (≤ ~8 roundings); specialised: direct formulas (≤ ~6):
+          // general: products of scaled powers (≤ ~8 roundings); specialized: direct formulas (≤ ~6):
           // together ≲ 14 ε ≈ 3e-15
           expect(rel(x, y)).toBeLessThan(3e-15);
         }
@@ -500,7 +500,7 @@ describe("batch solver: specialised {parallax, flux, temperature} loop vs the ge
 
   it("writes only the requested columns and flags a row only for a requested output out of range", () => {
     const fast = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"]);
-    const general = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialise: false });
+    const general = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialize: false });
     const one = (x: number) => Float64Array.of(x);
     // L = 4π f d² overflows (f = 1e300 W m^-2 at d = 1e10 m) but θ = 2√(f/σ)/T² does not
     const input = { values: [one(AU / 1e10), one(1e300), one(1e5)], sigmas: [one(0), one(0), one(0)] } as const;

@@ -30,7 +30,7 @@
  *
  * ## Estimation
  * z is the weighted least-squares solution (weights 1/σ²_ln), computed by a
- * Householder QR factorisation of the weighted design matrix (no normal
+ * Householder QR factorization of the weighted design matrix (no normal
  * equations, so widely different uncertainties do not square the condition
  * number). Because the model is linear in log space its Jacobian is constant,
  * so the covariance Cov(z) = (AᵀA)⁻¹ and Cov(ln q) = M Cov(z) Mᵀ propagate
@@ -51,7 +51,7 @@
  * - Over-determined: the solution is the weighted least-squares compromise,
  *   NOT a silent overwrite: `consistency` reports χ² of the weighted
  *   residuals, the degrees of freedom, the p-value, the two-sided
- *   Gaussian-equivalent disagreement in sigma, and each input's normalised
+ *   Gaussian-equivalent disagreement in sigma, and each input's normalized
  *   residual (pull).
  *
  * Not every triple is sufficient: {L, R, T}, {L, d, f}, {R, d, θ} and
@@ -124,7 +124,7 @@ export interface StarConsistencySI {
   readonly lnPValue: number;
   /** Two-sided Gaussian-equivalent disagreement (tension) in σ: erfc(tensionSigma/√2) = pValue (= √χ² when dof = 1). */
   readonly tensionSigma: number;
-  /** Normalised residual (input − fitted)/σ in log space, per input kind. */
+  /** Normalized residual (input − fitted)/σ in log space, per input kind. */
   readonly pulls: Readonly<Partial<Record<StarInputKindSI, number>>>;
 }
 
@@ -606,10 +606,10 @@ export interface StarBatchSolverSI {
    */
   readonly jacobian: Float64Array;
   /**
-   * True when this solver runs the specialised loop for {parallax, bolometric
+   * True when this solver runs the specialized loop for {parallax, bolometric
    * flux, temperature} (see {@link createStarBatchSolverSI}).
    */
-  readonly specialised: boolean;
+  readonly specialized: boolean;
   /**
    * Solve every row. Never throws mid-array: invalid rows get NaN in every
    * output column and a non-zero reason code. Allocation-free per row.
@@ -766,20 +766,20 @@ export function createStarBatchSolverSI(
   const ip = kinds.indexOf("parallaxRad");
   const iF = kinds.indexOf("bolometricFluxWm2");
   const iT = kinds.indexOf("temperatureK");
-  if (options.specialise !== false && ip >= 0 && iF >= 0 && iT >= 0) {
-    return { inputs: kinds, jacobian: jac.slice(), specialised: true, solve: (input, output) => solveParallaxFluxTemperature(input, output, ip, iF, iT) };
+  if (options.specialize !== false && ip >= 0 && iF >= 0 && iT >= 0) {
+    return { inputs: kinds, jacobian: jac.slice(), specialized: true, solve: (input, output) => solveParallaxFluxTemperature(input, output, ip, iF, iT) };
   }
-  return { inputs: kinds, jacobian: jac.slice(), specialised: false, solve };
+  return { inputs: kinds, jacobian: jac.slice(), specialized: false, solve };
 }
 
 /** Options of {@link createStarBatchSolverSI}. */
 export interface StarBatchSolverOptions {
   /**
-   * Use the specialised loop when the inputs are {parallax, bolometric flux,
+   * Use the specialized loop when the inputs are {parallax, bolometric flux,
    * temperature} in any order (default true). `false` forces the general
    * product-of-powers loop (for tests that compare the two).
    */
-  readonly specialise?: boolean;
+  readonly specialize?: boolean;
 }
 
 /** 1/√σ, for θ/2 = √f / (√σ T²) without forming f/σ (which overflows for f ≳ 1e301 W m^-2). */
@@ -796,7 +796,7 @@ function requireLengths(n: number, arrays: readonly (Float64Array | Uint8Array |
 }
 
 /**
- * The specialised batch loop for the commonest catalogue: parallax p,
+ * The specialized batch loop for the commonest catalogue: parallax p,
  * bolometric flux f and effective temperature T (columns ip, iF, iT), all
  * six outputs by direct formulas
  *
@@ -849,8 +849,8 @@ function solveParallaxFluxTemperature(input: StarBatchInputSI, output: StarBatch
 
 /**
  * The row loop of {@link solveParallaxFluxTemperature}, kept apart so that it
- * sees only typed arrays and numbers (no property reads): V8 then optimises
- * it once and keeps it optimised across calls. `flags` bits: 1 T, 2 f, 4 d,
+ * sees only typed arrays and numbers (no property reads): V8 then optimizes
+ * it once and keeps it optimized across calls. `flags` bits: 1 T, 2 f, 4 d,
  * 8 L, 16 R, 32 θ requested. @internal
  */
 function parallaxFluxTemperatureLoop(
