@@ -176,7 +176,7 @@ describe("Planck curves and helpers", () => {
 describe("luminosityLabel", () => {
   it("writes L☉ for Lsun and for the legacy spelling Lsol (docs/naming.md §2); other units as given", () => {
     expect(luminosityLabel("Lsun")).toBe("L_{☉}");
-    expect(luminosityLabel("Lsol")).toBe("L_{☉}");
+    expect(luminosityLabel("Lsol")).toBe("L_{☉}"); // legacy
     expect(luminosityLabel("W")).toBe("W");
   });
 });

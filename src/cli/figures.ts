@@ -325,7 +325,7 @@ export function hrFigure(points: readonly HrPoint[], luminosityUnit: string, tru
 
 /** Luminosity unit text for axis labels: `Lsun` (or the legacy `Lsol`) → `L_{☉}`. */
 export function luminosityLabel(unit: string): string {
-  return unit === "Lsun" || unit === "Lsol" ? "L_{☉}" : unit;
+  return unit === "Lsun" || unit === "Lsol" ? "L_{☉}" : unit; // Lsol: legacy
 }
 
 /** A spectrum with its lines marked. */

@@ -51,13 +51,13 @@ describe("the compound-unit grammar", () => {
   // docs/naming.md §2: one key per body (Rsun, REarth, MJupiter, …); the
   // 0.1 spellings (Rsol, Rterra, Mjove, …) still read and are never printed.
   const bodies = [
-    ["Rsun", "Rsol", "R☉"],
-    ["Lsun", "Lsol", "L☉"],
-    ["Msun", "Msol", "M☉"],
-    ["REarth", "Rterra", "R⊕"],
-    ["MEarth", "Mterra", "M⊕"],
-    ["RJupiter", "Rjove", "RJ"],
-    ["MJupiter", "Mjove", "MJ"],
+    ["Rsun", "Rsol", "R☉"], // legacy
+    ["Lsun", "Lsol", "L☉"], // legacy
+    ["Msun", "Msol", "M☉"], // legacy
+    ["REarth", "Rterra", "R⊕"], // legacy
+    ["MEarth", "Mterra", "M⊕"], // legacy
+    ["RJupiter", "Rjove", "RJ"], // legacy
+    ["MJupiter", "Mjove", "MJ"], // legacy
   ] as const;
   test.each(bodies)("units.%s and its legacy spelling %s parse to the same unit, printed %s", (key, legacy, symbol) => {
     const unit = units[key];

@@ -192,13 +192,13 @@ export const unitAliases: Readonly<Record<string, keyof typeof units>> = {
   MJupiter: "MJupiter",
   Lsun: "Lsun",
   // legacy spellings (0.1): still read, never printed (docs/naming.md §2)
-  Rsol: "Rsun",
-  Rterra: "REarth",
-  Rjove: "RJupiter",
-  Msol: "Msun",
-  Mterra: "MEarth",
-  Mjove: "MJupiter",
-  Lsol: "Lsun",
+  Rsol: "Rsun", // legacy
+  Rterra: "REarth", // legacy
+  Rjove: "RJupiter", // legacy
+  Msol: "Msun", // legacy
+  Mterra: "MEarth", // legacy
+  Mjove: "MJupiter", // legacy
+  Lsol: "Lsun", // legacy
   yr: "yr",
   "°": "deg",
   "′": "arcmin",

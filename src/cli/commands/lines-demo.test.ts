@@ -99,7 +99,7 @@ describe("starlume demo", () => {
     expect(r.code).toBe(0);
     const rows = csvRecords(r.stdout);
     expect(rows).toHaveLength(12);
-    // column keys of docs/naming.md §8 and §2: reduced_chi2 (was chi2/dof), radius in Rsun and luminosity in Lsun (were Rsol, Lsol)
+    // column keys of docs/naming.md §8 and §2: reduced_chi2 (was chi2/dof), radius in Rsun and luminosity in Lsun (the legacy Rsol, Lsol)
     const keys = Object.keys(rows[0] ?? {});
     expect(keys).toContain("reduced_chi2");
     expect(keys).not.toContain("chi2/dof");
