@@ -41,13 +41,13 @@ const bandStart = new Int32Array(NB + 1);
 let lamFirst = 0;
 let lamLast = 0;
 
-function curve(center: number): ResponseCurveSI {
-  const hw = 0.09 * center;
+function curve(centre: number): ResponseCurveSI {
+  const hw = 0.09 * centre;
   const l = new Float64Array(NODES);
   const r = new Float64Array(NODES);
   for (let i = 0; i < NODES; i++) {
-    const lam = center - 2 * hw + (4 * hw * i) / (NODES - 1);
-    const u = (lam - center) / hw;
+    const lam = centre - 2 * hw + (4 * hw * i) / (NODES - 1);
+    const u = (lam - centre) / hw;
     l[i] = lam;
     const u2 = u * u;
     r[i] = Math.max(0, Math.exp(-(u2 * u2)) * (1 + 0.3 * u));

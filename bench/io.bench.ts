@@ -7,7 +7,7 @@
  * this table (it handles no quoting, no CRLF and no errors, none of which the
  * table needs); subject: the RFC 4180 streaming {@link CsvParser} fed
  * the same text in 64 KiB chunks (as a file stream would deliver it). Both
- * return a checksum (total field characters) so the work is not optimised away.
+ * return a checksum (total field characters) so the work is not optimized away.
  */
 import { CsvParser } from "../src/cli/io/csv-read";
 import { formatCsvRow } from "../src/cli/io/write";

@@ -5,7 +5,7 @@
  * stellar-parameter kernel and via the typed batch API, each against a
  * hand-written plain-number loop of the same formulas.
  *
- * The {parallax, flux, temperature} kernel solver runs a specialised loop;
+ * The {parallax, flux, temperature} kernel solver runs a specialized loop;
  * the last case forces the general product-of-powers loop for comparison.
  * Every case computes the same outputs (d, L, R, θ and their σ) on both
  * sides; the hand loop does the validity test a careful engineer would write
@@ -63,7 +63,7 @@ function setup(): void {
 }
 
 const solver = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"]);
-const generalSolver = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialise: false });
+const generalSolver = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialize: false });
 const typedSolver = createStarBatchSolver(SI, ["parallax", "bolometricFlux", "temperature"]);
 
 function checksum(): number {
@@ -95,7 +95,7 @@ function kernelFullChain(s: typeof solver): number {
 
 export const cases: BenchCase[] = [
   {
-    name: "star solver kernel (specialised): plx+f+T → d,L,R,θ ±σ",
+    name: "star solver kernel (specialized): plx+f+T → d,L,R,θ ±σ",
     note: "createStarBatchSolverSI([parallax, flux, T]).solve over 1e6 stars (values, σ, reason codes) vs the hand loop of the same formulas",
     setup,
     items: N,
@@ -209,7 +209,7 @@ export const cases: BenchCase[] = [
   },
   {
     name: "star solver kernel (general loop): plx+f+T → d,L,R,θ ±σ",
-    note: "createStarBatchSolverSI(..., { specialise: false }): the general product-of-powers loop, vs the hand loop",
+    note: "createStarBatchSolverSI(..., { specialize: false }): the general product-of-powers loop, vs the hand loop",
     setup,
     items: N,
     baseline: () => {

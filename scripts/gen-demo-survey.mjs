@@ -77,7 +77,7 @@ const gaussSolve = normals(77001); // solve-input.csv (an independent stream)
 /**
  * Each band: a plateau between two logistic edges (λ_lo, λ_hi, edge scales
  * w_lo, w_hi) with a gentle linear tilt, tabulated on 200 equally spaced nodes
- * from λ_lo − 6 w_lo to λ_hi + 6 w_hi and normalised to a peak of 1. The
+ * from λ_lo − 6 w_lo to λ_hi + 6 w_hi and normalized to a peak of 1. The
  * committed values (nm to 0.001, response to 5 significant digits) are what
  * both this script and the fitter integrate.
  */
@@ -170,7 +170,7 @@ const STARS = [
 const fmt = (x, n) => String(sig(x, n));
 
 const truthRows = [
-  "name,description,teff [K],radius [Rsol],distance [pc],parallax [mas],angular_diameter [mas],luminosity [Lsol]",
+  "name,description,teff [K],radius [Rsun],distance [pc],parallax [mas],angular_diameter [mas],luminosity [Lsun]",
 ];
 const photHeader = ["name"];
 for (const b of bands) {

@@ -9,8 +9,8 @@
  *   "bands": [
  *     { "name": "tp450", "convention": "photon", "wavelengthUnit": "nm",
  *       "wavelengths": [390, 391, …], "response": [0, 0.01, …] },
- *     { "name": "k22", "shape": "gaussian", "center": "2.2 um", "fwhm": "0.35 um" },
- *     { "name": "box", "shape": "top-hat", "center": "550 nm", "width": "90 nm", "convention": "energy" }
+ *     { "name": "k22", "shape": "gaussian", "centre": "2.2 um", "fwhm": "0.35 um" },
+ *     { "name": "box", "shape": "top-hat", "centre": "550 nm", "width": "90 nm", "convention": "energy" }
  *   ]
  * }
  * ```
@@ -20,8 +20,9 @@
  * - A tabulated band gives `wavelengths` (strictly increasing, in
  *   `wavelengthUnit`, any length unit the parser reads) and `response`
  *   (≥ 0, any scale, same length).
- * - A shaped band gives `shape` (`"gaussian"` with `center` and `fwhm`, or
- *   `"top-hat"` with `center` and `width`) as quantity texts with units.
+ * - A shaped band gives `shape` (`"gaussian"` with `centre` and `fwhm`, or
+ *   `"top-hat"` with `centre` and `width`) as quantity texts with units
+ *   (the legacy key `center` is still read).
  *
  * @module
  */
@@ -119,17 +120,20 @@ export function parseBands(json: unknown, label: string): BandSet {
         const band = responseBand(SI, grid, resp, conv);
         return { name, band, convention: conv, curveM: { wavelengths: Float64Array.from(grid), response: Float64Array.from(resp) } };
       }
-      const center = quantity(o.center, `${where}: "center"`, fail);
+      // "centre" is the key; the 0.1 spelling "center" is still read (docs/naming.md §1)
+      if (o.centre !== undefined && o.center !== undefined) fail(`${where}: give "centre" or its legacy spelling "center", not both`);
+      const centreKey = o.centre === undefined && o.center !== undefined ? "center" : "centre";
+      const centre = quantity(o[centreKey], `${where}: "${centreKey}"`, fail);
       if (o.shape === "gaussian") {
         const fwhm = quantity(o.fwhm, `${where}: "fwhm"`, fail);
-        const band = gaussianBand(SI, SI.of(center, units.m), SI.of(fwhm, units.m), { convention: conv });
-        const c = gaussianResponseSI(center, fwhm);
+        const band = gaussianBand(SI, SI.of(centre, units.m), SI.of(fwhm, units.m), { convention: conv });
+        const c = gaussianResponseSI(centre, fwhm);
         return { name, band, convention: conv, curveM: { wavelengths: Float64Array.from(c.wavelengthsM), response: Float64Array.from(c.response) } };
       }
       if (o.shape === "top-hat") {
         const width = quantity(o.width, `${where}: "width"`, fail);
-        const band = topHatBand(SI, SI.of(center, units.m), SI.of(width, units.m), { convention: conv });
-        const c = topHatResponseSI(center, width);
+        const band = topHatBand(SI, SI.of(centre, units.m), SI.of(width, units.m), { convention: conv });
+        const c = topHatResponseSI(centre, width);
         return { name, band, convention: conv, curveM: { wavelengths: Float64Array.from(c.wavelengthsM), response: Float64Array.from(c.response) } };
       }
       return fail(`${where}: "shape" must be "gaussian" or "top-hat"; got ${JSON.stringify(o.shape)}`);

@@ -12,6 +12,22 @@ export interface Example {
   readonly note: string;
 }
 
+/** One exit code a command can return, and what it means for that command. */
+export interface ExitCode {
+  readonly code: 0 | 1 | 2 | 3;
+  /** Wrapped help text (no leading spaces; lines after the first are indented by the help). */
+  readonly meaning: string;
+}
+
+/** Exit code 3, shared by every command. */
+export const INTERNAL_EXIT: ExitCode = { code: 3, meaning: "internal error (a bug; please report it with the command line)" };
+
+/** The exit-code paragraph of a command's help: only the codes it declares. */
+export function exitCodesHelp(codes: readonly ExitCode[]): string {
+  const lines = codes.map((c) => `  ${c.code}  ${c.meaning.split("\n").join("\n     ")}`);
+  return ["Exit codes:", ...lines].join("\n");
+}
+
 /** A command of the tool. */
 export interface Command {
   readonly name: string;
@@ -24,6 +40,11 @@ export interface Command {
   readonly options: readonly OptionSpec[];
   /** Examples shown in `--help`; the test suite runs each of them. */
   readonly examples: readonly Example[];
+  /**
+   * The exit codes this command can return, with what each means for it
+   * (docs/naming.md §10). `--help` of the command lists exactly these.
+   */
+  readonly exitCodes: readonly ExitCode[];
   run(args: ParsedArgs, io: CliIO): Promise<number>;
 }
 
@@ -32,7 +53,7 @@ export function shellQuote(arg: string): string {
   return /^[A-Za-z0-9_./:=,+@%^-]+$/.test(arg) ? arg : `'${arg.replace(/'/g, `'\\''`)}'`;
 }
 
-/** The exit-code paragraph shared by all help texts. */
+/** The general exit-code paragraph of `starlume --help` (each command's help lists only its own codes). */
 export const EXIT_CODES_HELP = `Exit codes:
   0  success: every row processed
   1  some rows were rejected (each is kept in the output with status and reason,
@@ -58,7 +79,7 @@ export function commandHelp(c: Command): string {
     "Examples:",
     examples,
     "",
-    EXIT_CODES_HELP,
+    exitCodesHelp(c.exitCodes),
     "",
   ].join("\n");
 }

@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { loadBands, type BandSet } from "./bands";
-import { asFLambda, chi2Text, hrFigure, planckFamilyFigure, roundedK, sedFigure, spreadByTemperature, temperatureAxis, type SedData } from "./figures";
+import { asFLambda, chi2Text, hrFigure, luminosityLabel, planckFamilyFigure, roundedK, sedFigure, spreadByTemperature, temperatureAxis, type SedData } from "./figures";
 import { MemoryStream } from "./test-util";
 import { xmlProblems } from "../plot/xml-check.test-util";
 
@@ -81,7 +81,7 @@ describe("SED figure", () => {
     expect(legend.match(/<text /g)).toHaveLength(3);
     // Band names are written above their curves instead.
     for (const b of bandSet.bands) expect(svg).toContain(`fill="#333333">${b.name}</text>`);
-    expect(svg).toContain("normalised response</text>");
+    expect(svg).toContain("normalized response</text>");
     expect(svg).toContain("(photon counting)</text>");
     expect(svg).toContain('f<tspan dy="3.9" font-size="9.75">λ</tspan><tspan dy="-3.9"> [W m⁻² µm⁻¹]</tspan>');
   });
@@ -132,7 +132,7 @@ describe("temperature–luminosity diagram", () => {
         { name: "cool", temperatureK: 3000, sigmaT: 30, luminosity: 0.01, sigmaL: 0.001 },
         { name: "hot", temperatureK: 20000, sigmaT: 2000, luminosity: 1000, sigmaL: 100 },
       ],
-      "Lsol",
+      "Lsun",
       [{ temperatureK: 21000, luminosity: 1100 }],
     );
     expect(xmlProblems(svg)).toEqual([]);
@@ -170,5 +170,13 @@ describe("Planck curves and helpers", () => {
     expect(picked[0]).toBe(3000);
     expect(picked.at(-1)).toBe(14000);
     expect([...picked].sort((a, b) => a - b)).toEqual(picked);
+  });
+});
+
+describe("luminosityLabel", () => {
+  it("writes L☉ for Lsun and for the legacy spelling Lsol (docs/naming.md §2); other units as given", () => {
+    expect(luminosityLabel("Lsun")).toBe("L_{☉}");
+    expect(luminosityLabel("Lsol")).toBe("L_{☉}"); // legacy
+    expect(luminosityLabel("W")).toBe("W");
   });
 });

@@ -33,7 +33,7 @@ export const FLAMBDA_LABEL = "f_{λ} [W m⁻² µm⁻¹]";
 export const BLAMBDA_LABEL = "B_{λ} [W m⁻² sr⁻¹ µm⁻¹]";
 
 /** Colours of the SED figures: Okabe–Ito blue line, vermilion data, near-black model squares, greys for bands. */
-const SED_COLORS = { model: PALETTE[0] as string, data: PALETTE[1] as string, bandMean: "#222222", bands: ["#4d4d4d", "#8c8c8c"] } as const;
+const SED_COLOURS = { model: PALETTE[0] as string, data: PALETTE[1] as string, bandMean: "#222222", bands: ["#4d4d4d", "#8c8c8c"] } as const;
 /** Marker radius of measured points in the SED (px); error bars shorter than this are hidden by the marker. */
 const DATA_RADIUS = 2.5;
 
@@ -98,7 +98,7 @@ function bandCurves(bands: readonly CliBand[]): BandCurve[] {
     name: b.name,
     x: Array.from(b.curveM.wavelengths, (l) => l * 1e6),
     response: b.curveM.response,
-    color: SED_COLORS.bands[i % 2] as string,
+    colour: SED_COLOURS.bands[i % 2] as string,
   }));
 }
 
@@ -163,14 +163,14 @@ export function sedFigure(d: SedData, bands: readonly CliBand[]): SedFigure {
     x: { label: "wavelength [µm]", scale: "log", min: 0.2, max: 5 },
     y: { label: FLAMBDA_LABEL, scale: "log", min: floor, max: top },
     series: [
-      { type: "line", name: "blackbody fit", x: Array.from(grid, (l) => l * 1e6), y: Array.from(model, toPlot), color: SED_COLORS.model },
+      { type: "line", name: "blackbody fit", x: Array.from(grid, (l) => l * 1e6), y: Array.from(model, toPlot), colour: SED_COLOURS.model },
       {
         type: "scatter",
         name: "measured ± 1σ",
         x: points.map((p) => p.pivotM * 1e6),
         y: points.map((p) => toPlot(p.value)),
         yErr: points.map((p) => toPlot(p.sigma)),
-        color: SED_COLORS.data,
+        colour: SED_COLOURS.data,
         radius: DATA_RADIUS,
       },
       {
@@ -178,7 +178,7 @@ export function sedFigure(d: SedData, bands: readonly CliBand[]): SedFigure {
         name: "model band mean",
         x: points.map((p) => p.pivotM * 1e6),
         y: d.modelFLambdaSI.map(toPlot),
-        color: SED_COLORS.bandMean,
+        colour: SED_COLOURS.bandMean,
         radius: 4.5,
         marker: "square",
         hollow: true,
@@ -186,12 +186,12 @@ export function sedFigure(d: SedData, bands: readonly CliBand[]): SedFigure {
     ],
     residual: {
       y: { label: "residual [σ]", min: -lim, max: lim, ...(lim === 3 ? { ticks: [-3, 0, 3] } : {}) },
-      series: [{ type: "scatter", name: "(measured − model)/σ", x: points.map((p) => p.pivotM * 1e6), y: d.pulls, color: SED_COLORS.data, radius: 3 }],
+      series: [{ type: "scatter", name: "(measured − model)/σ", x: points.map((p) => p.pivotM * 1e6), y: d.pulls, colour: SED_COLOURS.data, radius: 3 }],
       height: 0.17,
     },
     bands: bandCurves(bands),
     bandPlacement: "panel",
-    bandLabel: `normalised response\n(${countingOf(bands)})`,
+    bandLabel: `normalized response\n(${countingOf(bands)})`,
     bandLabels: "inline",
     legend: true,
   });
@@ -237,7 +237,7 @@ export function planckFamilyFigure(stars: readonly PlanckStar[], pivotsM: readon
     for (const v of y) if (v > peak) peak = v;
     const tText = roundedK(st.temperatureK, st.sigmaTemperatureK);
     const label = st.name !== "" ? `${st.name}, ${tText}` : tText;
-    return { type: "line" as const, name: label, x: Array.from(grid, (l) => l * 1e6), y, color: PALETTE[i % PALETTE.length] as string };
+    return { type: "line" as const, name: label, x: Array.from(grid, (l) => l * 1e6), y, colour: PALETTE[i % PALETTE.length] as string };
   });
   const lowest = Math.min(...stars.map((s) => peakRadiance(s.temperatureK)));
   return svgChart({
@@ -246,7 +246,7 @@ export function planckFamilyFigure(stars: readonly PlanckStar[], pivotsM: readon
     x: { label: "wavelength [µm]", scale: "log", min: fromM * 1e6, max: toM * 1e6, ticks: WAVELENGTH_TICKS_UM },
     y: { label: BLAMBDA_LABEL, scale: "log", min: Math.max(lowest / 1e3, peak / 1e9), max: peak * 3 },
     series,
-    markers: pivotsM.map((p) => ({ x: p.pivotM * 1e6, label: p.name, color: "#8c8c8c" })),
+    markers: pivotsM.map((p) => ({ x: p.pivotM * 1e6, label: p.name, colour: "#8c8c8c" })),
     legend: true,
   });
 }
@@ -312,20 +312,20 @@ export function hrFigure(points: readonly HrPoint[], luminosityUnit: string, tru
         y: points.map((p) => p.luminosity),
         xErr: points.map((p) => p.sigmaT ?? 0),
         yErr: points.map((p) => p.sigmaL ?? 0),
-        color: PALETTE[1] as string,
+        colour: PALETTE[1] as string,
         radius: 3,
       },
       ...(truth !== undefined
-        ? [{ type: "scatter" as const, name: "true values", x: truth.map((p) => p.temperatureK), y: truth.map((p) => p.luminosity), color: "#222222", radius: 5, marker: "diamond" as const, hollow: true }]
+        ? [{ type: "scatter" as const, name: "true values", x: truth.map((p) => p.temperatureK), y: truth.map((p) => p.luminosity), colour: "#222222", radius: 5, marker: "diamond" as const, hollow: true }]
         : []),
     ],
     legend: truth !== undefined,
   });
 }
 
-/** Luminosity unit text for axis labels: `Lsol` → `L_{☉}`. */
+/** Luminosity unit text for axis labels: `Lsun` (or the legacy `Lsol`) → `L_{☉}`. */
 export function luminosityLabel(unit: string): string {
-  return unit === "Lsol" ? "L_{☉}" : unit;
+  return unit === "Lsun" || unit === "Lsol" ? "L_{☉}" : unit; // Lsol: legacy
 }
 
 /** A spectrum with its lines marked. */
@@ -335,8 +335,8 @@ export function spectrumFigure(title: string, xNm: ArrayLike<number>, y: ArrayLi
     description: `${title}: synthetic spectrum with the listed lines marked.`,
     x: { label: "wavelength [nm]" },
     y: { label: yLabel },
-    series: [{ type: "line", name: "spectrum", x: xNm, y, color: PALETTE[0] as string }],
-    markers: markers.map((m) => ({ ...m, color: m.color ?? (PALETTE[1] as string) })),
+    series: [{ type: "line", name: "spectrum", x: xNm, y, colour: PALETTE[0] as string }],
+    markers: markers.map((m) => ({ ...m, colour: m.colour ?? (PALETTE[1] as string) })),
     legend: false,
   });
 }

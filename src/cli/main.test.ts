@@ -58,6 +58,26 @@ describe("starlume: help, version, usage errors", () => {
       expect((await runCli(["help", c.name])).stdout).toBe(r.stdout);
     });
   }
+
+  // docs/naming.md §10: each command's help lists only the exit codes it can return.
+  const expected: Record<string, readonly number[]> = { solve: [0, 1, 2, 3], fit: [0, 1, 2, 3], planck: [0, 2, 3], lines: [0, 1, 2, 3], convert: [0, 2, 3], demo: [0, 1, 2, 3] };
+  for (const c of COMMANDS) {
+    it(`${c.name} --help lists exactly the exit codes ${c.name} can return`, async () => {
+      expect(c.exitCodes.map((e) => e.code)).toEqual(expected[c.name]);
+      const help = (await runCli([c.name, "--help"])).stdout;
+      const block = help.slice(help.indexOf("Exit codes:"));
+      const listed = [...block.matchAll(/^ {2}(\d) {2}/gm)].map((m) => Number(m[1]));
+      expect(listed).toEqual(expected[c.name]);
+      // a command that cannot reject rows never returns 1: its source does not name the code
+      const source = readFileSync(join(REPO_ROOT, "src/cli/commands", `${c.name}.ts`), "utf8");
+      const returnsRejected = /EXIT\.ROWS_REJECTED|runTableCommand\(/.test(source);
+      expect(returnsRejected).toBe(expected[c.name]?.includes(1));
+    });
+  }
+  it("starlume --help keeps the general table of all four codes", () => {
+    const block = toolHelp().slice(toolHelp().indexOf("Exit codes:"));
+    expect([...block.matchAll(/^ {2}(\d) {2}/gm)].map((m) => Number(m[1]))).toEqual([0, 1, 2, 3]);
+  });
 });
 
 describe("every example in the help texts runs", () => {

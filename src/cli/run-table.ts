@@ -22,7 +22,7 @@ export const TABLE_OPTIONS: readonly OptionSpec[] = [
   { name: "format", short: "f", kind: "value", valueName: "FMT", choices: OUTPUT_FORMATS, help: "output format", defaultText: "table on a terminal, else csv" },
   { name: "output", short: "o", kind: "value", valueName: "FILE", help: "write the table to FILE instead of stdout" },
   { name: "id", kind: "value", valueName: "COLUMN", help: "column naming each star", defaultText: "name, star, id, designation or object" },
-  { name: "digits", kind: "value", valueName: "N", help: "significant digits of numbers without uncertainty in the aligned table", defaultText: "4" },
+  { name: "digits", short: "d", kind: "value", valueName: "N", help: "significant digits of numbers without uncertainty in the aligned table", defaultText: "4" },
   { name: "report", kind: "value", valueName: "DIR", help: "write an HTML report with figures to DIR/index.html" },
   { name: "quiet", short: "q", kind: "flag", help: "no summary line and no per-row messages on stderr" },
 ];

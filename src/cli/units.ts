@@ -5,7 +5,7 @@
  * (`--from "300 nm"`, or a bare number in a default unit).
  *
  * Magnitudes are not units of the library (they are logarithms, not scales);
- * the tool recognises the unit texts `mag` (any magnitude, e.g. apparent
+ * the tool recognizes the unit texts `mag` (any magnitude, e.g. apparent
  * bolometric) and `AB mag` (AB magnitudes in the fit command) itself.
  *
  * @module
@@ -51,7 +51,7 @@ export function readUnit(text: string, where: string): Unit {
 /**
  * Parse a unit and check its kind.
  *
- * @param where - what to name in messages, e.g. `column 'parallax [kg]'` or `--value-unit`
+ * @param where - what to name in messages, e.g. `column 'parallax [kg]'` or `--unit value`
  * @throws UsageError naming `where`, the unit, its kind and the kind expected
  */
 export function unitOfKind(text: string, kind: KindLike, where: string, hint?: string): Unit {

@@ -127,8 +127,8 @@ describe("IAU definitions and nominal values (printed values of the resolutions)
     expect(constants.ly.si as number).toBe(9460730472580800);
   });
   test("jansky is 10^-26 W m^-2 Hz^-1 = 10^-23 erg s^-1 cm^-2 Hz^-1", () => {
-    expect(constants.jansky.si as number).toBe(1e-26);
-    expect(constants.jansky.cgs as number).toBe(1e-23);
+    expect(constants.Jy.si as number).toBe(1e-26);
+    expect(constants.Jy.cgs as number).toBe(1e-23);
   });
   test("solar mass carries G's relative uncertainty (CODATA 2018: 2.2e-5)", () => {
     expect(constants.Msun.relativeUncertainty).toBeCloseTo(0.00015 / 6.6743, 12);

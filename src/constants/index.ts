@@ -81,9 +81,9 @@ export const constants = {
   /** Light-year: c × Julian year (exact; IAU). */
   ly: defineConstant("ly", "light-year", k.length.dimension, V.LIGHT_YEAR, "m", "IAU (Julian year of 365.25 d)"),
   /** Julian year: 365.25 × 86400 s (exact; IAU). */
-  julianYear: defineConstant("a", "Julian year", k.time.dimension, V.JULIAN_YEAR, "s", "IAU"),
+  yr: defineConstant("a", "Julian year", k.time.dimension, V.JULIAN_YEAR, "s", "IAU"),
   /** Jansky: 10⁻²⁶ W m⁻² Hz⁻¹ (exact). */
-  jansky: defineConstant("Jy", "jansky", k.spectralFluxPerFrequency.dimension, V.JANSKY, "W m^-2 Hz^-1", "IAU (definition of the jansky)"),
+  Jy: defineConstant("Jy", "jansky", k.spectralFluxPerFrequency.dimension, V.JANSKY, "W m^-2 Hz^-1", "IAU (definition of the jansky)"),
   /** Zero point of the absolute bolometric magnitude scale L₀ (exact; IAU 2015 B2). */
   L0: defineConstant("L₀", "zero point luminosity", k.power.dimension, V.L0, "W", "IAU 2015 Resolution B2"),
   /** Zero point of the apparent bolometric magnitude scale f₀ = L₀/(4π (10 pc)²) (exact; IAU 2015 B2). */

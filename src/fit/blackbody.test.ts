@@ -55,8 +55,8 @@ describe("typed photometric fits", () => {
     expect(rel(b.angularDiameter, a.angularDiameter)).toBeLessThan(1e-12);
     expect(Math.abs(b.extinctionAV - a.extinctionAV)).toBeLessThan(1e-12);
     expect(rel(CGS.valueIn(b.modelFluxPerWavelength[2] as never, units.erg_per_s_cm2_A), SI.valueIn(a.modelFluxPerWavelength[2] as never, units.erg_per_s_cm2_A))).toBeLessThan(1e-12);
-    expect(a.json.temperatureK).toBe(a.temperature);
-    expect(JSON.parse(JSON.stringify(a.json))).toEqual(a.json);
+    expect(a.si.temperatureK).toBe(a.temperature);
+    expect(JSON.parse(JSON.stringify(a.si))).toEqual(a.si);
   });
 
   it("f_ν data (Jy) give the same fit as the equivalent f_λ data (pivot conversion is exact)", () => {
@@ -91,7 +91,7 @@ describe("typed photometric fits", () => {
     expect(rel(m.sigmaTemperature, fl.sigmaTemperature)).toBeLessThan(1e-6);
     // With noise, magnitude-space and flux-space (first-order σ_f = 0.4 ln10 f σ_m) fits weight the
     // bands differently by O(σ_ln) (σ_f follows the noisy f), so they differ by O(σ_ln)·σ_T: a small
-    // fraction of σ_T that shrinks in proportion to σ_m. Measured over 20 seeded realisations each.
+    // fraction of σ_T that shrinks in proportion to σ_m. Measured over 20 seeded realizations each.
     const worst = (sm: number): number => {
       const normal = gaussian(mulberry32(99));
       let w = 0;
@@ -140,7 +140,7 @@ describe("typed photometric fits", () => {
     bad2[2] = { ...bad2[2]!, fluxPerWavelength: assume<SpectralFluxPerWavelength<"SI">>(NaN) };
     expect(() => fitBlackbody(SI, bad2)).toThrow(/observations\[2\]\.fluxPerWavelength must be a finite number m\^-1 kg s\^-3; got NaN/);
     expect(() => fitBlackbody(SI, [...obs.slice(0, 2), { band: shapes[2]!, abMagnitude: 12, sigma: 0 }])).toThrow(/observations\[2\]\.sigma must be a finite number > 0 mag/);
-    expect(() => topHatBand(CGS, CGS.of(-5, units.angstrom), CGS.of(10, units.angstrom))).toThrow(/center must be a finite number > 0 cm/);
+    expect(() => topHatBand(CGS, CGS.of(-5, units.angstrom), CGS.of(10, units.angstrom))).toThrow(/centre must be a finite number > 0 cm/);
     expect(() => responseBand(SI, SI.arrayOf([500, 400], units.nm), [1, 1], "photon")).toThrow(/strictly increasing/);
   });
 });
@@ -157,7 +157,7 @@ describe("reusable fitter for catalogues", () => {
       const b = fitBlackbody(SI, obs, { extinction: { rV: 3.1 } });
       expect(a.temperature).toBe(b.temperature);
       expect(a.extinctionAV).toBe(b.extinctionAV);
-      expect(a.json).toEqual(b.json);
+      expect(a.si).toEqual(b.si);
     }
     expect(() => fitter.fit([])).toThrow(/one entry per band \(5\)/);
     expect(() => fitter.fit(bandsSI.map(() => ({ abMagnitude: 10, sigma: 0.01, fluxPerWavelength: assume<SpectralFluxPerWavelength<"SI">>(1) })))).toThrow(/exactly one of/);
@@ -181,7 +181,7 @@ describe("spectrum fit with absorption lines masked", () => {
     // Pure Gaussian lines (γ = 0) are truncated by the kernel at τ < 1e-8 within ~1 nm, so beyond a
     // ±2 nm mask the spectrum is the continuum to < 1e-8 relative.
     const flux = new Float64Array(n);
-    synthesizeSpectrumSI(lam, cont, centres.map((c) => ({ centerM: c, dopplerWidthM: 0.2e-9, lorentzHwhmM: 0, tau0: 3 })), flux);
+    synthesizeSpectrumSI(lam, cont, centres.map((c) => ({ centreM: c, dopplerWidthM: 0.2e-9, lorentzHwhmM: 0, tau0: 3 })), flux);
     const sigma = cont.map((v) => 0.01 * v);
     const spectrum = {
       wavelengths: assumeArray<LengthArray<"SI">>(lam),
@@ -201,7 +201,7 @@ describe("spectrum fit with absorption lines masked", () => {
   it("noisy Voigt lines with damping wings, masked ±3 nm: T within 3σ and χ²/dof ≈ 1", () => {
     const normal = gaussian(mulberry32(2024));
     const flux = new Float64Array(n);
-    synthesizeSpectrumSI(lam, cont, centres.map((c) => ({ centerM: c, dopplerWidthM: 0.15e-9, lorentzHwhmM: 0.002e-9, tau0: 5 })), flux);
+    synthesizeSpectrumSI(lam, cont, centres.map((c) => ({ centreM: c, dopplerWidthM: 0.15e-9, lorentzHwhmM: 0.002e-9, tau0: 5 })), flux);
     const sigma = cont.map((v) => 0.01 * v);
     const noisy = flux.map((v, i) => v + sigma[i]! * normal());
     const r = fitBlackbodySpectrum(SI, {
@@ -246,7 +246,7 @@ describe("hand-off to radius and luminosity", () => {
     const star = stellarParametersFromFit(SI, fit, { distance: SI.of(50, units.pc), sigma: SI.of(0.5, units.pc) });
     expect(rel(star.radius, (theta * d) / 2)).toBeLessThan(1e-6);
     expect(rel(star.luminosity, Math.PI * theta ** 2 * d ** 2 * SIGMA * T ** 4)).toBeLessThan(1e-5);
-    const lc = fit.json.logCovariance;
+    const lc = fit.si.lnCovariance;
     const vT = lc[0]![0]!;
     const vTh = lc[1]![1]!;
     const c = lc[0]![1]!;
@@ -264,11 +264,11 @@ describe("hand-off to radius and luminosity", () => {
     expect(rel(viaP.sigmaLuminosity, star.sigmaLuminosity)).toBeLessThan(1e-9);
     // CGS: the same star in erg s⁻¹ and cm
     const cgs = stellarParametersFromFit(CGS, fit, { distance: CGS.of(50, units.pc), sigma: CGS.of(0.5, units.pc) });
-    expect(rel(CGS.valueIn(cgs.luminosity, units.Lsol), SI.valueIn(star.luminosity, units.Lsol))).toBeLessThan(1e-12);
+    expect(rel(CGS.valueIn(cgs.luminosity, units.Lsun), SI.valueIn(star.luminosity, units.Lsun))).toBeLessThan(1e-12);
     expect(() => stellarParametersFromFit(SI, fit, { distance: SI.of(-1, units.pc), sigma: SI.of(1, units.pc) })).toThrow(/distance must be a finite number > 0 m/);
   });
 
-  it("Monte Carlo: refitting 1000 noisy realisations with a noisy distance reproduces σ(ln L) and σ(ln R)", { timeout: 60000 }, () => {
+  it("Monte Carlo: refitting 1000 noisy realizations with a noisy distance reproduces σ(ln L) and σ(ln R)", { timeout: 60000 }, () => {
     // Seeded (mulberry32 + Box–Muller). Relative SE of a sample SD from 1000 draws is 1/√2000 = 2.2 %;
     // the tolerance is 10 % (4.5 SE; measured −2.6 % for L, −4.9 % for R with this seed, and within 1 %
     // with 3000 draws of another seed). The independent-inputs σ(ln L) (ignoring c: 0.047 vs 0.024)
@@ -294,7 +294,7 @@ describe("hand-off to radius and luminosity", () => {
     const predR = ref.sigmaRadius / ref.radius;
     expect(rel(sd0(lnL), predL)).toBeLessThan(0.1);
     expect(rel(sd0(lnR), predR)).toBeLessThan(0.1);
-    const lc = ref.json.lnCovariance;
+    const lc = ref.si.lnCovariance;
     const iT = 0;
     const iTh = 5;
     const iD = 3;

@@ -66,7 +66,7 @@ const FX = kinds.flux.dimension;
 declare const bandSystem: unique symbol;
 
 /**
- * A photometric band prepared for fitting (normalised quadrature weights
+ * A photometric band prepared for fitting (normalized quadrature weights
  * computed once). Bound to the system it was built in: a band built with
  * `CGS` cannot be used in an `SI` fit.
  */
@@ -153,10 +153,10 @@ export interface BandShapeOptions {
  * the box exactly).
  *
  * @param sys - `SI` or `CGS`
- * @param center - centre λ_c, in `sys`
+ * @param centre - centre λ_c, in `sys`
  * @param width - full width Δλ (< 2 λ_c), in `sys`
  * @param options - convention (default "photon") and number of nodes (default 201)
- * @throws RangeError naming `center`, `width`, `points` or `convention`
+ * @throws RangeError naming `centre`, `width`, `points` or `convention`
  * @example
  * ```ts
  * import { CGS, topHatBand, units } from "starlume";
@@ -165,14 +165,14 @@ export interface BandShapeOptions {
  */
 export function topHatBand<S extends SystemName>(
   sys: UnitSystem<S>,
-  center: Length<NoInfer<S>>,
+  centre: Length<NoInfer<S>>,
   width: Length<NoInfer<S>>,
   options: BandShapeOptions = {},
 ): FitBand<S> {
-  positive(sys, "center", center, L);
+  positive(sys, "centre", centre, L);
   positive(sys, "width", width, L);
   const convention = checkConvention(options.convention ?? "photon");
-  const curve = topHatResponseSI(toSI(sys, center, L), toSI(sys, width, L), options.points ?? 201);
+  const curve = topHatResponseSI(toSI(sys, centre, L), toSI(sys, width, L), options.points ?? 201);
   return makeBand(sys, prepareBandSI(curve, convention));
 }
 
@@ -180,10 +180,10 @@ export function topHatBand<S extends SystemName>(
  * A Gaussian band of the given FWHM about λ_c, tabulated over λ_c ± 5σ.
  *
  * @param sys - `SI` or `CGS`
- * @param center - centre λ_c, in `sys`
+ * @param centre - centre λ_c, in `sys`
  * @param fwhm - full width at half maximum, in `sys`
  * @param options - convention (default "photon") and number of nodes (default 201)
- * @throws RangeError naming `center`, `fwhm`, `points` or `convention`
+ * @throws RangeError naming `centre`, `fwhm`, `points` or `convention`
  * @example
  * ```ts
  * import { SI, gaussianBand, units } from "starlume";
@@ -192,14 +192,14 @@ export function topHatBand<S extends SystemName>(
  */
 export function gaussianBand<S extends SystemName>(
   sys: UnitSystem<S>,
-  center: Length<NoInfer<S>>,
+  centre: Length<NoInfer<S>>,
   fwhm: Length<NoInfer<S>>,
   options: BandShapeOptions = {},
 ): FitBand<S> {
-  positive(sys, "center", center, L);
+  positive(sys, "centre", centre, L);
   positive(sys, "fwhm", fwhm, L);
   const convention = checkConvention(options.convention ?? "photon");
-  const curve = gaussianResponseSI(toSI(sys, center, L), toSI(sys, fwhm, L), options.points ?? 201);
+  const curve = gaussianResponseSI(toSI(sys, centre, L), toSI(sys, fwhm, L), options.points ?? 201);
   return makeBand(sys, prepareBandSI(curve, convention));
 }
 
@@ -305,8 +305,8 @@ export interface BlackbodyFit<S extends SystemName> {
   readonly iterations: number;
   /** Why the iteration stopped (`"maxIterations"` and `"stalled"` also set `flags.notConverged`). */
   readonly stopReason: FitStopReason;
-  /** The plain-JSON form (SI units; names carry their unit). */
-  readonly json: BlackbodyFitSI;
+  /** The kernel's plain SI record (names carry their unit). */
+  readonly si: BlackbodyFitSI;
 }
 
 function settingsFrom(options: BlackbodyFitOptions): BlackbodyFitSettingsSI {
@@ -364,7 +364,7 @@ function typedFit<S extends SystemName>(
     correlation: r.correlation,
     iterations: r.iterations,
     stopReason: r.stopReason,
-    json: r,
+    si: r,
   };
 }
 
@@ -627,8 +627,8 @@ export interface StellarParameters<S extends SystemName> {
   readonly sigmaDistance: Length<S>;
   /** Correlation of R and L (both depend on θ and d). */
   readonly radiusLuminosityCorrelation: number;
-  /** The solver's plain-JSON solution (SI), with the fit's T–θ covariance included. */
-  readonly json: StellarFromFitSI;
+  /** The solver's plain SI record, with the fit's T–θ covariance included. */
+  readonly si: StellarFromFitSI;
 }
 
 /**
@@ -648,23 +648,23 @@ export interface StellarParameters<S extends SystemName> {
  * const bands = [0.44, 0.55, 0.8].map((c) => gaussianBand(SI, SI.of(c, units.um), SI.of(0.2 * c, units.um)));
  * const fit = fitBlackbody(SI, bands.map((band, i) => ({ band, abMagnitude: [9.1, 8.8, 8.7][i] ?? 0, sigma: 0.02 })));
  * const star = stellarParametersFromFit(SI, fit, { parallax: SI.of(10, units.mas), sigma: SI.of(0.05, units.mas) });
- * SI.valueIn(star.radius, units.Rsol); // ≈ 1.06 (fit.temperature ≈ 7100 K)
+ * SI.valueIn(star.radius, units.Rsun); // ≈ 1.06 (fit.temperature ≈ 7100 K)
  * ```
  */
 export function stellarParametersFromFit<S extends SystemName>(
   sys: UnitSystem<S>,
-  fit: { readonly json: BlackbodyFitSI },
+  fit: { readonly si: BlackbodyFitSI },
   distance: DistanceMeasurement<NoInfer<S>>,
 ): StellarParameters<S> {
   let r: StellarFromFitSI;
   if ("distance" in distance) {
     positive(sys, "distance", distance.distance, L);
     positive(sys, "distance sigma", distance.sigma, L);
-    r = stellarParametersFromFitSI(fit.json, { distanceM: { value: toSI(sys, distance.distance, L), sigma: toSI(sys, distance.sigma, L) } });
+    r = stellarParametersFromFitSI(fit.si, { distanceM: { value: toSI(sys, distance.distance, L), sigma: toSI(sys, distance.sigma, L) } });
   } else {
     requirePositive("parallax", distance.parallax, "rad");
     requirePositive("parallax sigma", distance.sigma, "rad");
-    r = stellarParametersFromFitSI(fit.json, { parallaxRad: { value: distance.parallax, sigma: distance.sigma } });
+    r = stellarParametersFromFitSI(fit.si, { parallaxRad: { value: distance.parallax, sigma: distance.sigma } });
   }
   const iR = 2;
   const iL = 1;
@@ -679,6 +679,6 @@ export function stellarParametersFromFit<S extends SystemName>(
     distance: fromSI(sys, r.distanceM.value, L) as Length<S>,
     sigmaDistance: fromSI(sys, r.distanceM.sigma, L) as Length<S>,
     radiusLuminosityCorrelation: cRL,
-    json: r,
+    si: r,
   };
 }

@@ -1,5 +1,5 @@
 /**
- * Specialised code for each law. A law's checks and scales are fixed when it
+ * Specialized code for each law. A law's checks and scales are fixed when it
  * is defined, so its success path can be written out once with them as
  * literals: in SI the checks and the kernel call, in CGS the same with one
  * exact multiply or divide per input and for the result. Each law gets a
@@ -88,7 +88,7 @@ function siCheck(input: LawInput, x: string, converted: boolean): string {
 type Fn = (...args: never[]) => unknown;
 
 /**
- * The scalar law `(sys, a0, a1, …) => result` specialised for its inputs, or
+ * The scalar law `(sys, a0, a1, …) => result` specialized for its inputs, or
  * `null` where code cannot be generated. `slow` is the generic closure.
  */
 export function compileScalar(
@@ -127,7 +127,7 @@ return function ${safeName(name)}(sys${args.length > 0 ? ", " : ""}${si}) {
 }
 
 /**
- * The row loop of a batch, specialised for which inputs are arrays (`arrays[k]`
+ * The row loop of a batch, specialized for which inputs are arrays (`arrays[k]`
  * true) and for the system; `null` where code cannot be generated. The
  * generated function is `(out, inputs, shared, bad) => void`: `inputs[k]` is
  * the array of input k (or unused), `shared[k]` the SI value of a shared input,

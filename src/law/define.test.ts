@@ -31,7 +31,7 @@ type Sys = UnitSystem<SystemName>;
 
 /**
  * Every way a law can be run: generated code with `SI`/`CGS`, the same law
- * with copies of the systems (not recognised by identity: the generic
+ * with copies of the systems (not recognized by identity: the generic
  * closure), and the law defined with generated code off, with the systems
  * and with copies. All must give the same value or the same message.
  */

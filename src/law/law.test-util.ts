@@ -27,7 +27,7 @@ export function withoutCodegen<T>(f: () => T): T {
 
 /**
  * System objects that are neither `SI` nor `CGS` but behave like them: the
- * law cannot recognise them by identity, so every call takes the generic path.
+ * law cannot recognize them by identity, so every call takes the generic path.
  */
 export const SI_COPY = Object.freeze({ ...SI }) as UnitSystem<"SI">;
 export const CGS_COPY = Object.freeze({ ...CGS }) as UnitSystem<"CGS">;

@@ -4,7 +4,7 @@
  * and E(B−V) ↔ A_V.
  *
  * CCM89 (ApJ 345, 245, eqs. 2–5; coefficients from memory, checked by the
- * continuity of the pieces and the normalisation a = 1, b = 0 at V in
+ * continuity of the pieces and the normalization a = 1, b = 0 at V in
  * kernels/extinction.test.ts):
  *
  *   A_λ / A_V = a(x) + b(x) / R_V,   x = 1/λ in µm⁻¹,   R_V = A_V / E(B−V)
@@ -157,11 +157,11 @@ export function ccm89Extinction<S extends SystemName>(
  * @throws RangeError naming `E(B-V)` or `R_V`
  * @example
  * ```ts
- * import { aVFromColorExcess } from "starlume";
- * aVFromColorExcess(0.1); // 0.31
+ * import { aVFromColourExcess } from "starlume";
+ * aVFromColourExcess(0.1); // 0.31
  * ```
  */
-export function aVFromColorExcess(colorExcess: Pure, rV: Pure = RV_DIFFUSE_ISM): number {
+export function aVFromColourExcess(colorExcess: Pure, rV: Pure = RV_DIFFUSE_ISM): number {
   // pure numbers are the same in every system: SI phrases the messages
   return aVLaw(SI, colorExcess, rV);
 }
@@ -175,11 +175,11 @@ export function aVFromColorExcess(colorExcess: Pure, rV: Pure = RV_DIFFUSE_ISM):
  * @throws RangeError naming `A_V` or `R_V`
  * @example
  * ```ts
- * import { colorExcessFromAV } from "starlume";
- * colorExcessFromAV(0.31); // 0.1
+ * import { colourExcessFromAV } from "starlume";
+ * colourExcessFromAV(0.31); // 0.1
  * ```
  */
-export function colorExcessFromAV(aV: Pure, rV: Pure = RV_DIFFUSE_ISM): number {
+export function colourExcessFromAV(aV: Pure, rV: Pure = RV_DIFFUSE_ISM): number {
   return colorExcessLaw(SI, aV, rV);
 }
 

@@ -36,7 +36,7 @@ describe("svgChart output", () => {
     y: { label: "F_λ", scale: "log" },
     series: [
       { type: "line", name: `model ${hostile}`, x: [50, 100, 300, 1000, 3000, 20000], y: [1e-9, 1e-8, 3e-7, 1e-6, 2e-7, 1e-9] },
-      { type: "line", name: "dashed", x: [200, 400, 800], y: [1e-7, 2e-7, 1e-7], dashed: true, color: "#123456" },
+      { type: "line", name: "dashed", x: [200, 400, 800], y: [1e-7, 2e-7, 1e-7], dashed: true, colour: "#123456" },
       {
         type: "scatter",
         name: "photometry",
@@ -349,9 +349,9 @@ describe("svgChart: markers and legend", () => {
       x: { min: 0, max: 4 },
       y: { min: 0, max: 4 },
       series: [
-        { type: "scatter", name: "sq", x: [1], y: [1], marker: "square", hollow: true, radius: 4, color: "#111111" },
-        { type: "scatter", name: "di", x: [2], y: [2], marker: "diamond", color: "#222222" },
-        { type: "scatter", name: "da", x: [3], y: [3], marker: "dash", color: "#333333" },
+        { type: "scatter", name: "sq", x: [1], y: [1], marker: "square", hollow: true, radius: 4, colour: "#111111" },
+        { type: "scatter", name: "di", x: [2], y: [2], marker: "diamond", colour: "#222222" },
+        { type: "scatter", name: "da", x: [3], y: [3], marker: "dash", colour: "#333333" },
       ],
     });
     expect(xmlProblems(svg)).toEqual([]);

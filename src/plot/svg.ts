@@ -15,7 +15,7 @@
  *   and explicit tick values and labels;
  * - an optional residual panel under the main one (its own linear y axis,
  *   a zero line, the same x axis), e.g. (measured − model)/σ;
- * - band response curves, normalised to a peak of 1, either against a
+ * - band response curves, normalized to a peak of 1, either against a
  *   secondary 0–1 axis on the right (`bandPlacement: "axis"`) or in a lower
  *   panel sharing the x axis (`"panel"`, range 0–1.1), named in the legend or
  *   by a label above each curve (`bandLabels: "inline"`);
@@ -38,7 +38,7 @@
  * @module
  */
 
-import { escapeXml, markupPlain, px, svgMarkup } from "./xml";
+import { escapeXml, plainTextFromMarkup, px, svgFromMarkup } from "./xml";
 import { MIN_LINEAR_SPAN, linearTicks, logTicks, niceStep } from "./ticks";
 import type { Ticks } from "./ticks";
 
@@ -77,7 +77,7 @@ export interface LineSeries {
   /** y values, one per x; a non-finite point (or one outside a log axis) breaks the line. */
   readonly y: ArrayLike<number>;
   /** Any SVG colour; default from the palette. */
-  readonly color?: string;
+  readonly colour?: string;
   /** Stroke width in px (default 1.5). */
   readonly width?: number;
   /** Draw the line dashed (default false). */
@@ -107,7 +107,7 @@ export interface ScatterSeries {
   /** Horizontal error towards larger x (≥ 0). */
   readonly xErrHigh?: ArrayLike<number>;
   /** Any SVG colour; default from the palette. */
-  readonly color?: string;
+  readonly colour?: string;
   /** Point radius in px (default 3): half the width of the marker. */
   readonly radius?: number;
   /** Marker shape (default `"circle"`); `"dash"` is a short horizontal line. */
@@ -128,7 +128,7 @@ export interface BandCurve {
   /** Response at each x (any scale; negative values are drawn as 0), same length as `x`. */
   readonly response: ArrayLike<number>;
   /** Any SVG colour; default from the palette, after the series colours. */
-  readonly color?: string;
+  readonly colour?: string;
 }
 
 /** A labelled vertical line at `x`, drawn only if `x` is inside the x range. */
@@ -138,7 +138,7 @@ export interface MarkerLine {
   /** Text drawn beside the line, rotated along it (plain text; none when omitted or empty). */
   readonly label?: string;
   /** Any SVG colour (default `"#555555"`). */
-  readonly color?: string;
+  readonly colour?: string;
 }
 
 /** Everything {@link svgChart} needs. Only `title` is required. */
@@ -175,7 +175,7 @@ export interface ChartSpec {
   readonly legendPosition?: "auto" | "top-right" | "top-left" | "bottom-right" | "bottom-left";
 }
 
-/** A panel under the main one with its own linear y axis, e.g. normalised residuals. */
+/** A panel under the main one with its own linear y axis, e.g. normalized residuals. */
 export interface ResidualPanel {
   /** Linear y axis; unset `min`/`max` give a symmetric range ±max(3, largest |value| rounded up). */
   readonly y?: AxisSpec;
@@ -205,7 +205,7 @@ interface Rect {
   readonly h: number;
 }
 
-/** Largest normalised coordinate kept before clipping; keeps arithmetic finite. */
+/** Largest normalized coordinate kept before clipping; keeps arithmetic finite. */
 const LIMIT = 1e6;
 
 /**
@@ -308,8 +308,8 @@ export function svgChart(spec: ChartSpec): string {
   o.push(
     `<svg xmlns="http://www.w3.org/2000/svg" width="${px(width)}" height="${px(height)}" viewBox="0 0 ${px(width)} ${px(height)}" role="img" font-family="Helvetica, Arial, sans-serif" font-size="12">`,
   );
-  o.push(`<title>${escapeXml(markupPlain(spec.title))}</title>`);
-  if (spec.description !== undefined) o.push(`<desc>${escapeXml(markupPlain(spec.description))}</desc>`);
+  o.push(`<title>${escapeXml(plainTextFromMarkup(spec.title))}</title>`);
+  if (spec.description !== undefined) o.push(`<desc>${escapeXml(plainTextFromMarkup(spec.description))}</desc>`);
   o.push(`<rect x="0" y="0" width="${px(width)}" height="${px(height)}" fill="#ffffff"/>`);
 
   // ---- grid and frame
@@ -322,8 +322,8 @@ export function svgChart(spec: ChartSpec): string {
   const bandYScale: Scale = { ...bandScale, ticks: { major: [], minor: [], labels: [] } };
   const inline = spec.bandLabels === "inline";
   bands.forEach((b, i) => {
-    const color = b.color ?? PALETTE[(series.length + i) % PALETTE.length] ?? "#000";
-    drawBand(o, b, color, bandRect, xScale, bandYScale, inline);
+    const colour = b.colour ?? PALETTE[(series.length + i) % PALETTE.length] ?? "#000";
+    drawBand(o, b, colour, bandRect, xScale, bandYScale, inline);
   });
 
   // ---- markers
@@ -332,12 +332,12 @@ export function svgChart(spec: ChartSpec): string {
     const u = norm(m.x, xScale);
     if (!(u >= 0 && u <= 1)) continue;
     const x = main.x + u * main.w;
-    const color = escapeXml(m.color ?? "#555555");
+    const colour = escapeXml(m.colour ?? "#555555");
     const y1 = lowest.y + lowest.h;
-    o.push(`<line x1="${px(x)}" y1="${px(main.y)}" x2="${px(x)}" y2="${px(y1)}" stroke="${color}" stroke-width="1" stroke-dasharray="4 3"/>`);
+    o.push(`<line x1="${px(x)}" y1="${px(main.y)}" x2="${px(x)}" y2="${px(y1)}" stroke="${colour}" stroke-width="1" stroke-dasharray="4 3"/>`);
     if (m.label !== undefined && m.label !== "") {
       o.push(
-        `<text x="${px(x - 3)}" y="${px(main.y + 4)}" transform="rotate(-90 ${px(x - 3)} ${px(main.y + 4)})" text-anchor="end" font-size="10" fill="${color}">${escapeXml(m.label)}</text>`,
+        `<text x="${px(x - 3)}" y="${px(main.y + 4)}" transform="rotate(-90 ${px(x - 3)} ${px(main.y + 4)})" text-anchor="end" font-size="10" fill="${colour}">${escapeXml(m.label)}</text>`,
       );
     }
   }
@@ -345,9 +345,9 @@ export function svgChart(spec: ChartSpec): string {
   // ---- series (the pixel points they cover are collected for the legend placement)
   const covered: number[] = [];
   series.forEach((s, i) => {
-    const color = s.color ?? PALETTE[i % PALETTE.length] ?? "#000";
-    if (s.type === "line") drawLine(o, s, color, main, xScale, yScale, covered);
-    else drawScatter(o, s, color, main, xScale, yScale, covered);
+    const colour = s.colour ?? PALETTE[i % PALETTE.length] ?? "#000";
+    if (s.type === "line") drawLine(o, s, colour, main, xScale, yScale, covered);
+    else drawScatter(o, s, colour, main, xScale, yScale, covered);
   });
   if (residScale !== null) {
     if (resid?.zeroLine ?? true) {
@@ -358,9 +358,9 @@ export function svgChart(spec: ChartSpec): string {
       }
     }
     residSeries.forEach((s, i) => {
-      const color = s.color ?? PALETTE[i % PALETTE.length] ?? "#000";
-      if (s.type === "line") drawLine(o, s, color, residRect, xScale, residScale, []);
-      else drawScatter(o, s, color, residRect, xScale, residScale, []);
+      const colour = s.colour ?? PALETTE[i % PALETTE.length] ?? "#000";
+      if (s.type === "line") drawLine(o, s, colour, residRect, xScale, residScale, []);
+      else drawScatter(o, s, colour, residRect, xScale, residScale, []);
     });
   }
 
@@ -382,7 +382,7 @@ export function svgChart(spec: ChartSpec): string {
   if (bandAxis) drawYAxis(o, main, bandScale, "right", spec.bandLabel ?? "band response");
 
   if (spec.title !== "") {
-    o.push(`<text x="${px(width / 2)}" y="24" text-anchor="middle" font-size="15" font-weight="bold">${svgMarkup(spec.title, 15)}</text>`);
+    o.push(`<text x="${px(width / 2)}" y="24" text-anchor="middle" font-size="15" font-weight="bold">${svgFromMarkup(spec.title, 15)}</text>`);
   }
 
   // ---- legend
@@ -676,7 +676,7 @@ function drawXAxis(o: string[], r: Rect, s: Scale, labels: boolean, title: strin
     });
   }
   if (title !== undefined && title !== "") {
-    o.push(`<text x="${px(r.x + r.w / 2)}" y="${px(base + 40)}" text-anchor="middle" font-size="13">${svgMarkup(title, 13)}</text>`);
+    o.push(`<text x="${px(r.x + r.w / 2)}" y="${px(base + 40)}" text-anchor="middle" font-size="13">${svgFromMarkup(title, 13)}</text>`);
   }
 }
 
@@ -697,7 +697,7 @@ function drawYAxis(o: string[], r: Rect, s: Scale, side: "left" | "right", title
   if (title !== undefined && title !== "") {
     // One rotated line per "\n"-separated part; a title that would not fit the panel's height is drawn smaller.
     const lines = title.split("\n");
-    const longest = Math.max(...lines.map((l) => [...markupPlain(l)].length));
+    const longest = Math.max(...lines.map((l) => [...plainTextFromMarkup(l)].length));
     const size = Math.max(9, Math.min(13, Math.floor(r.h / (0.56 * Math.max(1, longest)))));
     const step = size + 2;
     const y = r.y + r.h / 2;
@@ -705,7 +705,7 @@ function drawYAxis(o: string[], r: Rect, s: Scale, side: "left" | "right", title
       const offset = (k - (lines.length - 1) / 2) * step;
       const x = side === "left" ? r.x - 60 + offset : r.x + r.w + 46 + offset;
       o.push(
-        `<text x="${px(x)}" y="${px(y)}" transform="rotate(-90 ${px(x)} ${px(y)})" text-anchor="middle" font-size="${size}"${faint}>${svgMarkup(line, size)}</text>`,
+        `<text x="${px(x)}" y="${px(y)}" transform="rotate(-90 ${px(x)} ${px(y)})" text-anchor="middle" font-size="${size}"${faint}>${svgFromMarkup(line, size)}</text>`,
       );
     });
   }
@@ -778,7 +778,7 @@ function coverPieces(pieces: readonly number[][], covered: number[]): void {
   }
 }
 
-function drawLine(o: string[], s: LineSeries, color: string, r: Rect, xs: Scale, ys: Scale, covered: number[]): void {
+function drawLine(o: string[], s: LineSeries, colour: string, r: Rect, xs: Scale, ys: Scale, covered: number[]): void {
   const pieces = clippedPieces(s.x, s.y, r, xs, ys);
   const d = pathData(pieces);
   if (d === "") return;
@@ -786,7 +786,7 @@ function drawLine(o: string[], s: LineSeries, color: string, r: Rect, xs: Scale,
   const w = s.width !== undefined && s.width > 0 && Number.isFinite(s.width) ? s.width : 1.5;
   const dash = s.dashed === true ? ' stroke-dasharray="6 4"' : "";
   o.push(
-    `<path d="${d}" fill="none" stroke="${escapeXml(color)}" stroke-width="${px(w)}" stroke-linejoin="round"${dash}><title>${escapeXml(markupPlain(s.name))}</title></path>`,
+    `<path d="${d}" fill="none" stroke="${escapeXml(colour)}" stroke-width="${px(w)}" stroke-linejoin="round"${dash}><title>${escapeXml(plainTextFromMarkup(s.name))}</title></path>`,
   );
 }
 
@@ -811,14 +811,14 @@ function markerShape(shape: MarkerShape, cx: number, cy: number, rad: number, ho
   }
 }
 
-function drawScatter(o: string[], s: ScatterSeries, color: string, r: Rect, xs: Scale, ys: Scale, covered: number[]): void {
+function drawScatter(o: string[], s: ScatterSeries, colour: string, r: Rect, xs: Scale, ys: Scale, covered: number[]): void {
   const rad = s.radius !== undefined && s.radius > 0 && Number.isFinite(s.radius) ? s.radius : 3;
   const shape = s.marker ?? "circle";
   const hollow = s.hollow === true;
   const bars: string[] = [];
   const dots: string[] = [];
   const okErr = (e: number | undefined): e is number => e !== undefined && e >= 0 && Number.isFinite(e);
-  /** Normalised ends of an error bar along one axis; off-axis ends are clipped (and lose their cap). */
+  /** Normalized ends of an error bar along one axis; off-axis ends are clipped (and lose their cap). */
   const ends = (value: number, u: number, eLo: number | undefined, eHi: number | undefined, sc: Scale): { a: number; b: number; capA: boolean; capB: boolean } | null => {
     if (!okErr(eLo) && !okErr(eHi)) return null;
     // "a" is the end at value − eLo, "b" at value + eHi; on a reversed axis a lies above b in u.
@@ -860,14 +860,14 @@ function drawScatter(o: string[], s: ScatterSeries, color: string, r: Rect, xs: 
       bars.push(d);
     }
   }
-  const c = escapeXml(color);
-  o.push(`<g fill="${c}" stroke="${c}"><title>${escapeXml(markupPlain(s.name))}</title>`);
+  const c = escapeXml(colour);
+  o.push(`<g fill="${c}" stroke="${c}"><title>${escapeXml(plainTextFromMarkup(s.name))}</title>`);
   if (bars.length > 0) o.push(`<path d="${bars.join("")}" fill="none" stroke-width="1"/>`);
   o.push(...dots);
   o.push("</g>");
 }
 
-function drawBand(o: string[], b: BandCurve, color: string, r: Rect, xs: Scale, ys: Scale, inlineLabel: boolean): void {
+function drawBand(o: string[], b: BandCurve, colour: string, r: Rect, xs: Scale, ys: Scale, inlineLabel: boolean): void {
   let peak = 0;
   for (let i = 0; i < b.response.length; i++) {
     const v = b.response[i] ?? NaN;
@@ -888,9 +888,9 @@ function drawBand(o: string[], b: BandCurve, color: string, r: Rect, xs: Scale, 
     for (let k = 0; k < p.length; k += 2) fill += `L${px(p[k] ?? 0)} ${px(p[k + 1] ?? 0)}`;
     fill += `L${px(p[p.length - 2] ?? 0)} ${px(base)}Z`;
   }
-  const c = escapeXml(color);
+  const c = escapeXml(colour);
   o.push(
-    `<path d="${fill}" fill="${c}" fill-opacity="0.25" stroke="${c}" stroke-width="1.2"><title>${escapeXml(markupPlain(b.name))}</title></path>`,
+    `<path d="${fill}" fill="${c}" fill-opacity="0.25" stroke="${c}" stroke-width="1.2"><title>${escapeXml(plainTextFromMarkup(b.name))}</title></path>`,
   );
   if (inlineLabel) {
     // Centre of the part at or above half maximum, just above the curve's peak (y = 1).
@@ -905,7 +905,7 @@ function drawBand(o: string[], b: BandCurve, color: string, r: Rect, xs: Scale, 
     if (Number.isNaN(lo)) return;
     const x = r.x + ((lo + hi) / 2) * r.w;
     const y = r.y + (1 - norm(1, ys)) * r.h - 2;
-    o.push(`<text x="${px(x)}" y="${px(y)}" text-anchor="middle" font-size="10" fill="#333333">${svgMarkup(b.name, 10)}</text>`);
+    o.push(`<text x="${px(x)}" y="${px(y)}" text-anchor="middle" font-size="10" fill="#333333">${svgFromMarkup(b.name, 10)}</text>`);
   }
 }
 
@@ -914,14 +914,14 @@ function drawLegend(
   r: Rect,
   series: readonly Series[],
   bands: readonly BandCurve[],
-  bandColorOffset: number,
+  bandColourOffset: number,
   position: NonNullable<ChartSpec["legendPosition"]>,
   covered: readonly number[],
 ): void {
   const names = [...series.map((s) => s.name), ...bands.map((b) => b.name)];
   if (names.length === 0) return;
   const rowH = 16;
-  const longest = Math.max(...names.map((n) => [...markupPlain(n)].length));
+  const longest = Math.max(...names.map((n) => [...plainTextFromMarkup(n)].length));
   const w = Math.min(r.w - 8, 34 + longest * 6.5);
   const h = names.length * rowH + 8;
   const corners = {
@@ -955,11 +955,11 @@ function drawLegend(
   const entry = (swatch: string, name: string): void => {
     const y = y0 + 4 + row * rowH + rowH / 2;
     o.push(swatch.replaceAll("{Y}", px(y)));
-    o.push(`<text x="${px(x0 + 28)}" y="${px(y + 4)}">${svgMarkup(name, 11)}</text>`);
+    o.push(`<text x="${px(x0 + 28)}" y="${px(y + 4)}">${svgFromMarkup(name, 11)}</text>`);
     row++;
   };
   series.forEach((s, i) => {
-    const c = escapeXml(s.color ?? PALETTE[i % PALETTE.length] ?? "#000");
+    const c = escapeXml(s.colour ?? PALETTE[i % PALETTE.length] ?? "#000");
     if (s.type === "line") {
       const dash = s.dashed === true ? ' stroke-dasharray="6 4"' : "";
       entry(`<line x1="${px(x0 + 6)}" y1="{Y}" x2="${px(x0 + 22)}" y2="{Y}" stroke="${c}" stroke-width="2"${dash}/>`, s.name);
@@ -977,7 +977,7 @@ function drawLegend(
     }
   });
   bands.forEach((b, i) => {
-    const c = escapeXml(b.color ?? PALETTE[(bandColorOffset + i) % PALETTE.length] ?? "#000");
+    const c = escapeXml(b.colour ?? PALETTE[(bandColourOffset + i) % PALETTE.length] ?? "#000");
     const y = y0 + 4 + row * rowH + rowH / 2;
     entry(`<rect x="${px(x0 + 6)}" y="${px(y - 5)}" width="16" height="10" fill="${c}" fill-opacity="0.25" stroke="${c}"/>`, b.name);
   });

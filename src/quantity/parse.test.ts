@@ -41,12 +41,37 @@ describe("the compound-unit grammar", () => {
     expect(parseUnit("uas").symbol).toBe("µas");
     expect(parseUnit("min").factor).toBe(60); // exact symbol beats milli-inch
     expect(parseUnit("R☉").factor).toBe(6.957e8);
-    expect(parseUnit("Rsol").factor).toBe(6.957e8);
+    expect(parseUnit("Rsun").factor).toBe(6.957e8);
     expect(parseUnit("cm^-1").factor).toBe(100);
     // prefixed units are named with the prefix's name (SI Brochure)
     expect(parseUnit("mK").name).toBe("millikelvin");
     expect(parseUnit("kN").name).toBe("kilonewton");
     expect(parseUnit("uJy").name).toBe("microjansky");
+  });
+  // docs/naming.md §2: one key per body (Rsun, REarth, MJupiter, …); the
+  // 0.1 spellings (Rsol, Rterra, Mjove, …) still read and are never printed.
+  const bodies = [
+    ["Rsun", "Rsol", "R☉"], // legacy
+    ["Lsun", "Lsol", "L☉"], // legacy
+    ["Msun", "Msol", "M☉"], // legacy
+    ["REarth", "Rterra", "R⊕"], // legacy
+    ["MEarth", "Mterra", "M⊕"], // legacy
+    ["RJupiter", "Rjove", "RJ"], // legacy
+    ["MJupiter", "Mjove", "MJ"], // legacy
+  ] as const;
+  test.each(bodies)("units.%s and its legacy spelling %s parse to the same unit, printed %s", (key, legacy, symbol) => {
+    const unit = units[key];
+    expect(unit.symbol).toBe(symbol);
+    for (const text of [key, legacy, symbol]) {
+      const parsed = parseUnit(text);
+      expect(parsed.factor, text).toBe(unit.factor);
+      expect(parsed.symbol, text).toBe(symbol);
+      expect(describeDimension(parsed.dimension), text).toBe(describeDimension(unit.dimension));
+    }
+    expect(parseQuantityText(`2 ${legacy}`).unit.symbol).toBe(symbol);
+  });
+  test("the legacy spellings are not keys of units", () => {
+    for (const [, legacy] of bodies) expect(Object.keys(units)).not.toContain(legacy);
   });
   test("an empty unit is a pure number", () => {
     expect(parseQuantityText("  2.5 ").value).toBe(2.5);

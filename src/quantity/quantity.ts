@@ -29,7 +29,7 @@ export type TagFor<D extends Dimension, S extends SystemTag> = IsSystemFree<D> e
  * A physical quantity of dimension `D` expressed in the coherent base units of
  * system `S` (SI: m, kg, s; CGS: cm, g, s). A plain number at run time.
  *
- * The system argument is normalised: for a system-free dimension (no length,
+ * The system argument is normalized: for a system-free dimension (no length,
  * no mass) `Quantity<D, "SI">` and `Quantity<D, "CGS">` are the same type.
  * (`S` may also be the tag `"SI=CGS"`, which only system-free dimensions
  * should use; library code builds it from computed dimensions.)

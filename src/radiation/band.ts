@@ -349,7 +349,7 @@ export function blackbodyPhotonFractionBetweenWavelengths<S extends SystemName>(
  * @example
  * ```ts
  * import { SI, blackbodyPhotonFractionAboveFrequency, units } from "starlume";
- * // hydrogen-ionising share of the photons of a 40 000 K blackbody
+ * // hydrogen-ionizing share of the photons of a 40 000 K blackbody
  * blackbodyPhotonFractionAboveFrequency(SI, SI.of(3288, units.THz), SI.of(40000, units.K));
  * ```
  */

@@ -19,7 +19,7 @@ import * as band from "./band";
 import * as brightness from "./brightness-temperature";
 import * as planck from "./planck";
 import * as sb from "./stefan-boltzmann";
-import * as wien from "./wien";
+import * as displacement from "./displacement";
 
 const logUniform = (lo: number, hi: number) =>
   fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true }).map((u) => Math.exp(u));
@@ -92,18 +92,18 @@ const cases: Case[] = [
     toCGS: 0,
   },
   // Wien peaks: m → cm ×10²; Hz unchanged; m⁻¹ → cm⁻¹ ÷10²; temperatures unchanged
-  { name: "wienPeakWavelength", f: f(wien.wienPeakWavelength), args: [wideTempK], toCGS: 2 },
-  { name: "wienPeakFrequency", f: f(wien.wienPeakFrequency), args: [wideTempK], toCGS: 0 },
-  { name: "wienPeakWavenumber", f: f(wien.wienPeakWavenumber), args: [wideTempK], toCGS: -2 },
-  { name: "wienPhotonPeakWavelength", f: f(wien.wienPhotonPeakWavelength), args: [wideTempK], toCGS: 2 },
-  { name: "wienPhotonPeakFrequency", f: f(wien.wienPhotonPeakFrequency), args: [wideTempK], toCGS: 0 },
-  { name: "wienPhotonPeakWavenumber", f: f(wien.wienPhotonPeakWavenumber), args: [wideTempK], toCGS: -2 },
-  { name: "temperatureFromPeakWavelength", f: f(wien.temperatureFromPeakWavelength), args: [lambdaCm], toCGS: 0 },
-  { name: "temperatureFromPeakFrequency", f: f(wien.temperatureFromPeakFrequency), args: [nuHz], toCGS: 0 },
-  { name: "temperatureFromPeakWavenumber", f: f(wien.temperatureFromPeakWavenumber), args: [sigmaPerCm], toCGS: 0 },
-  { name: "temperatureFromPhotonPeakWavelength", f: f(wien.temperatureFromPhotonPeakWavelength), args: [lambdaCm], toCGS: 0 },
-  { name: "temperatureFromPhotonPeakFrequency", f: f(wien.temperatureFromPhotonPeakFrequency), args: [nuHz], toCGS: 0 },
-  { name: "temperatureFromPhotonPeakWavenumber", f: f(wien.temperatureFromPhotonPeakWavenumber), args: [sigmaPerCm], toCGS: 0 },
+  { name: "peakWavelength", f: f(displacement.peakWavelength), args: [wideTempK], toCGS: 2 },
+  { name: "peakFrequency", f: f(displacement.peakFrequency), args: [wideTempK], toCGS: 0 },
+  { name: "peakWavenumber", f: f(displacement.peakWavenumber), args: [wideTempK], toCGS: -2 },
+  { name: "photonPeakWavelength", f: f(displacement.photonPeakWavelength), args: [wideTempK], toCGS: 2 },
+  { name: "photonPeakFrequency", f: f(displacement.photonPeakFrequency), args: [wideTempK], toCGS: 0 },
+  { name: "photonPeakWavenumber", f: f(displacement.photonPeakWavenumber), args: [wideTempK], toCGS: -2 },
+  { name: "temperatureFromPeakWavelength", f: f(displacement.temperatureFromPeakWavelength), args: [lambdaCm], toCGS: 0 },
+  { name: "temperatureFromPeakFrequency", f: f(displacement.temperatureFromPeakFrequency), args: [nuHz], toCGS: 0 },
+  { name: "temperatureFromPeakWavenumber", f: f(displacement.temperatureFromPeakWavenumber), args: [sigmaPerCm], toCGS: 0 },
+  { name: "temperatureFromPhotonPeakWavelength", f: f(displacement.temperatureFromPhotonPeakWavelength), args: [lambdaCm], toCGS: 0 },
+  { name: "temperatureFromPhotonPeakFrequency", f: f(displacement.temperatureFromPhotonPeakFrequency), args: [nuHz], toCGS: 0 },
+  { name: "temperatureFromPhotonPeakWavenumber", f: f(displacement.temperatureFromPhotonPeakWavenumber), args: [sigmaPerCm], toCGS: 0 },
   // W m⁻² = 10⁷ erg s⁻¹ / 10⁴ cm² → ×10³; W → erg s⁻¹ ×10⁷; photons m⁻² → cm⁻² ÷10⁴; photons s⁻¹ unchanged
   { name: "stefanBoltzmannExitance", f: f(sb.stefanBoltzmannExitance), args: [wideTempK], toCGS: 3 },
   { name: "temperatureFromExitance", f: f(sb.temperatureFromExitance), args: [exitanceCgs], toCGS: 0 },
@@ -156,7 +156,7 @@ const cases: Case[] = [
 
 describe("a typed law in CGS is its SI result × an exact power of ten", () => {
   it("the table covers every scalar law of the four modules (none forgotten)", () => {
-    const exported = [planck, approximations, wien, sb, band, brightness]
+    const exported = [planck, approximations, displacement, sb, band, brightness]
       .flatMap((m) => Object.entries(m))
       .filter(([name, v]) => typeof v === "function" && !name.endsWith("Batch") && !name.startsWith("lambertian"))
       .map(([name]) => name)

@@ -10,7 +10,7 @@
  */
 export * from "./planck";
 export * from "./approximations";
-export * from "./wien";
+export * from "./displacement";
 export * from "./stefan-boltzmann";
 export * from "./band";
 export * from "./response";

@@ -14,7 +14,6 @@ import {
   planckPhotonRadianceWavenumber,
   planckRadianceFrequency,
   planckRadianceFrequencyDerivativeT,
-  planckRadianceTemperatureBatch,
   planckRadianceWavelength,
   planckRadianceWavelengthBatch,
   planckRadianceWavelengthDerivativeT,
@@ -155,13 +154,23 @@ describe("batch forms", () => {
 
   it("temperature batch: SI equals the kernel; CGS is ×10; invalid temperatures reported", () => {
     const ts = temps([3000, -5, 5772, NaN, 1e4]);
-    const si = planckRadianceTemperatureBatch(SI, SI.of(2.2, units.um), ts);
+    const si = planckRadianceWavelengthBatch(SI, SI.of(2.2, units.um), ts);
     const k = K.planckRadianceTemperatureBatchSI(2.2e-6, ts);
     expect(si.invalid).toEqual([1, 3]);
     expect(Array.from(si.values)).toEqual(Array.from(k.values));
-    const cg = planckRadianceTemperatureBatch(CGS, cm(2.2e-4), ts);
+    const cg = planckRadianceWavelengthBatch(CGS, cm(2.2e-4), ts);
     expect(cg.invalid).toEqual([1, 3]);
     for (const i of [0, 2, 4]) expect(cg.values[i]).toBe(K.planckRadianceWavelengthSI(2.2e-4 / 100, ts[i] as number) * 10);
+  });
+
+  it("wavelengths and temperatures both arrays: row i is the scalar B_λ(λ_i, T_i); unequal lengths throw before any row", () => {
+    const grid = SI.arrayOf([400, 500, -1, 2200], units.nm);
+    const ts = temps([3000, 5772, 5772, NaN]);
+    const r = planckRadianceWavelengthBatch(SI, grid, ts);
+    expect(r.invalid).toEqual([2, 3]);
+    expect(r.reasons).toEqual(["wavelength must be a finite number > 0 m; got -1e-9", "temperature must be a finite number > 0 K; got NaN"]);
+    for (const i of [0, 1]) expect(r.values[i]).toBe(planckRadianceWavelength(SI, SI.of(grid[i] as number, units.m), T(ts[i] as number)));
+    expect(() => planckRadianceWavelengthBatch(SI, grid, temps([3000, 5772]))).toThrow(/must have the same length/);
   });
 
   it("reasons: each invalid row's reason is the sentence its scalar call throws, in the caller's unit", () => {
@@ -189,7 +198,7 @@ describe("batch forms", () => {
       expect(() => planckRadianceWavelength(CGS, cm(cgsGrid[i] as number), T(t))).toThrow(cg.reasons[k] as string);
     });
     // temperature rows
-    const tb = planckRadianceTemperatureBatch(CGS, cm(5e-5), temps([5772, -3, 0]));
+    const tb = planckRadianceWavelengthBatch(CGS, cm(5e-5), temps([5772, -3, 0]));
     expect(tb.invalid).toEqual([1, 2]);
     expect(tb.reasons).toEqual(["temperature must be a finite number > 0 K; got -3", "temperature must be a finite number > 0 K; got 0"]);
     // no invalid rows: both lists empty
@@ -202,7 +211,7 @@ describe("batch forms", () => {
     expect(() => planckRadianceWavelengthBatch(CGS, assumeArray<LengthArray<"CGS">>(new Float64Array(3)), T(-1))).toThrow(
       "temperature must be a finite number > 0 K; got -1",
     );
-    expect(() => planckRadianceTemperatureBatch(CGS, cm(-2), temps([1]))).toThrow("wavelength must be a finite number > 0 cm; got -2");
+    expect(() => planckRadianceWavelengthBatch(CGS, cm(-2), temps([1]))).toThrow("wavelength must be a finite number > 0 cm; got -2");
   });
 });
 

@@ -314,49 +314,36 @@ export function planckRadianceFrequencyDerivativeT<S extends SystemName>(
 
 
 /**
- * B_λ over many wavelengths at one temperature. Never throws part-way: a row
- * whose wavelength is not finite and > 0 is written as NaN and listed in
- * `invalid`. In SI the loop runs on the caller's array directly; in CGS the
- * wavelengths are first copied to SI.
+ * B_λ over many rows: the batch form of {@link planckRadianceWavelength},
+ * with the same parameters in the same order. The wavelength, the
+ * temperature or both may be typed arrays; arrays must have equal lengths, and
+ * a single value is shared by every row (two single values give one row).
+ * Never throws part-way: a row whose wavelength or temperature is not finite
+ * and > 0 is written as NaN and listed in `invalid`, with the sentence the
+ * scalar form would throw in `reasons`. A bad shared value or mismatched
+ * lengths throw before any row is written. In SI the loop runs on the
+ * caller's arrays directly; in CGS the wavelengths are first copied to SI.
  *
  * @param sys - `SI` or `CGS`
- * @param wavelengths - wavelengths, in `sys`
- * @param temperature - temperature (finite, > 0; a bad value throws before any row is written)
+ * @param wavelength - wavelength or wavelengths (vacuum), in `sys`
+ * @param temperature - temperature or temperatures
  * @example
  * ```ts
- * import { SI, planckRadianceWavelengthBatch, units } from "starlume";
+ * import { SI, assumeArray, planckRadianceWavelengthBatch, units, type TemperatureArray } from "starlume";
+ * // many wavelengths, one temperature
  * const grid = SI.arrayOf([400, 500, 600, -1], units.nm);
  * const { values, invalid } = planckRadianceWavelengthBatch(SI, grid, SI.of(5772, units.K)); // invalid = [3]
+ * // one wavelength, many temperatures
+ * const temps = assumeArray<TemperatureArray>(new Float64Array([3000, 5772, 10000]));
+ * const k = planckRadianceWavelengthBatch(SI, SI.of(2.2, units.um), temps).values;
  * ```
  */
 export function planckRadianceWavelengthBatch<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelengths: NotAirWavelengthArray<NoInfer<S>>,
-  temperature: Temperature,
+  wavelength: NotAirWavelength<NoInfer<S>> | NotAirWavelengthArray<NoInfer<S>>,
+  temperature: Temperature | TemperatureArray,
 ): BatchResult<SpectralRadiancePerWavelengthArray<S>> {
-  return bLambda.batch(sys, wavelengths, temperature);
-}
-
-/**
- * B_λ at one wavelength over many temperatures (a row whose temperature is
- * not finite and > 0 becomes NaN and is listed in `invalid`).
- *
- * @param sys - `SI` or `CGS`
- * @param wavelength - wavelength in `sys` (finite, > 0; a bad value throws before any row is written)
- * @param temperatures - temperatures
- * @example
- * ```ts
- * import { SI, assumeArray, planckRadianceTemperatureBatch, units, type TemperatureArray } from "starlume";
- * const temps = assumeArray<TemperatureArray>(new Float64Array([3000, 5772, 10000]));
- * const { values } = planckRadianceTemperatureBatch(SI, SI.of(2.2, units.um), temps);
- * ```
- */
-export function planckRadianceTemperatureBatch<S extends SystemName>(
-  sys: UnitSystem<S>,
-  wavelength: NotAirWavelength<NoInfer<S>>,
-  temperatures: TemperatureArray,
-): BatchResult<SpectralRadiancePerWavelengthArray<S>> {
-  return bLambda.batch(sys, wavelength, temperatures);
+  return bLambda.batch(sys, wavelength, temperature);
 }
 
 /** A quantity whose dimension is "per steradian" (solid-angle exponent −1). */

@@ -30,7 +30,7 @@ const rel = (a: number, b: number): number => Math.abs(a / b - 1);
 const presets = [ions.H, ions.D, ions.HeII, ions.hydrogenInfiniteMass];
 
 describe("typed = kernel (SI); CGS = SI × 10^k exactly", () => {
-  it("level energies and ionisation energies in SI are the kernel's numbers", () => {
+  it("level energies and ionization energies in SI are the kernel's numbers", () => {
     for (const i of presets) {
       for (let n = 1; n <= 6; n++) {
         expect(bohrLevelEnergy(SI, i, n)).toBe(bohrLevelEnergySI(n, i.z, i.nuclearMassKg));
@@ -56,7 +56,7 @@ describe("typed = kernel (SI); CGS = SI × 10^k exactly", () => {
   });
 });
 
-describe("ionisation energies against NIST (from memory (NIST ASD))", () => {
+describe("ionization energies against NIST (from memory (NIST ASD))", () => {
   it("¹H 1s: 13.598 434 eV", () => {
     // Bohr omits the Dirac binding correction α²/4 = 1.33e-5 (and the Lamb shift 2.5e-6):
     // tolerance 2e-5. Dirac omits the 1s Lamb shift (8.17 GHz = 3.4e-5 eV, 2.5e-6 relative):

@@ -13,7 +13,7 @@
  *   Omits the Lamb shift (QED; 2.5 × 10⁻⁶ relative for H 1s), hyperfine
  *   structure, finite nuclear size and higher-order recoil.
  *
- * Energies are measured from the ionisation limit (negative for bound
+ * Energies are measured from the ionization limit (negative for bound
  * levels). Constants: CODATA 2018. Accuracy against 50-digit mpmath: ≤ 4e-15
  * (Bohr) and ≤ 1e-14 (Dirac) relative (kernels/hydrogen-like.test.ts).
  *
@@ -220,7 +220,7 @@ export function reducedMass<S extends SystemName>(sys: UnitSystem<S>, ionValue: 
 
 /**
  * Bohr (Rydberg) energy of level n with the reduced-mass correction,
- * E_n = −h c R∞ Z² (μ/m_e) / n² (negative: from the ionisation limit).
+ * E_n = −h c R∞ Z² (μ/m_e) / n² (negative: from the ionization limit).
  *
  * @param sys - `SI` (J) or `CGS` (erg)
  * @param ionValue - the ion
@@ -283,7 +283,7 @@ export function diracLevelCentroidEnergy<S extends SystemName>(sys: UnitSystem<S
   return diracCentroid(sys, n, i.z, i.nuclearMassKg);
 }
 
-/** The level model of the line and ionisation functions. */
+/** The level model of the line and ionization functions. */
 export type LevelModel = "bohr" | "dirac-centroid";
 
 /** Options of the level-model–dependent functions. */
@@ -298,7 +298,7 @@ export interface LevelModelOptions {
 }
 
 /**
- * Ionisation energy from level n (positive): I_n = h c R∞ Z² (μ/m_e) / n²
+ * Ionization energy from level n (positive): I_n = h c R∞ Z² (μ/m_e) / n²
  * in the Bohr model, or −Ē_n (the Dirac shell centroid, which for n = 1 is
  * the 1s½ level) with `{ model: "dirac-centroid" }`.
  *

@@ -15,7 +15,7 @@ import { planckRadianceWavelengthBatch } from "../radiation/planck";
 import { equivalentWidthSI, lineCentroidSI, lineDepthSI } from "./kernels/measure";
 import { equivalentWidthFromTau0SI, synthesizeSpectrumSI, tau0FromEquivalentWidthSI } from "./kernels/synthesize";
 import { equivalentWidth, lineCentroid, lineDepth } from "./measure";
-import { airWavelength, airWavelengths, vacuumWavelength } from "./medium";
+import { airWavelength, airWavelengthArray, vacuumWavelength } from "./medium";
 import {
   equivalentWidthFromTau0,
   synthesizePlanckSpectrum,
@@ -41,8 +41,8 @@ describe("synthesis: typed = kernel (SI)", () => {
     const g = gridOf(656e-9, 1e-12, n);
     const cont = new Float64Array(n).map((_, i) => 1e13 * (1 + 1e-4 * i));
     const kernelLines = [
-      { centerM: 656.5e-9, dopplerWidthM: 3e-11, lorentzHwhmM: 1e-12, tau0: 2 },
-      { centerM: 657.2e-9, gaussianSigmaM: 2e-11, lorentzHwhmM: 0, equivalentWidthM: 1e-12 },
+      { centreM: 656.5e-9, dopplerWidthM: 3e-11, lorentzHwhmM: 1e-12, tau0: 2 },
+      { centreM: 657.2e-9, gaussianSigmaM: 2e-11, lorentzHwhmM: 0, equivalentWidthM: 1e-12 },
     ];
     const ref = new Float64Array(n);
     const r = synthesizeSpectrumSI(g, cont, kernelLines, ref);
@@ -51,8 +51,8 @@ describe("synthesis: typed = kernel (SI)", () => {
       assumeArray<LengthArray<"SI">>(g),
       assumeArray<SpectralFluxPerWavelengthArray<"SI">>(cont),
       [
-        { center: lenSI(656.5e-9), dopplerWidth: lenSI(3e-11), lorentzHwhm: lenSI(1e-12), tau0: 2 },
-        { center: lenSI(657.2e-9), gaussianSigma: lenSI(2e-11), equivalentWidth: lenSI(1e-12) },
+        { centre: lenSI(656.5e-9), dopplerWidth: lenSI(3e-11), lorentzHwhm: lenSI(1e-12), tau0: 2 },
+        { centre: lenSI(657.2e-9), gaussianSigma: lenSI(2e-11), equivalentWidth: lenSI(1e-12) },
       ],
     );
     expect(Array.from(typed.flux)).toEqual(Array.from(ref));
@@ -80,10 +80,10 @@ describe("synthesis in CGS", () => {
     const cSI = new Float64Array(n).fill(2.5e13); // W m⁻² m⁻¹
     const cCGS = new Float64Array(n).fill(times10(2.5e13, -1)); // erg s⁻¹ cm⁻² cm⁻¹ = 10⁻¹ W m⁻² m⁻¹
     const si = synthesizeSpectrum(SI, assumeArray<LengthArray<"SI">>(gSI), assumeArray<SpectralFluxPerWavelengthArray<"SI">>(cSI), [
-      { center: lenSI(501e-9), dopplerWidth: lenSI(5e-12), lorentzHwhm: lenSI(5e-14), equivalentWidth: lenSI(4e-12) },
+      { centre: lenSI(501e-9), dopplerWidth: lenSI(5e-12), lorentzHwhm: lenSI(5e-14), equivalentWidth: lenSI(4e-12) },
     ]);
     const cgs = synthesizeSpectrum(CGS, assumeArray<LengthArray<"CGS">>(gCGS), assumeArray<SpectralFluxPerWavelengthArray<"CGS">>(cCGS), [
-      { center: lenCGS(501e-7), dopplerWidth: lenCGS(5e-10), lorentzHwhm: lenCGS(5e-12), equivalentWidth: lenCGS(4e-10) },
+      { centre: lenCGS(501e-7), dopplerWidth: lenCGS(5e-10), lorentzHwhm: lenCGS(5e-12), equivalentWidth: lenCGS(4e-10) },
     ]);
     // Each length is rounded once more on the CGS path (cm → m); that moves u = Δλ/b by
     // ~1e-16·λ/b ≈ 1e-11 at most, which changes τ by ≤ |dτ/du|·1e-11 and the flux ratio by
@@ -103,12 +103,12 @@ describe("synthesis in CGS", () => {
           const b = 2e-10; // cm (0.02 Å)
           const n = 40001;
           const step = b / 8;
-          const grid = airWavelengths(CGS, assumeArray<LengthArray<"CGS">>(gridOf(5e-5 - 20000 * step, step, n)));
+          const grid = airWavelengthArray(CGS, assumeArray<LengthArray<"CGS">>(gridOf(5e-5 - 20000 * step, step, n)));
           const cont = assumeArray<DimensionlessArray>(new Float64Array(n).fill(1));
-          const center = airWavelength(CGS, lenCGS(5e-5 + shift * step));
+          const centre = airWavelength(CGS, lenCGS(5e-5 + shift * step));
           const W = wOverB * b;
           const tauCutoff = 1e-13;
-          const line: SynthesisLine<"CGS", "air"> = { center, dopplerWidth: lenCGS(b), lorentzHwhm: lenCGS(a * b), equivalentWidth: lenCGS(W) };
+          const line: SynthesisLine<"CGS", "air"> = { centre, dopplerWidth: lenCGS(b), lorentzHwhm: lenCGS(a * b), equivalentWidth: lenCGS(W) };
           const { flux, tau0 } = synthesizeSpectrum(CGS, grid, cont, [line], { tauCutoff });
           const lo = airWavelength(CGS, lenCGS(grid[0] as number));
           const hi = airWavelength(CGS, lenCGS(grid[n - 1] as number));
@@ -151,16 +151,16 @@ describe("Planck continuum", () => {
     const n = 2001;
     const step = 0.001; // nm
     const g = SI.arrayOf(Array.from({ length: n }, (_, i) => -0.5 + 655.5 + i * step), units.nm);
-    const centerIndex = 1000;
-    const center = vacuumWavelength(SI, lenSI(g[centerIndex] as number));
-    const r = synthesizePlanckSpectrum(SI, g, assume<Temperature>(9500), [{ center, dopplerWidth: SI.of(0.03, units.nm), tau0: 0.8 }]);
+    const centreIndex = 1000;
+    const centre = vacuumWavelength(SI, lenSI(g[centreIndex] as number));
+    const r = synthesizePlanckSpectrum(SI, g, assume<Temperature>(9500), [{ centre, dopplerWidth: SI.of(0.03, units.nm), tau0: 0.8 }]);
     const lo = SI.of(655.7, units.nm);
     const hi = SI.of(656.3, units.nm);
     // F/F_c at the centre is exp(−τ₀) to rounding (≤ 4 ulp)
     expect(rel(lineDepth(SI, g, r.flux, r.continuum, lo, hi), 1 - Math.exp(-0.8))).toBeLessThan(1e-14);
     // symmetric line on a uniform grid, window symmetric about the centre (±300 steps = ±10 b):
     // the centroid is the centre to rounding of the window sums (≪ 1e-6 of a step)
-    expect(Math.abs(lineCentroid(SI, g, r.flux, r.continuum, lo, hi) - center)).toBeLessThan(1e-6 * step * 1e-9);
+    expect(Math.abs(lineCentroid(SI, g, r.flux, r.continuum, lo, hi) - centre)).toBeLessThan(1e-6 * step * 1e-9);
     // a grid starting at a negative wavelength: B_λ is NaN there and those rows are reported
     const g2 = assumeArray<LengthArray<"SI">>(Float64Array.of(-1e-9, 0, 1e-7, 2e-7));
     const r2 = synthesizePlanckSpectrum(SI, g2, assume<Temperature>(5000), []);
@@ -202,14 +202,14 @@ describe("bad input: RangeError naming the parameter and the caller's unit", () 
   const c = assumeArray<DimensionlessArray>(new Float64Array(10).fill(1));
   it("synthesis lines", () => {
     const bad = (line: unknown) => () => synthesizeSpectrum(CGS, g, c, [line as SynthesisLine<"CGS">]);
-    expect(bad({ center: lenCGS(1e-4), tau0: 1 })).toThrow(/^lines\[0\] must give exactly one of dopplerWidth or gaussianSigma \(cm\)$/);
-    expect(bad({ center: lenCGS(1e-4), dopplerWidth: lenCGS(1e-10), gaussianSigma: lenCGS(1e-10), tau0: 1 })).toThrow(/exactly one of dopplerWidth/);
-    expect(bad({ center: lenCGS(1e-4), dopplerWidth: lenCGS(1e-10) })).toThrow(/^lines\[0\] must give exactly one of tau0 or equivalentWidth$/);
-    expect(bad({ center: lenCGS(-1), dopplerWidth: lenCGS(1e-10), tau0: 1 })).toThrow(/^lines\[0\]\.center must be a finite number > 0 cm; got -1$/);
-    expect(bad({ center: lenCGS(1e-4), dopplerWidth: lenCGS(0), tau0: 1 })).toThrow(/^lines\[0\]\.dopplerWidth must be a finite number > 0 cm/);
-    expect(bad({ center: lenCGS(1e-4), dopplerWidth: lenCGS(1), lorentzHwhm: lenCGS(-1), tau0: 1 })).toThrow(/^lines\[0\]\.lorentzHwhm must be a finite number >= 0 cm/);
-    expect(bad({ center: lenCGS(1e-4), dopplerWidth: lenCGS(1), tau0: -1 })).toThrow(/^lines\[0\]\.tau0 must/);
-    expect(bad({ center: lenCGS(1e-4), dopplerWidth: lenCGS(1), equivalentWidth: lenCGS(Number.NaN) })).toThrow(/^lines\[0\]\.equivalentWidth must be a finite number >= 0 cm/);
+    expect(bad({ centre: lenCGS(1e-4), tau0: 1 })).toThrow(/^lines\[0\] must give exactly one of dopplerWidth or gaussianSigma \(cm\)$/);
+    expect(bad({ centre: lenCGS(1e-4), dopplerWidth: lenCGS(1e-10), gaussianSigma: lenCGS(1e-10), tau0: 1 })).toThrow(/exactly one of dopplerWidth/);
+    expect(bad({ centre: lenCGS(1e-4), dopplerWidth: lenCGS(1e-10) })).toThrow(/^lines\[0\] must give exactly one of tau0 or equivalentWidth$/);
+    expect(bad({ centre: lenCGS(-1), dopplerWidth: lenCGS(1e-10), tau0: 1 })).toThrow(/^lines\[0\]\.centre must be a finite number > 0 cm; got -1$/);
+    expect(bad({ centre: lenCGS(1e-4), dopplerWidth: lenCGS(0), tau0: 1 })).toThrow(/^lines\[0\]\.dopplerWidth must be a finite number > 0 cm/);
+    expect(bad({ centre: lenCGS(1e-4), dopplerWidth: lenCGS(1), lorentzHwhm: lenCGS(-1), tau0: 1 })).toThrow(/^lines\[0\]\.lorentzHwhm must be a finite number >= 0 cm/);
+    expect(bad({ centre: lenCGS(1e-4), dopplerWidth: lenCGS(1), tau0: -1 })).toThrow(/^lines\[0\]\.tau0 must/);
+    expect(bad({ centre: lenCGS(1e-4), dopplerWidth: lenCGS(1), equivalentWidth: lenCGS(Number.NaN) })).toThrow(/^lines\[0\]\.equivalentWidth must be a finite number >= 0 cm/);
   });
   it("grid, continuum, options", () => {
     const rev = assumeArray<LengthArray<"CGS">>(gridOf(1e-4, 1e-10, 10).reverse());
@@ -251,7 +251,7 @@ describe("batch reasons and messages in the caller's unit", () => {
   it("CGS messages for lines, options and measurements", () => {
     const g = assumeArray<LengthArray<"CGS">>(gridOf(1e-4, 1e-10, 10));
     const c = assumeArray<DimensionlessArray>(new Float64Array(10).fill(1));
-    const line = { center: lenCGS(1e-4), dopplerWidth: lenCGS(1e-10), tau0: -1 } as SynthesisLine<"CGS">;
+    const line = { centre: lenCGS(1e-4), dopplerWidth: lenCGS(1e-10), tau0: -1 } as SynthesisLine<"CGS">;
     expect(() => synthesizeSpectrum(CGS, g, c, [line])).toThrow(/^lines\[0\]\.tau0 must be a finite number >= 0; got -1$/);
     expect(() => synthesizeSpectrum(CGS, g, c, [], { tauCutoff: 0 })).toThrow(/^options\.tauCutoff must be a finite number > 0; got 0$/);
     expect(() => equivalentWidthFromTau0(CGS, 1, lenCGS(1), lenCGS(-2))).toThrow(/^lorentzHwhm must be a finite number >= 0 cm; got -2$/);

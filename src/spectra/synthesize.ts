@@ -12,7 +12,7 @@
  *
  * The continuum is any array quantity in the system — a spectral flux or
  * radiance per wavelength, photon or energy, or a `DimensionlessArray` for
- * a normalised spectrum — and the flux comes back with the same type.
+ * a normalized spectrum — and the flux comes back with the same type.
  * {@link synthesizePlanckSpectrum} builds a blackbody continuum B_λ(T) with
  * the radiation module's `planckRadianceWavelengthBatch`.
  *
@@ -98,7 +98,7 @@ export type SynthesisLineStrength<S extends SystemName> =
  */
 export type SynthesisLine<S extends SystemName, M extends Medium = "vacuum"> = {
   /** Line-centre wavelength (> 0). */
-  readonly center: MaybeInMedium<S, M>;
+  readonly centre: MaybeInMedium<S, M>;
   /** Lorentz half-width at half-maximum γ (≥ 0; default 0). */
   readonly lorentzHwhm?: Length<S>;
 } & SynthesisLineWidth<S> &
@@ -147,7 +147,7 @@ export function gridToSI(sys: UnitSystem<SystemName>, grid: Float64Array): Float
 }
 
 // The fields of a line, checked one by one (a message names `lines[i].<field>`).
-const center = lawInput("center", kinds.length);
+const centre = lawInput("centre", kinds.length);
 const dopplerWidthField = lawInput("dopplerWidth", kinds.length);
 const gaussianSigmaField = lawInput("gaussianSigma", kinds.length);
 const lorentzHwhmField = lawInput("lorentzHwhm", kinds.length, { check: "nonNegative" });
@@ -192,14 +192,14 @@ function fieldToSI(sys: UnitSystem<SystemName>, i: number, field: LawInput, valu
 function resolveLines(sys: UnitSystem<SystemName>, lines: readonly SynthesisLine<SystemName, Medium>[]): ResolvedLinesSI {
   const nl = lines.length;
   const out: ResolvedLinesSI = {
-    centerM: new Float64Array(nl),
+    centreM: new Float64Array(nl),
     dopplerWidthM: new Float64Array(nl),
     lorentzHwhmM: new Float64Array(nl),
     tau0: new Float64Array(nl),
   };
   for (let i = 0; i < nl; i++) {
     const line = lines[i] as SynthesisLine<SystemName, Medium>;
-    out.centerM[i] = fieldToSI(sys, i, center, line.center);
+    out.centreM[i] = fieldToSI(sys, i, centre, line.centre);
     const hasB = line.dopplerWidth !== undefined;
     if (hasB === (line.gaussianSigma !== undefined)) {
       throw new RangeError(`lines[${i}] must give exactly one of dopplerWidth or gaussianSigma (${sys.coherentUnit(kinds.length.dimension)})`);
@@ -260,7 +260,7 @@ function synthesizeOnGrid(
  * const grid = SI.arrayOf(Array.from({ length: 2001 }, (_, i) => 656.0 + i * 0.0005), units.nm);
  * const continuum = assumeArray<SpectralFluxPerWavelengthArray<"SI">>(new Float64Array(2001).fill(1e-3));
  * const { flux } = synthesizeSpectrum(SI, grid, continuum, [
- *   { center: vacuumWavelength(SI, SI.of(656.46, units.nm)), dopplerWidth: SI.of(0.03, units.nm), equivalentWidth: SI.of(0.01, units.nm) },
+ *   { centre: vacuumWavelength(SI, SI.of(656.46, units.nm)), dopplerWidth: SI.of(0.03, units.nm), equivalentWidth: SI.of(0.01, units.nm) },
  * ]); // SpectralFluxPerWavelengthArray<"SI">
  * ```
  */
@@ -301,7 +301,7 @@ export interface PlanckSynthesisResult<S extends SystemName> extends SynthesisRe
  * const grid = CGS.arrayOf(Array.from({ length: 4001 }, (_, i) => 6554 + i * 0.005), units.angstrom);
  * const ha = transitionVacuumWavelength(CGS, ions.H, 2, 3, { model: "dirac-centroid" });
  * const { flux, continuum } = synthesizePlanckSpectrum(CGS, grid, CGS.of(9500, units.K), [
- *   { center: ha, dopplerWidth: CGS.of(0.3, units.angstrom), lorentzHwhm: CGS.of(0.5, units.angstrom), tau0: 3 },
+ *   { centre: ha, dopplerWidth: CGS.of(0.3, units.angstrom), lorentzHwhm: CGS.of(0.5, units.angstrom), tau0: 3 },
  * ]);
  * ```
  */

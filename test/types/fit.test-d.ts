@@ -131,7 +131,7 @@ describe("fit: must compile", () => {
     expectTypeOf(r.angularDiameter).toEqualTypeOf<Angle>();
     expectTypeOf(r.extinctionAV).toEqualTypeOf<Dimensionless>();
     expectTypeOf(r.modelFluxPerWavelength).toEqualTypeOf<SpectralFluxPerWavelengthArray<"SI">>();
-    expectTypeOf(r.json.temperatureK).toEqualTypeOf<number>();
+    expectTypeOf(r.si.temperatureK).toEqualTypeOf<number>();
   });
   test("CGS photometry and spectrum", () => {
     const r = fitBlackbody(CGS, [{ band: vCGS, fluxPerWavelength: fLambdaCGS, sigma: fLambdaCGS }]);

@@ -27,6 +27,7 @@ import {
   type SpectralRadiancePerWavelengthArray,
   type SystemName,
   type Temperature,
+  type TemperatureArray,
   type UnitSystem,
   type Wavenumber,
 } from "../../src/quantity/index";
@@ -60,9 +61,9 @@ import {
   temperatureFromExitance,
   temperatureFromLuminosityRadius,
   temperatureFromPeakWavenumber,
-  wienPeakFrequency,
-  wienPeakWavelength,
-  wienPeakWavenumber,
+  peakFrequency,
+  peakWavelength,
+  peakWavenumber,
   wienRadianceFrequency,
   type ResponseCurve,
   type SpectralRadiancePerWavelengthPerTemperature,
@@ -85,6 +86,7 @@ declare const fLambdaSI: SpectralFluxPerWavelength<"SI">;
 declare const fNuSI: SpectralFluxPerFrequency<"SI">;
 declare const gridSI: LengthArray<"SI">;
 declare const gridCGS: LengthArray<"CGS">;
+declare const temps: TemperatureArray;
 const curveSI: ResponseCurve<"SI"> = { wavelengths: SI.arrayOf([500, 550, 600], units.nm), response: [0, 1, 0] };
 const curveCGS: ResponseCurve<"CGS"> = { wavelengths: CGS.arrayOf([500, 550, 600], units.nm), response: [0, 1, 0] };
 
@@ -108,6 +110,14 @@ describe("must not compile: systems never mix", () => {
   test("a CGS wavelength grid into an SI batch", () => {
     // @ts-expect-error Float64Array of cm vs m
     planckRadianceWavelengthBatch(SI, gridCGS, tempK);
+  });
+  test("a CGS wavelength into an SI batch over temperatures", () => {
+    // @ts-expect-error cm vs m (the wavelength is shared by every temperature row)
+    planckRadianceWavelengthBatch(SI, lamCGS, temps);
+  });
+  test("a length array where the temperatures go", () => {
+    // @ts-expect-error a LengthArray is not a TemperatureArray
+    planckRadianceWavelengthBatch(SI, lamSI, gridSI);
   });
   test("a CGS exitance into an SI inversion", () => {
     // @ts-expect-error erg s^-1 cm^-2 where W m^-2 is wanted
@@ -175,7 +185,7 @@ describe("must not compile: radiometric kinds never mix", () => {
   });
   test("a wavelength where a temperature is wanted", () => {
     // @ts-expect-error m is not K
-    wienPeakWavelength(SI, lamSI);
+    peakWavelength(SI, lamSI);
   });
   test("a spectral exitance (π B_λ, per m) where the bolometric exitance is wanted", () => {
     // @ts-expect-error W m^-2 m^-1 is not W m^-2: integrate over the band first
@@ -208,7 +218,7 @@ describe("must not compile: radiometric kinds never mix", () => {
   });
   test("the peak frequency where a wavenumber is wanted", () => {
     // @ts-expect-error ν_max is in Hz; σ̃_max has its own function
-    const k: Wavenumber<"SI"> = wienPeakFrequency(SI, tempK);
+    const k: Wavenumber<"SI"> = peakFrequency(SI, tempK);
     void k;
   });
   test("F_ν values into the colour temperature from per-wavelength densities", () => {
@@ -240,12 +250,14 @@ describe("must compile: honest code", () => {
     expectTypeOf(luminosityFromRadiusTemperature(SI, constants.Rsun.si, constants.Tsun.si)).toEqualTypeOf<Power<"SI">>();
     expectTypeOf(photonExitance(CGS, tempK)).toEqualTypeOf<PhotonFlux<"CGS">>();
     expectTypeOf(photonEmissionRate(CGS, constants.Rsun.cgs, tempK)).toEqualTypeOf<PhotonRate>();
-    expectTypeOf(wienPeakWavelength(CGS, tempK)).toEqualTypeOf<Length<"CGS">>();
-    expectTypeOf(wienPeakWavenumber(SI, tempK)).toEqualTypeOf<Wavenumber<"SI">>();
-    expectTypeOf(wienPeakFrequency(CGS, tempK)).toEqualTypeOf<Frequency>();
+    expectTypeOf(peakWavelength(CGS, tempK)).toEqualTypeOf<Length<"CGS">>();
+    expectTypeOf(peakWavenumber(SI, tempK)).toEqualTypeOf<Wavenumber<"SI">>();
+    expectTypeOf(peakFrequency(CGS, tempK)).toEqualTypeOf<Frequency>();
     expectTypeOf(bandPhotonRadianceWavelength(CGS, lamCGS, CGS.of(600, units.nm), tempK)).toEqualTypeOf<PhotonRadiance<"CGS">>();
     expectTypeOf(bandMeanRadiance(CGS, curveCGS, tempK, "photon")).toEqualTypeOf<SpectralRadiancePerWavelength<"CGS">>();
     expectTypeOf(planckRadianceWavelengthBatch(SI, gridSI, tempK).values).toEqualTypeOf<SpectralRadiancePerWavelengthArray<"SI">>();
+    expectTypeOf(planckRadianceWavelengthBatch(CGS, lamCGS, temps).values).toEqualTypeOf<SpectralRadiancePerWavelengthArray<"CGS">>();
+    expectTypeOf(planckRadianceWavelengthBatch(SI, gridSI, temps).values).toEqualTypeOf<SpectralRadiancePerWavelengthArray<"SI">>();
   });
   test("system-free arguments fit either system", () => {
     const t = CGS.of(5772, units.K); // a temperature built through CGS works in SI calls
@@ -277,7 +289,7 @@ describe("must compile: honest code", () => {
   });
   test("generic code over the system keeps S", () => {
     function peakRadiance<S extends SystemName>(sys: UnitSystem<S>, t: Temperature): SpectralRadiancePerWavelength<S> {
-      return planckRadianceWavelength(sys, wienPeakWavelength(sys, t), t);
+      return planckRadianceWavelength(sys, peakWavelength(sys, t), t);
     }
     expectTypeOf(peakRadiance(CGS, tempK)).toEqualTypeOf<SpectralRadiancePerWavelength<"CGS">>();
     expectTypeOf(brightnessTemperatureWavelength(CGS, lamCGS, peakRadiance(CGS, tempK))).toEqualTypeOf<Temperature>();

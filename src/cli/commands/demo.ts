@@ -13,7 +13,7 @@ import { SI } from "../../quantity/system";
 import { units } from "../../quantity/units";
 import type { ReportFigure } from "../../plot/index";
 import { optFlag, optInteger, optString, type ParsedArgs } from "../args";
-import type { Command } from "../command";
+import { INTERNAL_EXIT, type Command } from "../command";
 import { EXIT, UsageError, say, type CliIO } from "../context";
 import type { ColumnSpec } from "../io/header";
 import type { CellValue } from "../io/write";
@@ -72,7 +72,7 @@ const DISPLAY: Readonly<Record<string, string>> = {
   distance: "d [pc]",
   radius: "R [R_{☉}]",
   luminosity: "L [L_{☉}]",
-  "chi2/dof": "χ²/dof",
+  reduced_chi2: "χ²/dof",
   true_teff: "true T_{eff} [K]",
   "z(teff)": "z(T_{eff})",
   true_radius: "true R [R_{☉}]",
@@ -92,7 +92,7 @@ stars from ~3000 K dwarfs to a ~27000 K giant, with parallaxes. Each star is
 fitted with a blackbody (T, θ), then solved for distance, radius and
 luminosity from its parallax, and compared with the chosen truth (truth.csv):
 z(T) and z(R) are (fit − truth)/σ and should mostly lie within ±2;
-chi2/dof is the fit's reduced χ².
+reduced_chi2 is the fit's reduced χ² (χ²/dof).
 The table is printed and an HTML report (SED of every star with its band
 responses and residuals, Planck curves, temperature–luminosity diagram) is written to
 --report DIR (default ./starlume-report/index.html). 'npm start' runs this.`,
@@ -100,7 +100,17 @@ responses and residuals, Planck curves, temperature–luminosity diagram) is wri
     { name: "report", kind: "value", valueName: "DIR", help: "directory of the HTML report", defaultText: "starlume-report" },
     { name: "no-report", kind: "flag", help: "do not write the report" },
     { name: "format", short: "f", kind: "value", valueName: "FMT", choices: OUTPUT_FORMATS, help: "table format", defaultText: "table" },
-    { name: "digits", kind: "value", valueName: "N", help: "significant digits of plain numbers in the table", defaultText: "3" },
+    { name: "digits", short: "d", kind: "value", valueName: "N", help: "significant digits of plain numbers in the table", defaultText: "3" },
+    { name: "quiet", short: "q", kind: "flag", help: "no per-row messages on stderr" },
+  ],
+  exitCodes: [
+    { code: 0, meaning: "every demo star fitted and solved" },
+    { code: 1, meaning: "a demo star rejected (not expected with the shipped data; please report it)" },
+    {
+      code: 2,
+      meaning: "arguments given, the demo survey not installed, or an unwritable report\ndirectory",
+    },
+    INTERNAL_EXIT,
   ],
   examples: [{ args: ["--no-report"], note: "fit and solve the demo stars, print the table only" }],
   async run(args: ParsedArgs, io: CliIO): Promise<number> {
@@ -109,6 +119,7 @@ responses and residuals, Planck curves, temperature–luminosity diagram) is wri
     if (dir === null) throw new UsageError("the demo survey (examples/demo-survey) is not installed with this copy of starlume");
     const format = optString(args, "format") ?? "table";
     const digits = optInteger(args, "digits", 3, 1, 17);
+    const quiet = optFlag(args, "quiet");
     const bandSet = await loadBands("demo", io);
     const truth = await readTruth(dir, io);
     const table = await openTable(join(dir, "photometry.csv"), "csv", io);
@@ -119,18 +130,18 @@ responses and residuals, Planck curves, temperature–luminosity diagram) is wri
       ...withSigma("teff", "K"),
       ...withSigma("theta", "mas"),
       ...withSigma("distance", "pc"),
-      ...withSigma("radius", "Rsol"),
-      ...withSigma("luminosity", "Lsol"),
-      { name: "chi2/dof", unit: null },
+      ...withSigma("radius", "Rsun"),
+      ...withSigma("luminosity", "Lsun"),
+      { name: "reduced_chi2", unit: null },
       { name: "true_teff", unit: "K" },
       { name: "z(teff)", unit: null },
-      { name: "true_radius", unit: "Rsol" },
+      { name: "true_radius", unit: "Rsun" },
       { name: "z(radius)", unit: null },
       { name: "status", unit: null },
     ];
     const text = format === "table";
     const zIndex = new Set(["z(teff)", "z(radius)"].map((n) => columns.findIndex((c) => c.name === n)));
-    const chiIndex = columns.findIndex((c) => c.name === "chi2/dof");
+    const chiIndex = columns.findIndex((c) => c.name === "reduced_chi2");
     if (text) say(io.stdout, `Tallmere Plateau Observatory six-band survey (invented demo data): blackbody fits with parallaxes, ${bandSet.bands.length} bands\n`);
     const writer = openTableWriter(io.stdout, columns, { format: format as "table", digits });
     const rows: CellValue[][] = [];
@@ -146,7 +157,7 @@ responses and residuals, Planck curves, temperature–luminosity diagram) is wri
       let row: CellValue[];
       if (item.kind === "bad") {
         rejected++;
-        say(io.stderr, `demo photometry: line ${item.line}: rejected: ${item.message}`);
+        if (!quiet) say(io.stderr, `demo photometry: line ${item.line}: rejected: ${item.message}`);
         row = [`line ${item.line}`, ...new Array<CellValue>(columns.length - 2).fill(null), "rejected"];
       } else {
         const o = setup.fitRow(item.cells);
@@ -154,7 +165,7 @@ responses and residuals, Planck curves, temperature–luminosity diagram) is wri
         if (!o.ok || o.result.stellar === null) {
           rejected++;
           const why = o.ok ? "no parallax" : o.reason;
-          say(io.stderr, `demo photometry: line ${item.line}: rejected: ${why}`);
+          if (!quiet) say(io.stderr, `demo photometry: line ${item.line}: rejected: ${why}`);
           row = [o.id, ...new Array<CellValue>(columns.length - 2).fill(null), "rejected"];
         } else {
           const f = o.result.fit;
@@ -167,22 +178,22 @@ responses and residuals, Planck curves, temperature–luminosity diagram) is wri
             u(f.sigmaAngularDiameter, units.mas),
             u(st.distance, units.pc),
             u(st.sigmaDistance, units.pc),
-            u(st.radius, units.Rsol),
-            u(st.sigmaRadius, units.Rsol),
-            u(st.luminosity, units.Lsol),
-            u(st.sigmaLuminosity, units.Lsol),
+            u(st.radius, units.Rsun),
+            u(st.sigmaRadius, units.Rsun),
+            u(st.luminosity, units.Lsun),
+            u(st.sigmaLuminosity, units.Lsun),
             f.dof > 0 ? Math.round((f.chi2 / f.dof) * 100) / 100 : null,
             tr !== undefined ? Number(tr.temperatureK.toPrecision(6)) : null,
             tr !== undefined ? pull(f.temperature, tr.temperatureK, f.sigmaTemperature) : null,
-            tr !== undefined ? Number(u(tr.radiusM, units.Rsol).toPrecision(6)) : null,
+            tr !== undefined ? Number(u(tr.radiusM, units.Rsun).toPrecision(6)) : null,
             tr !== undefined ? pull(st.radius, tr.radiusM, st.sigmaRadius) : null,
             o.flags.length === 0 ? "ok" : `flagged: ${o.flags.join("+")}`,
           ];
           seds.push(sedData(o.id, o));
-          hr.push({ name: o.id, temperatureK: f.temperature, sigmaT: f.sigmaTemperature, luminosity: u(st.luminosity, units.Lsol), sigmaL: u(st.sigmaLuminosity, units.Lsol) });
+          hr.push({ name: o.id, temperatureK: f.temperature, sigmaT: f.sigmaTemperature, luminosity: u(st.luminosity, units.Lsun), sigmaL: u(st.sigmaLuminosity, units.Lsun) });
           if (tr !== undefined) {
             const lTrue = 4 * Math.PI * tr.radiusM ** 2 * 5.670374419e-8 * tr.temperatureK ** 4; // L = 4πR²σT⁴, σ from CODATA 2018
-            truthHr.push({ temperatureK: tr.temperatureK, luminosity: u(lTrue, units.Lsol) });
+            truthHr.push({ temperatureK: tr.temperatureK, luminosity: u(lTrue, units.Lsun) });
           }
         }
       }
@@ -196,9 +207,9 @@ responses and residuals, Planck curves, temperature–luminosity diagram) is wri
 
     if (!optFlag(args, "no-report")) {
       const reportDir = optString(args, "report") ?? "starlume-report";
-      const figures: ReportFigure[] = fitFigures(seds, [], bandSet, "Lsol");
+      const figures: ReportFigure[] = fitFigures(seds, [], bandSet, "Lsun");
       figures.push({
-        svg: hrFigure(hr, "Lsol", truthHr),
+        svg: hrFigure(hr, "Lsun", truthHr),
         caption:
           "Fitted effective temperature (decreasing to the right, as in a Hertzsprung–Russell diagram) against luminosity from the fit and the parallax, with 1σ error bars in both (circles), and the true values chosen when the demo data were generated (hollow diamonds).",
       });

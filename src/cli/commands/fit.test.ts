@@ -5,6 +5,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { csvRecords, REPO_ROOT, runCli } from "../test-util";
 import { planckRadianceWavelengthSI } from "../../radiation/kernels/planck";
 import { gaussianResponseSI } from "../../fit/kernels/bands";
+import { parseBands } from "../bands";
 
 const scratch = mkdtempSync(join(tmpdir(), "starlume-fit-"));
 afterAll(() => rmSync(scratch, { recursive: true, force: true }));
@@ -23,14 +24,14 @@ describe("starlume fit", () => {
       expect(row.n_bands).toBe("6");
       // The demo data carry 1.5–3 % Gaussian noise (scripts/gen-demo-survey.mjs); 3σ bounds a fair draw.
       const zT = (Number(row["teff [K]"]) - Number(t["teff [K]"])) / Number(row["sigma(teff) [K]"]);
-      const zR = (Number(row["radius [Rsol]"]) - Number(t["radius [Rsol]"])) / Number(row["sigma(radius) [Rsol]"]);
+      const zR = (Number(row["radius [Rsun]"]) - Number(t["radius [Rsun]"])) / Number(row["sigma(radius) [Rsun]"]);
       expect(Math.abs(zT)).toBeLessThan(3);
       expect(Math.abs(zR)).toBeLessThan(3);
     }
   });
 
   it("recovers T exactly from noise-free f_ν data in Gaussian bands of a band file", async () => {
-    const bands = [0.45, 0.6, 0.8, 1.2, 2.2].map((c, i) => ({ name: `g${i}`, shape: "gaussian", center: `${c} um`, fwhm: `${(0.2 * c).toFixed(3)} um` }));
+    const bands = [0.45, 0.6, 0.8, 1.2, 2.2].map((c, i) => ({ name: `g${i}`, shape: "gaussian", centre: `${c} um`, fwhm: `${(0.2 * c).toFixed(3)} um` }));
     const bandsPath = join(scratch, "gauss.json");
     writeFileSync(bandsPath, JSON.stringify({ format: "starlume-bands/1", bands }));
     // Photon-counting band means of π(θ/2)²B_λ computed here with the Planck kernel and the trapezoid
@@ -40,7 +41,7 @@ describe("starlume fit", () => {
     const cols: string[] = ["name"];
     const vals: string[] = ["synthetic"];
     for (const b of bands) {
-      const c = Number(b.center.split(" ")[0]) * 1e-6;
+      const c = Number(b.centre.split(" ")[0]) * 1e-6;
       const curve = gaussianResponseSI(c, 0.2 * c);
       const l = curve.wavelengthsM;
       let num = 0;
@@ -108,14 +109,33 @@ describe("starlume fit", () => {
       [JSON.stringify({ format: "other", bands: [] }), `"format" must be "starlume-bands/1"`],
       [JSON.stringify({ format: "starlume-bands/1", bands: [{ name: "x", wavelengthUnit: "nm", wavelengths: [500, 490], response: [1, 1] }] }), "band 'x' (bands[0]): wavelengths must be strictly increasing"],
       [JSON.stringify({ format: "starlume-bands/1", bands: [{ name: "x", wavelengthUnit: "K", wavelengths: [1, 2], response: [1, 1] }] }), "unit 'K' is a temperature"],
-      [JSON.stringify({ format: "starlume-bands/1", bands: [{ name: "y", shape: "gaussian", center: "550", fwhm: "90 nm" }] }), `band 'y' (bands[0]): "center" must carry a unit`],
-      [JSON.stringify({ format: "starlume-bands/1", bands: [{ name: "z", shape: "round", center: "550 nm" }] }), `"shape" must be "gaussian" or "top-hat"`],
+      [JSON.stringify({ format: "starlume-bands/1", bands: [{ name: "y", shape: "gaussian", centre: "550", fwhm: "90 nm" }] }), `band 'y' (bands[0]): "centre" must carry a unit`],
+      [JSON.stringify({ format: "starlume-bands/1", bands: [{ name: "z", shape: "round", centre: "550 nm" }] }), `"shape" must be "gaussian" or "top-hat"`],
+      [JSON.stringify({ format: "starlume-bands/1", bands: [{ name: "l", shape: "gaussian", center: "550", fwhm: "90 nm" }] }), `band 'l' (bands[0]): "center" must carry a unit`],
+      [JSON.stringify({ format: "starlume-bands/1", bands: [{ name: "w", shape: "top-hat", centre: "550 nm", center: "550 nm", width: "90 nm" }] }), `band 'w' (bands[0]): give "centre" or its legacy spelling "center", not both`],
     ];
     for (const [i, [content, message]] of cases.entries()) {
       const r = await runCli(["fit", "examples/demo-survey/photometry.csv", "--bands", write(`b${i}.json`, content)]);
       expect(r.code).toBe(2);
       expect(r.stderr).toContain(message);
     }
+  });
+
+  it("reads the legacy band-file key \"center\" as \"centre\" (docs/naming.md §1)", () => {
+    const file = (key: string) => ({
+      format: "starlume-bands/1",
+      bands: [
+        { name: "g", shape: "gaussian", [key]: "2.2 um", fwhm: "0.35 um" },
+        { name: "t", shape: "top-hat", [key]: "550 nm", width: "90 nm", convention: "energy" },
+      ],
+    });
+    const now = parseBands(file("centre"), "now");
+    const legacy = parseBands(file("center"), "legacy");
+    expect(legacy.bands.map((b) => b.band.si)).toEqual(now.bands.map((b) => b.band.si));
+    // the centre was read (2.2 µm): the Gaussian's response peaks there, not at a default
+    const g = legacy.bands[0]!.curveM;
+    const peak = g.wavelengths[g.response.indexOf(Math.max(...g.response))]!;
+    expect(Math.abs(peak - 2.2e-6)).toBeLessThan(0.01e-6);
   });
 
   it("fits extinction when asked (A_V columns), and A_V ≈ 0 for the unreddened demo stars", async () => {

@@ -12,7 +12,7 @@ import type { ReportFigure } from "../../plot/index";
 import type { CellValue } from "../io/write";
 import type { ColumnSpec } from "../io/header";
 import { optInteger, optString, type ParsedArgs } from "../args";
-import type { Command } from "../command";
+import { INTERNAL_EXIT, type Command } from "../command";
 import { UsageError, say, type CliIO } from "../context";
 import { loadBands, type BandSet, type CliBand } from "../bands";
 import { fitStar, raisedFlags, type StarDistance, type StarFitResult, type StarMeasurement } from "../fit-adapter";
@@ -198,7 +198,7 @@ export function sedData(name: string, o: Extract<FitOutcome, { ok: true }>): Sed
     angularDiameterRad: f.angularDiameter,
     sigmaAngularDiameterRad: f.sigmaAngularDiameter,
     extinctionAV: f.extinctionAV,
-    rV: f.json.rV,
+    rV: f.si.rV,
     modelFLambdaSI: Array.from(f.modelFluxPerWavelength),
     pulls: [...f.pulls],
     chi2: f.chi2,
@@ -366,6 +366,19 @@ built-in demo bands ('--bands demo', the default). Status is 'ok', 'flagged'
     { name: "unit", short: "u", kind: "list", valueName: "KEY=UNIT", help: "output unit: teff, theta, distance, radius, luminosity, fbol (repeatable)" },
     { name: "assume-sigma", kind: "value", valueName: "REL", help: "relative uncertainty for values without one" },
     { name: "report-stars", kind: "value", valueName: "N", help: "number of stars drawn in the report", defaultText: "12" },
+  ],
+  exitCodes: [
+    { code: 0, meaning: "every row fitted ('flagged' rows count as fitted)" },
+    {
+      code: 1,
+      meaning: "some rows rejected: fewer than 2 bands with values, sigma <= 0, or a bad\ndistance/parallax (kept in the output with status 'rejected', listed on stderr)",
+    },
+    {
+      code: 2,
+      meaning:
+        "usage: unknown option or bad value, unreadable input or band file, fewer than\ntwo band columns, or [mag] where [AB mag] is needed",
+    },
+    INTERNAL_EXIT,
   ],
   examples: [
     { args: ["examples/demo-survey/photometry.csv", "--format", "table"], note: "fit the demo survey with the built-in demo bands" },

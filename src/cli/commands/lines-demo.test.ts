@@ -69,6 +69,23 @@ describe("starlume lines", () => {
     expect(html).toContain("solar filters");
   });
 
+  it("options of docs/naming.md §9: --unit wavelength=UNIT equals a bare UNIT, -d is --digits, -q silences stderr, -v is gone", async () => {
+    const bare = await runCli(["lines", "--count", "3", "--unit", "A", "--format", "csv"]);
+    const keyed = await runCli(["lines", "--count", "3", "-u", "wavelength=A", "--format", "csv"]);
+    expect(keyed.code).toBe(0);
+    expect(keyed.stdout).toBe(bare.stdout);
+    expect(keyed.stdout).toContain("wavelength [A]");
+    const long = await runCli(["lines", "--count", "3", "--digits", "4", "--format", "table"]);
+    const short = await runCli(["lines", "--count", "3", "-d", "4", "--format", "table"]);
+    expect(short.stdout).toBe(long.stdout);
+    expect(short.stdout).not.toBe((await runCli(["lines", "--count", "3", "--format", "table"])).stdout);
+    const quiet = await runCli(["lines", "--series", "lyman", "--medium", "air", "--count", "2", "-q", "--format", "csv"]);
+    expect(quiet.code).toBe(1); // -q silences the messages, not the exit code
+    expect(quiet.stderr).toBe("");
+    const v = await runCli(["lines", "-v", "-25 km/s"]);
+    expect(v.code).toBe(2);
+  });
+
   it("refuses a wavelength unit of the wrong kind and superluminal velocities (exit 2)", async () => {
     expect((await runCli(["lines", "--unit", "eV"])).code).toBe(2);
     expect((await runCli(["lines", "--velocity", "400000 km/s"])).code).toBe(2);
@@ -82,6 +99,13 @@ describe("starlume demo", () => {
     expect(r.code).toBe(0);
     const rows = csvRecords(r.stdout);
     expect(rows).toHaveLength(12);
+    // column keys of docs/naming.md §8 and §2: reduced_chi2 (was chi2/dof), radius in Rsun and luminosity in Lsun (the legacy Rsol, Lsol)
+    const keys = Object.keys(rows[0] ?? {});
+    expect(keys).toContain("reduced_chi2");
+    expect(keys).not.toContain("chi2/dof");
+    expect(keys).toContain("radius [Rsun]");
+    expect(keys).toContain("luminosity [Lsun]");
+    for (const row of rows) expect(Number(row.reduced_chi2)).toBeGreaterThan(0);
     for (const row of rows) {
       expect(row.status).toBe("ok");
       // z = (fit − truth)/σ for a fair draw of the committed noise; 3σ (see fit.test.ts)

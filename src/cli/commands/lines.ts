@@ -14,7 +14,7 @@ import { SI } from "../../quantity/system";
 import type { Unit } from "../../quantity/unit";
 import { units } from "../../quantity/units";
 import {
-  dopplerShift,
+  observedWavelengthFromRadialVelocity,
   hydrogenSeries,
   ions,
   seriesLimitVacuumWavelength,
@@ -23,7 +23,7 @@ import {
   transitionEnergy,
   transitionVacuumWavelength,
   transitionWavenumber,
-  vacuumToAir,
+  airFromVacuum,
   type Ion,
   type LevelModel,
   type SeriesName,
@@ -31,7 +31,7 @@ import {
 } from "../../spectra/index";
 import type { MarkerLine } from "../../plot/index";
 import { optFlag, optInteger, optString, type ParsedArgs } from "../args";
-import type { Command } from "../command";
+import { INTERNAL_EXIT, type Command } from "../command";
 import { EXIT, UsageError, say, type CliIO } from "../context";
 import type { CellValue } from "../io/write";
 import { formatK, spectrumFigure } from "../figures";
@@ -90,7 +90,9 @@ function setup(args: ParsedArgs): LinesSetup {
   const velocityText = optString(args, "velocity");
   const velocityMs = velocityText === undefined ? null : optionQuantitySI(velocityText, kinds.velocity, units.km_per_s, "--velocity");
   if (velocityMs !== null && !(Math.abs(velocityMs) < 299792458)) throw new UsageError(`--velocity must be slower than light; got ${velocityText ?? ""}`);
-  const unitText = optString(args, "unit") ?? "nm";
+  const unitOption = optString(args, "unit");
+  // `--unit wavelength=UNIT` (the key of the wavelength and observed columns) or a bare UNIT (docs/naming.md §9)
+  const unitText = unitOption === undefined ? "nm" : unitOption.replace(/^\s*wavelength\s*=\s*/, "");
   return {
     ionKey,
     ion: ION_CHOICES[ionKey] as Ion,
@@ -111,7 +113,7 @@ export function computeLines(s: LinesSetup): LineRow[] {
   const v = s.velocityMs === null ? null : (s.velocityMs as Velocity<"SI">);
   const rows: LineRow[] = [];
   const make = (label: string, nUpper: number | null, vac: VacuumWavelength<"SI">, energyJ: number, sigma: number): LineRow => {
-    const obsVac = v === null ? vac : dopplerShift(SI, vac, v);
+    const obsVac = v === null ? vac : observedWavelengthFromRadialVelocity(SI, vac, v);
     let rest = NaN;
     let observed = NaN;
     let reason: string | null = null;
@@ -120,9 +122,9 @@ export function computeLines(s: LinesSetup): LineRow[] {
         rest = vac;
         observed = obsVac;
       } else {
-        const air = vacuumToAir(SI, vac);
+        const air = airFromVacuum(SI, vac);
         rest = air;
-        observed = v === null ? air : dopplerShift(SI, air, v);
+        observed = v === null ? air : observedWavelengthFromRadialVelocity(SI, air, v);
       }
     } catch (e) {
       if (!(e instanceof RangeError)) throw e;
@@ -155,7 +157,7 @@ export function linesSvg(s: LinesSetup, rows: readonly LineRow[], temperatureK: 
   for (let i = 0; i < n; i++) grid[i] = lo + ((hi - lo) * i) / (n - 1);
   const lines = rows
     .filter((r) => r.nUpper !== null)
-    .map((r, k) => ({ center: r.observedVacuumM as VacuumWavelength<"SI">, gaussianSigma: SI.of(sigmaOf(r.observedVacuumM), units.m), tau0: 2.5 / Math.sqrt(k + 1) }));
+    .map((r, k) => ({ centre: r.observedVacuumM as VacuumWavelength<"SI">, gaussianSigma: SI.of(sigmaOf(r.observedVacuumM), units.m), tau0: 2.5 / Math.sqrt(k + 1) }));
   const { flux } = synthesizePlanckSpectrum(SI, SI.arrayOf(grid, units.m), SI.of(temperatureK, units.K), lines);
   const yUnit = units.W_per_m2_sr_nm;
   const markers: MarkerLine[] = rows.map((r, i) => ({ x: r.observedVacuumM * 1e9, ...(i < 10 || r.nUpper === null ? { label: r.label } : {}) }));
@@ -174,7 +176,7 @@ export const linesCommand: Command = {
   usage: "[options]",
   description: `
 Lists the first --count lines of a series of hydrogen (H), deuterium (D) or
-ionised helium (HeII): label, levels, rest wavelength in vacuum or standard air
+ionized helium (HeII): label, levels, rest wavelength in vacuum or standard air
 (Edlén 1966 formula, defined for 200 nm – 20 µm in air; lines outside are kept
 with status 'rejected' and the reason, exit code 1), the wavelength observed
 from a source with radial velocity --velocity (relativistic Doppler, positive
@@ -188,15 +190,25 @@ With --svg FILE or --report DIR a synthetic spectrum (blackbody continuum at
     { name: "count", short: "n", kind: "value", valueName: "N", help: "number of lines (1–500)", defaultText: "8" },
     { name: "limit", kind: "flag", help: "add the series limit as a last row" },
     { name: "medium", kind: "value", valueName: "M", choices: ["vacuum", "air"], help: "wavelengths in vacuum or standard air", defaultText: "vacuum" },
-    { name: "velocity", short: "v", kind: "value", valueName: "V", help: "radial velocity, e.g. '-25 km/s' (bare numbers in km/s)" },
+    { name: "velocity", kind: "value", valueName: "V", help: "radial velocity, e.g. '-25 km/s' (bare numbers in km/s)" },
     { name: "model", kind: "value", valueName: "M", choices: ["dirac-centroid", "bohr"], help: "level model", defaultText: "dirac-centroid" },
-    { name: "unit", short: "u", kind: "value", valueName: "UNIT", help: "wavelength unit", defaultText: "nm" },
+    { name: "unit", short: "u", kind: "value", valueName: "[wavelength=]UNIT", help: "unit of the wavelength and observed columns", defaultText: "nm" },
     { name: "format", short: "f", kind: "value", valueName: "FMT", choices: OUTPUT_FORMATS, help: "table format", defaultText: "table on a terminal, else csv" },
     { name: "output", short: "o", kind: "value", valueName: "FILE", help: "write the table to FILE" },
-    { name: "digits", kind: "value", valueName: "N", help: "significant digits in the aligned table", defaultText: "9" },
+    { name: "digits", short: "d", kind: "value", valueName: "N", help: "significant digits in the aligned table", defaultText: "9" },
+    { name: "quiet", short: "q", kind: "flag", help: "no rejected-line, wrote-file or report messages on stderr" },
     { name: "svg", kind: "value", valueName: "FILE", help: "write a synthetic spectrum with the lines marked as SVG" },
     { name: "report", kind: "value", valueName: "DIR", help: "write an HTML report (table and spectrum) to DIR/index.html" },
     { name: "temperature", short: "T", kind: "value", valueName: "T", help: "continuum temperature of the figure", defaultText: "9500 K" },
+  ],
+  exitCodes: [
+    { code: 0, meaning: "every line listed" },
+    {
+      code: 1,
+      meaning: "with --medium air, lines outside the range of the air formula (200 nm – 20 µm),\nkept with status 'rejected'",
+    },
+    { code: 2, meaning: "usage: unknown option or bad value" },
+    INTERNAL_EXIT,
   ],
   examples: [
     { args: ["--format", "table"], note: "the first 8 Balmer lines of hydrogen in vacuum" },
@@ -240,7 +252,8 @@ With --svg FILE or --report DIR a synthetic spectrum (blackbody continuum at
       await output.close();
     }
     const rejected = rows.filter((r) => r.reason !== null);
-    for (const r of rejected) say(io.stderr, `lines: ${r.label}: rejected: ${r.reason ?? ""}`);
+    const quiet = optFlag(args, "quiet");
+    if (!quiet) for (const r of rejected) say(io.stderr, `lines: ${r.label}: rejected: ${r.reason ?? ""}`);
     const svgPath = optString(args, "svg");
     const reportDir = optString(args, "report");
     if (svgPath !== undefined || reportDir !== undefined) {
@@ -252,7 +265,7 @@ With --svg FILE or --report DIR a synthetic spectrum (blackbody continuum at
         } catch (e) {
           throw new UsageError(`cannot write '${svgPath}' (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`);
         }
-        say(io.stderr, `wrote ${full}`);
+        if (!quiet) say(io.stderr, `wrote ${full}`);
       }
       if (reportDir !== undefined) {
         const header = columns.map((c) => (c.unit !== null && c.unit !== undefined ? `${c.name} [${c.unit}]` : c.name));
@@ -271,7 +284,7 @@ With --svg FILE or --report DIR a synthetic spectrum (blackbody continuum at
           },
           io,
         );
-        say(io.stderr, `report written to ${path}`);
+        if (!quiet) say(io.stderr, `report written to ${path}`);
       }
     }
     return rejected.length > 0 ? EXIT.ROWS_REJECTED : EXIT.OK;

@@ -31,7 +31,7 @@ describe("starlume planck", () => {
   });
 
   it("exitance per frequency in CGS is π B_ν × 10³ (W → erg s⁻¹, m⁻² → cm⁻²)", async () => {
-    const r = await runCli(["planck", "-T", "3000 K", "--axis", "frequency", "--quantity", "exitance", "--system", "CGS", "--axis-unit", "THz", "--points", "4", "--format", "csv"]);
+    const r = await runCli(["planck", "-T", "3000 K", "--axis", "frequency", "--quantity", "exitance", "--system", "CGS", "--unit", "axis=THz", "--points", "4", "--format", "csv"]);
     expect(r.code).toBe(0);
     const rows = csvRows(r.stdout);
     expect(rows[0]).toEqual(["frequency [THz]", "exitance_3000K [erg s^-1 cm^-2 Hz^-1]"]);
@@ -41,12 +41,17 @@ describe("starlume planck", () => {
   });
 
   it("refuses a value unit of the wrong kind with a hint, and missing temperatures (exit 2)", async () => {
-    const a = await runCli(["planck", "-T", "5772", "--value-unit", "W m^-2 nm^-1"]);
+    const a = await runCli(["planck", "-T", "5772", "--unit", "value=W m^-2 nm^-1"]);
     expect(a.code).toBe(2);
     expect(a.stderr).toContain("use --quantity exitance");
-    const b = await runCli(["planck", "-T", "5772", "--axis-unit", "Hz"]);
+    const b = await runCli(["planck", "-T", "5772", "-u", "axis=Hz"]);
     expect(b.code).toBe(2);
-    expect(b.stderr).toContain("--axis-unit: unit 'Hz' is a frequency");
+    expect(b.stderr).toContain("--unit axis: unit 'Hz' is a frequency");
+    // the 0.1 options are gone; a bare unit (no KEY=) is refused with the keys listed
+    for (const old of [["--axis-unit", "Hz"], ["--value-unit", "W m^-2 nm^-1"]]) expect((await runCli(["planck", "-T", "5772", ...old])).code).toBe(2);
+    const bare = await runCli(["planck", "-T", "5772", "--unit", "THz"]);
+    expect(bare.code).toBe(2);
+    expect(bare.stderr).toContain("KEY one of axis, value");
     const c = await runCli(["planck"]);
     expect(c.code).toBe(2);
     expect(c.stderr).toContain("--temperature is required");
@@ -65,6 +70,21 @@ describe("starlume planck", () => {
     expect(svg.startsWith("<svg")).toBe(true);
     expect(svg).toContain("3000 K");
     expect(svg).toContain("6000 K");
+    expect(r.stderr).toContain("wrote ");
+    const q = await runCli(["planck", "-T", "3000,6000", "--svg", "fam-q.svg", "-q"], { cwd: scratch });
+    expect(q.code).toBe(0);
+    expect(q.stderr).toBe("");
+    expect(readFileSync(join(scratch, "fam-q.svg"), "utf8")).toBe(svg);
+  });
+
+  it("-d is --digits and -u takes both keys at once", async () => {
+    const args = ["planck", "-T", "5772", "--points", "3", "--format", "table"];
+    const long = await runCli([...args, "--digits", "3", "--unit", "axis=um", "--unit", "value=W m^-2 sr^-1 um^-1"]);
+    const short = await runCli([...args, "-d", "3", "-u", "axis=um", "-u", "value=W m^-2 sr^-1 um^-1"]);
+    expect(short.code).toBe(0);
+    expect(short.stdout).toBe(long.stdout);
+    expect(short.stdout).toContain("wavelength [um]");
+    expect(short.stdout).toContain("[W m^-2 sr^-1 um^-1]");
   });
 });
 
@@ -77,7 +97,7 @@ describe("starlume convert", () => {
   });
 
   it("converts to SI and CGS coherent units, with named units where they exist", async () => {
-    expect((await runCli(["convert", "1 Lsol", "CGS"])).stdout).toBe("3.828e33 erg s^-1\n"); // IAU 2015 B3 nominal L☉
+    expect((await runCli(["convert", "1 Lsun", "CGS"])).stdout).toBe("3.828e33 erg s^-1\n"); // IAU 2015 B3 nominal L☉
     expect((await runCli(["convert", "1 au", "SI"])).stdout).toBe("149597870700 m\n"); // IAU 2012 B2, exact
     expect((await runCli(["convert", "1 pc", "ly", "--digits", "6"])).stdout).toBe("3.26156 ly\n");
     expect((await runCli(["convert", "1500 mas", "arcsec", "--number"])).stdout).toBe("1.5\n");

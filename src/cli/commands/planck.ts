@@ -15,8 +15,9 @@ import type { Unit } from "../../quantity/unit";
 import { units } from "../../quantity/units";
 import { lambertianExitance, planckRadianceFrequency, planckRadianceWavelength } from "../../radiation/index";
 import { PALETTE, svgChart } from "../../plot/index";
-import { optInteger, optString, type ParsedArgs } from "../args";
-import type { Command } from "../command";
+import { optFlag, optInteger, optList, optString, type ParsedArgs } from "../args";
+import { keyValuePairs } from "../run-table";
+import { INTERNAL_EXIT, type Command } from "../command";
 import { EXIT, UsageError, say, type CliIO } from "../context";
 import type { CellValue } from "../io/write";
 import { formatK, logGrid } from "../figures";
@@ -76,11 +77,12 @@ function setup(args: ParsedArgs): PlanckSetup {
   const temperatures = temperaturesOption(optString(args, "temperature"));
   const defaults = DEFAULT_UNITS[sys.name][axis];
   const axisKind = axis === "wavelength" ? kinds.length : kinds.frequency;
-  const axisText = optString(args, "axis-unit") ?? defaults.axis;
-  const axisUnit = unitOfKind(axisText, axisKind, "--axis-unit", axis === "wavelength" ? "use a length, or --axis frequency for a frequency unit" : "use a frequency, or --axis wavelength for a length unit");
-  const valueText = optString(args, "value-unit") ?? defaults[what];
+  const unitOptions = keyValuePairs(optList(args, "unit"), "unit", ["axis", "value"]);
+  const axisText = unitOptions.get("axis") ?? defaults.axis;
+  const axisUnit = unitOfKind(axisText, axisKind, "--unit axis", axis === "wavelength" ? "use a length, or --axis frequency for a frequency unit" : "use a frequency, or --axis wavelength for a length unit");
+  const valueText = unitOptions.get("value") ?? defaults[what];
   const other: What = what === "radiance" ? "exitance" : "radiance";
-  const valueUnit = unitOfKind(valueText, VALUE_KIND[axis][what], "--value-unit", `for ${other} use --quantity ${other}${what === "radiance" ? " (radiance is per steradian: sr^-1)" : " (exitance has no sr^-1)"}`);
+  const valueUnit = unitOfKind(valueText, VALUE_KIND[axis][what], "--unit value", `for ${other} use --quantity ${other}${what === "radiance" ? " (radiance is per steradian: sr^-1)" : " (exitance has no sr^-1)"}`);
   const from = optString(args, "from");
   const to = optString(args, "to");
   const lo = from === undefined ? DEFAULT_RANGE[axis][0] : optionQuantitySI(from, axisKind, axisUnit, "--from");
@@ -124,7 +126,7 @@ export function planckSvg(s: PlanckSetup): string {
   const series = s.temperatures.map((t, i) => {
     const y = Array.from(s.grid, (g) => valueAt(s, g, t));
     for (const v of y) if (v > peak) peak = v;
-    return { type: "line" as const, name: formatK(t), x, y, color: PALETTE[i % PALETTE.length] as string };
+    return { type: "line" as const, name: formatK(t), x, y, colour: PALETTE[i % PALETTE.length] as string };
   });
   const symbol = s.axis === "wavelength" ? "λ" : "ν";
   return svgChart({
@@ -155,8 +157,7 @@ given too.`,
     { name: "axis", kind: "value", valueName: "AXIS", choices: ["wavelength", "frequency"], help: "per unit wavelength or per unit frequency", defaultText: "wavelength" },
     { name: "quantity", kind: "value", valueName: "Q", choices: ["radiance", "exitance"], help: "B (per sr) or π B", defaultText: "radiance" },
     { name: "system", kind: "value", valueName: "SYS", choices: ["SI", "CGS"], help: "system of the computation and the default units", defaultText: "SI" },
-    { name: "axis-unit", kind: "value", valueName: "UNIT", help: "unit of the wavelength or frequency column" },
-    { name: "value-unit", kind: "value", valueName: "UNIT", help: "unit of the values" },
+    { name: "unit", short: "u", kind: "list", valueName: "KEY=UNIT", help: "output unit: axis=UNIT (the wavelength or frequency column), value=UNIT (the values); repeatable" },
     { name: "from", kind: "value", valueName: "X", help: "start of the axis, e.g. '200 nm' (bare numbers in the axis unit)", defaultText: "100 nm or 3 THz" },
     { name: "to", kind: "value", valueName: "X", help: "end of the axis", defaultText: "10 µm or 3000 THz" },
     { name: "points", short: "n", kind: "value", valueName: "N", help: "number of grid points", defaultText: "200" },
@@ -164,7 +165,17 @@ given too.`,
     { name: "svg", kind: "value", valueName: "FILE", help: "write an SVG plot of the curves to FILE" },
     { name: "format", short: "f", kind: "value", valueName: "FMT", choices: OUTPUT_FORMATS, help: "table format", defaultText: "table on a terminal, else csv" },
     { name: "output", short: "o", kind: "value", valueName: "FILE", help: "write the table to FILE" },
-    { name: "digits", kind: "value", valueName: "N", help: "significant digits in the aligned table", defaultText: "6" },
+    { name: "digits", short: "d", kind: "value", valueName: "N", help: "significant digits in the aligned table", defaultText: "6" },
+    { name: "quiet", short: "q", kind: "flag", help: "no wrote-file message on stderr" },
+  ],
+  exitCodes: [
+    { code: 0, meaning: "the table (and SVG) written" },
+    {
+      code: 2,
+      meaning:
+        "usage: a bad temperature list, a --unit of the wrong kind (the message suggests\n--quantity exitance when that is the mix-up), or a bad axis range",
+    },
+    INTERNAL_EXIT,
   ],
   examples: [
     { args: ["--temperature", "5772", "--from", "300 nm", "--to", "1 um", "--points", "8", "--format", "table"], note: "the Sun's effective temperature, 300 nm – 1 µm, 8 points" },
@@ -183,7 +194,7 @@ given too.`,
       } catch (e) {
         throw new UsageError(`cannot write '${svgPath}' (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`);
       }
-      say(io.stderr, `wrote ${full}`);
+      if (!optFlag(args, "quiet")) say(io.stderr, `wrote ${full}`);
       if (optString(args, "output") === undefined) return EXIT.OK;
     }
     const outPath = optString(args, "output");

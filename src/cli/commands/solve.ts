@@ -22,7 +22,7 @@ import { formatValueUncertainty } from "../io/write";
 import type { CellValue } from "../io/write";
 import type { ColumnSpec } from "../io/header";
 import { optList, optString, type ParsedArgs } from "../args";
-import type { Command } from "../command";
+import { INTERNAL_EXIT, type Command } from "../command";
 import { UsageError, say, type CliIO } from "../context";
 import { hrFigure, roundedK, luminosityLabel, planckFamilyFigure, spreadByTemperature } from "../figures";
 import { writeReport } from "../report-write";
@@ -36,7 +36,7 @@ interface InputQuantity {
   /** Key used in `--column KEY=NAME` and in messages. */
   readonly key: string;
   readonly observation: StarObservationName;
-  /** Column names recognised by default (case-insensitive). */
+  /** Column names recognized by default (case-insensitive). */
   readonly names: readonly string[];
   /** Kind of the unit; null for magnitudes. */
   readonly kind: KindLike | null;
@@ -45,8 +45,8 @@ interface InputQuantity {
 
 const INPUTS: readonly InputQuantity[] = [
   { key: "teff", observation: "temperature", names: ["teff", "t_eff", "temperature"], kind: kinds.temperature, example: "teff [K]" },
-  { key: "luminosity", observation: "luminosity", names: ["luminosity", "lum"], kind: kinds.power, example: "luminosity [Lsol]" },
-  { key: "radius", observation: "radius", names: ["radius"], kind: kinds.length, example: "radius [Rsol]" },
+  { key: "luminosity", observation: "luminosity", names: ["luminosity", "lum"], kind: kinds.power, example: "luminosity [Lsun]" },
+  { key: "radius", observation: "radius", names: ["radius"], kind: kinds.length, example: "radius [Rsun]" },
   { key: "distance", observation: "distance", names: ["distance", "dist"], kind: kinds.length, example: "distance [pc]" },
   { key: "parallax", observation: "parallax", names: ["parallax", "plx"], kind: kinds.angle, example: "parallax [mas]" },
   { key: "fbol", observation: "bolometricFlux", names: ["fbol", "f_bol", "bolometric_flux"], kind: kinds.flux, example: "fbol [erg s^-1 cm^-2]" },
@@ -68,7 +68,7 @@ const OUTPUT_KIND: Record<OutputKey, KindLike> = {
 };
 
 function defaultUnits(system: SystemName): Record<OutputKey, string> {
-  return { teff: "K", luminosity: "Lsol", radius: "Rsol", distance: "pc", theta: "mas", fbol: system === "SI" ? "W m^-2" : "erg s^-1 cm^-2" };
+  return { teff: "K", luminosity: "Lsun", radius: "Rsun", distance: "pc", theta: "mas", fbol: system === "SI" ? "W m^-2" : "erg s^-1 cm^-2" };
 }
 
 /** Relative σ given to a value that has no uncertainty (treated as exact). */
@@ -181,7 +181,7 @@ function worstPull(sol: StarSolution<SystemName>): string {
 }
 
 /** The consistency columns of an exactly determined star (as the scalar solver reports them: χ² 0, dof 0, p 1, tension 0). */
-const EXACT_CONSISTENCY = { chi2: 0, dof: 0, pValue: 1, sigma: 0 } as const;
+const EXACT_CONSISTENCY = { chi2: 0, dof: 0, pValue: 1, tensionSigma: 0 } as const;
 
 /** Cap on rows kept for the report. */
 const REPORT_ROWS = 100;
@@ -233,7 +233,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
   };
   const observationKey = new Map(INPUTS.map((q) => [q.key, q.observation]));
   /** The output row of a solved star, from each quantity's value and σ in `sys`. */
-  const solvedRow = (line: number, idText: string, used: string, est: readonly (readonly [number, number])[], c: { chi2: number; dof: number; pValue: number; sigma: number }, worst: string): CellValue[] => {
+  const solvedRow = (line: number, idText: string, used: string, est: readonly (readonly [number, number])[], c: { chi2: number; dof: number; pValue: number; tensionSigma: number }, worst: string): CellValue[] => {
     const row: CellValue[] = [line];
     if (id !== -1) row.push(idText);
     row.push("ok", used);
@@ -241,7 +241,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
       const e = est[j] as readonly [number, number];
       row.push(valueIn(sys, e[0], units[k].unit), valueIn(sys, e[1], units[k].unit));
     });
-    row.push(c.chi2, c.dof, c.pValue, c.sigma, worst, "");
+    row.push(c.chi2, c.dof, c.pValue, c.tensionSigma, worst, "");
     keep(row);
     if (points.length < REPORT_POINTS) {
       const t = est[0] as readonly [number, number];
@@ -446,8 +446,8 @@ these columns, each with a unit in brackets and optionally its uncertainty
 column sigma(NAME) in a compatible unit:
 
   teff [K]          effective temperature        (also: t_eff, temperature)
-  luminosity [Lsol] luminosity, any power unit   (also: lum)
-  radius [Rsol]     radius, any length unit
+  luminosity [Lsun] luminosity, any power unit   (also: lum)
+  radius [Rsun]     radius, any length unit
   distance [pc]     distance                     (also: dist)
   parallax [mas]    trigonometric parallax       (also: plx)
   fbol [W m^-2]     bolometric flux              (also: f_bol, bolometric_flux)
@@ -467,6 +467,19 @@ is checked to be of the right kind. Table format: docs/guides/table-format.md.`,
     { name: "unit", short: "u", kind: "list", valueName: "KEY=UNIT", help: "output unit of a quantity, e.g. --unit radius=km (repeatable)" },
     { name: "column", kind: "list", valueName: "KEY=NAME", help: "use column NAME for input KEY, e.g. --column parallax=plx_dr9 (repeatable)" },
     { name: "assume-sigma", kind: "value", valueName: "REL", help: "relative uncertainty for values without one, e.g. 0.02" },
+  ],
+  exitCodes: [
+    { code: 0, meaning: "every row solved" },
+    {
+      code: 1,
+      meaning:
+        "some rows rejected: a value <= 0, an empty sigma(x) cell, or inputs that do not\ndetermine the star; rejected rows stay in the output with status 'rejected' and\nthe reason, and are listed on stderr with their line numbers",
+    },
+    {
+      code: 2,
+      meaning: "usage: unknown option or bad value, unreadable input, a header unit of the\nwrong kind, or no solver input column",
+    },
+    INTERNAL_EXIT,
   ],
   examples: [
     { args: ["examples/demo-survey/solve-input.csv", "--format", "table"], note: "solve the demo stars (temperature, angular diameter, parallax, bolometric flux)" },

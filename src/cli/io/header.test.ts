@@ -21,7 +21,7 @@ describe("parseColumnHeader", () => {
     expect(parseColumnHeader("n obs").name).toBe("n obs");
   });
 
-  it("recognises sigma(x), σ(x), sigma-(x), sigma+(x)", () => {
+  it("recognizes sigma(x), σ(x), sigma-(x), sigma+(x)", () => {
     expect(parseColumnHeader("sigma(parallax) [mas]")).toEqual({
       name: "sigma(parallax)",
       unit: "mas",

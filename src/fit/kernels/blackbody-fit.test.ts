@@ -23,7 +23,7 @@ const rel = (a: number, b: number) => Math.abs(a / b - 1);
 
 describe("bands: weights, pivot wavelength, shapes", () => {
   it("prepared weights reproduce bandMeanRadianceWavelengthSI and its T-derivative (same trapezoid weights)", () => {
-    // Identical quadrature, only the summation order/normalisation differs: a few ulp (1e-13 bound).
+    // Identical quadrature, only the summation order/normalization differs: a few ulp (1e-13 bound).
     for (const [i, c] of curves.entries()) {
       for (const conv of ["energy", "photon"] as const) {
         const b = conv === "photon" ? photonBands[i]! : energyBands[i]!;
@@ -103,7 +103,7 @@ describe("bands: weights, pivot wavelength, shapes", () => {
 
   it("rejects bad shapes, naming the parameter", () => {
     expect(() => topHatResponseSI(550e-9, 2e-6)).toThrow(/width/);
-    expect(() => gaussianResponseSI(-1, 1e-7)).toThrow(/center/);
+    expect(() => gaussianResponseSI(-1, 1e-7)).toThrow(/centre/);
     expect(() => gaussianResponseSI(1e-6, 1e-6)).toThrow(/fwhm/);
     expect(() => topHatResponseSI(5e-7, 1e-7, 2)).toThrow(/points/);
   });

@@ -102,7 +102,7 @@ export const DATA_AB_MAGNITUDE = 1;
 export interface FitChannelSI {
   /** Nodes, m (> 0). */
   readonly wavelengthsM: ArrayLike<number>;
-  /** Normalised weights (Σ = 1). */
+  /** Normalized weights (Σ = 1). */
   readonly weights: ArrayLike<number>;
   /** Pivot wavelength, m (for magnitudes and the colour-temperature start). */
   readonly pivotWavelengthM: number;
@@ -187,7 +187,7 @@ export interface BlackbodyFitSI {
   /** Covariance of the fitted parameters in K, rad, mag (products thereof). */
   readonly covariance: number[][];
   /** Covariance of (ln T, ln θ, A_V) for the fitted parameters. */
-  readonly logCovariance: number[][];
+  readonly lnCovariance: number[][];
   /** Correlation matrix of the fitted parameters. */
   readonly correlation: number[][];
   /** χ² = Σ pulls² at the solution (flux residuals for flux data, magnitude residuals for magnitudes). */
@@ -420,7 +420,7 @@ export function createBlackbodyFitterSI(channels: readonly FitChannelSI[], setti
     }
   }
 
-  /** ln θ minimising χ² (flux-only: linear least squares in s; otherwise in log flux) at (T, A_V); NaN if none. */
+  /** ln θ minimizing χ² (flux-only: linear least squares in s; otherwise in log flux) at (T, A_V); NaN if none. */
   function profileLnTheta(T: number, aV: number): number {
     fillS0(T, aV);
     let allFlux = true;
@@ -743,7 +743,7 @@ export function createBlackbodyFitterSI(channels: readonly FitChannelSI[], setti
       rV: ext ? rV : null,
       parameters: params,
       covariance: cov,
-      logCovariance: logCov,
+      lnCovariance: logCov,
       correlation: cor,
       chi2,
       dof,

@@ -9,9 +9,9 @@ import {
   solveStarSI,
   STAR_QUANTITIES,
   type MeasurementSI,
-  type StarInputKind,
+  type StarInputKindSI,
   type StarObservationsSI,
-  type StarQuantity,
+  type StarQuantitySI,
 } from "./solver";
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
@@ -118,7 +118,7 @@ describe("stellar-parameter solver: references", () => {
     expect(s.consistency.dof).toBe(1);
     // residual is exactly 3 combined sigmas by construction: χ² = 9 to rounding of the logs (1e-10)
     expect(Math.abs(s.consistency.chi2 - 9)).toBeLessThan(1e-10);
-    expect(Math.abs(s.consistency.sigma - 3)).toBeLessThan(1e-10);
+    expect(Math.abs(s.consistency.tensionSigma - 3)).toBeLessThan(1e-10);
     // p for 3σ two-sided = 0.002699796 (normal table, 7 digits)
     expect(rel(s.consistency.pValue, 0.002699796)).toBeLessThan(5e-7);
     // the luminosity is pulled down, radius and temperature up
@@ -160,7 +160,7 @@ describe("stellar-parameter solver: sufficiency", () => {
   base.bolometricFluxWm2 = base.luminosityW / (4 * Math.PI * base.distanceM ** 2);
   base.angularDiameterRad = (2 * base.radiusM) / base.distanceM;
 
-  const triples: [StarQuantity, StarQuantity, StarQuantity][] = [];
+  const triples: [StarQuantitySI, StarQuantitySI, StarQuantitySI][] = [];
   for (let a = 0; a < 6; a++) for (let b = a + 1; b < 6; b++) for (let c = b + 1; c < 6; c++) triples.push([STAR_QUANTITIES[a]!, STAR_QUANTITIES[b]!, STAR_QUANTITIES[c]!]);
   const dependent = new Set([
     "temperatureK,luminosityW,radiusM",
@@ -283,7 +283,7 @@ describe("stellar-parameter solver: uncertainties", () => {
 describe("stellar-parameter solver: bad input", () => {
   it("rejects zero/negative/non-finite values and uncertainties, naming the parameter", () => {
     const good = { temperatureK: m(5000, 0.01), radiusM: m(R_SUN, 0.01), distanceM: m(PARSEC, 0.01) };
-    const names: [StarInputKind, RegExp][] = [
+    const names: [StarInputKindSI, RegExp][] = [
       ["temperatureK", /temperature/],
       ["radiusM", /radius/],
       ["distanceM", /distance/],
@@ -427,7 +427,7 @@ describe("batch solver", () => {
   });
 });
 
-describe("batch solver: specialised {parallax, flux, temperature} loop vs the general loop", () => {
+describe("batch solver: specialized {parallax, flux, temperature} loop vs the general loop", () => {
   const all = () => {
     const n = 2000;
     const c = () => new Float64Array(n);
@@ -442,9 +442,9 @@ describe("batch solver: specialised {parallax, flux, temperature} loop vs the ge
   };
 
   it("is chosen for the three kinds in any order, and only for them", () => {
-    expect(createStarBatchSolverSI(["temperatureK", "parallaxRad", "bolometricFluxWm2"]).specialised).toBe(true);
-    expect(createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialise: false }).specialised).toBe(false);
-    expect(createStarBatchSolverSI(["distanceM", "bolometricFluxWm2", "temperatureK"]).specialised).toBe(false);
+    expect(createStarBatchSolverSI(["temperatureK", "parallaxRad", "bolometricFluxWm2"]).specialized).toBe(true);
+    expect(createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialize: false }).specialized).toBe(false);
+    expect(createStarBatchSolverSI(["distanceM", "bolometricFluxWm2", "temperatureK"]).specialized).toBe(false);
   });
 
   it("gives the general loop's values (≤ 3e-15) and identical reason codes, bad rows included, in any column order", () => {
@@ -467,9 +467,9 @@ describe("batch solver: specialised {parallax, flux, temperature} loop vs the ge
       }
       if (i % 11 === 0) sp[i] = 0; // zero uncertainty is allowed in a batch
     }
-    // specialised, column order (T, p, f); general, order (p, f, T)
+    // specialized, column order (T, p, f); general, order (p, f, T)
     const fast = createStarBatchSolverSI(["temperatureK", "parallaxRad", "bolometricFluxWm2"]);
-    const general = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialise: false });
+    const general = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialize: false });
     const nf = fast.solve({ values: [t, p, f], sigmas: [st, sp, sf] }, a);
     const ng = general.solve({ values: [p, f, t], sigmas: [sp, sf, st] }, b);
     expect(nf).toBe(ng);
@@ -486,11 +486,11 @@ describe("batch solver: specialised {parallax, flux, temperature} loop vs the ge
           expect(y).toBeNaN();
         } else if (y === 0) {
           // σ of a zero-uncertainty input; or the general loop's r² underflowed (relative σ < 1.5e-154)
-          // where the specialised one multiplies by r directly: then x/value is below that too
+          // where the specialized one multiplies by r directly: then x/value is below that too
           const valueKey = k.replace(/^sigma(.)/, (_m, c: string) => c.toLowerCase()) as typeof k;
           expect(x / (a[valueKey] as Float64Array)[i]!).toBeLessThan(1.5e-154);
         } else {
-          // general: products of scaled powers (≤ ~8 roundings); specialised: direct formulas (≤ ~6):
+          // general: products of scaled powers (≤ ~8 roundings); specialized: direct formulas (≤ ~6):
           // together ≲ 14 ε ≈ 3e-15
           expect(rel(x, y)).toBeLessThan(3e-15);
         }
@@ -500,7 +500,7 @@ describe("batch solver: specialised {parallax, flux, temperature} loop vs the ge
 
   it("writes only the requested columns and flags a row only for a requested output out of range", () => {
     const fast = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"]);
-    const general = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialise: false });
+    const general = createStarBatchSolverSI(["parallaxRad", "bolometricFluxWm2", "temperatureK"], { specialize: false });
     const one = (x: number) => Float64Array.of(x);
     // L = 4π f d² overflows (f = 1e300 W m^-2 at d = 1e10 m) but θ = 2√(f/σ)/T² does not
     const input = { values: [one(AU / 1e10), one(1e300), one(1e5)], sigmas: [one(0), one(0), one(0)] } as const;

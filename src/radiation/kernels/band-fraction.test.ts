@@ -16,7 +16,7 @@ import {
   blackbodyPhotonFractionBetweenWavelengthsSI,
 } from "./band-fraction";
 import { planckRadianceWavelengthSI } from "./planck";
-import { WIEN_B_WAVELENGTH } from "./wien";
+import { WIEN_B_WAVELENGTH } from "./displacement";
 
 interface Single {
   lambda: number;

@@ -31,9 +31,9 @@ import { dd, rationalToDD } from "./exact";
 import { FORM_LAMBDA_ENERGY, FORM_NU_ENERGY, computeX } from "./planck-core";
 import { SIGMA_PHOTON, ZETA3, stefanBoltzmannExitanceSI, stefanBoltzmannExitanceUnchecked } from "./stefan-boltzmann";
 
-/** 15/π⁴: normalisation of ∫₀^∞ t³/(eᵗ−1) dt = π⁴/15. */
+/** 15/π⁴: normalization of ∫₀^∞ t³/(eᵗ−1) dt = π⁴/15. */
 const NORM3 = 15 / Math.PI ** 4;
-/** 1/(2ζ(3)): normalisation of ∫₀^∞ t²/(eᵗ−1) dt = Γ(3)ζ(3). */
+/** 1/(2ζ(3)): normalization of ∫₀^∞ t²/(eᵗ−1) dt = Γ(3)ζ(3). */
 const NORM2 = 1 / (2 * ZETA3);
 
 // ---- exact Bernoulli numbers over factorials, β_k = B_k/k! (B_1 = −1/2) ----
@@ -450,7 +450,7 @@ export function blackbodyPhotonFractionBetweenWavelengthsSI(
  * @throws RangeError for bad input
  * @example
  * ```ts
- * blackbodyPhotonFractionAboveFrequencySI(3.288e15, 40000); // H-ionising photons of an O star
+ * blackbodyPhotonFractionAboveFrequencySI(3.288e15, 40000); // H-ionizing photons of an O star
  * ```
  */
 export function blackbodyPhotonFractionAboveFrequencySI(frequencyHz: number, temperatureK: number): number {

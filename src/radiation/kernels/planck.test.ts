@@ -36,7 +36,7 @@ import {
 } from "./planck-core";
 import { C2_HI, H_OVER_K_HI } from "./exact";
 import { blackbodyFractionBetweenWavelengthsSI } from "./band-fraction";
-import { WIEN_B_WAVELENGTH } from "./wien";
+import { WIEN_B_WAVELENGTH } from "./displacement";
 
 interface Row {
   lambda: number;

@@ -80,7 +80,7 @@ describe("physics of the Dirac levels", () => {
     expect(Math.abs(ghz / 10.969 - 1)).toBeLessThan(3e-3);
   });
 
-  it("ionisation energy of H 1s: 13.598 434 eV (from memory, NIST/CODATA)", () => {
+  it("ionization energy of H 1s: 13.598 434 eV (from memory, NIST/CODATA)", () => {
     // Bohr (reduced mass) omits the Dirac binding correction α²/4 = 1.33e-5 (plus Lamb
     // shift 3e-6): tolerance 2e-5. Dirac omits the 1s Lamb shift (8.17 GHz = 3.4e-5 eV,
     // 2.5e-6 relative, from memory): tolerance 4e-6.

@@ -14,7 +14,7 @@
  *   structure (~1e-7 relative for H 1S), the finite nuclear size, and the
  *   next recoil term −μ²c²(f − 1)²/(2(m_e + M)) (≈ 7e-9 relative for H 1S).
  *
- * Energies are measured from the ionisation limit (negative for bound
+ * Energies are measured from the ionization limit (negative for bound
  * levels). Constants: CODATA 2018 via src/values/constants.ts.
  *
  * @packageDocumentation
@@ -143,7 +143,7 @@ export function nuclearMassFromMassNumberKg(massNumber: number, z: number): numb
 
 /**
  * Bohr (Rydberg) energy of level n with reduced-mass correction,
- * E_n = −h c R∞ Z² (μ/m_e) / n², J (negative: measured from the ionisation
+ * E_n = −h c R∞ Z² (μ/m_e) / n², J (negative: measured from the ionization
  * limit). Fine structure, Lamb shift and hyperfine structure are omitted
  * (fine structure is ~(Zα)²/n relative: 5e-5 for H n = 1).
  *
@@ -191,7 +191,7 @@ export function diracFMinusOne(n: number, j: number, z: number): number {
  * Dirac energy of the level (n, j) with the reduced-mass scaling,
  * E(n, j) = μ c² [f(n, j) − 1], f = [1 + (Zα/(n − δ))²]^{−1/2},
  * δ = j + ½ − √((j + ½)² − (Zα)²) — Bethe & Salpeter (1957) §14 with
- * m_e → μ. J, negative (from the ionisation limit). Omitted: Lamb shift,
+ * m_e → μ. J, negative (from the ionization limit). Omitted: Lamb shift,
  * hyperfine structure, finite nuclear size, higher-order recoil (module
  * header). f − 1 (~1e-5) is computed with expm1/log1p.
  *

@@ -29,7 +29,7 @@ describe("Voigt profile vs scipy.special.voigt_profile (fixture faddeeva.json)",
   });
 });
 
-describe("normalisation and limits", () => {
+describe("normalization and limits", () => {
   it("Gaussian and Lorentzian: peak values", () => {
     expect(rel(gaussianProfileSI(0, 2), 1 / (2 * Math.sqrt(Math.PI)))).toBeLessThan(1e-15);
     expect(rel(lorentzianProfileSI(2, 2), 1 / (4 * Math.PI))).toBeLessThan(1e-15);

@@ -1,5 +1,5 @@
 /**
- * Area-normalised line profiles φ(Δ) with ∫ φ dΔ = 1, where Δ is the offset
+ * Area-normalized line profiles φ(Δ) with ∫ φ dΔ = 1, where Δ is the offset
  * from line centre. Offsets and widths may be in any one unit (m of
  * wavelength, Hz of frequency, …); the result is in the inverse unit
  * (m⁻¹, s, …). Parameter conventions:

@@ -105,7 +105,7 @@ describe("properties", () => {
           const e2 = seriesLineEnergySI(name, n1 + k + 1, z, m);
           const lim = seriesLimitEnergySI(name, z, m);
           // Strict increase with n_upper, always below the limit, and the gap to the
-          // limit is exactly the ionisation energy of the upper level.
+          // limit is exactly the ionization energy of the upper level.
           const gap = lim - e;
           return e2 > e && e < lim && rel(gap, ionizationEnergySI(n1 + k, z, m)) < 1e-14 + (4e-16 * lim) / gap;
         },

@@ -1,7 +1,7 @@
 /**
  * Transitions between levels of hydrogen-like ions: energy (J), vacuum
  * wavenumber (m⁻¹), frequency (Hz) and vacuum wavelength (m); the named
- * hydrogen series (Lyman … Humphreys) and their limits; ionisation energies.
+ * hydrogen series (Lyman … Humphreys) and their limits; ionization energies.
  *
  * Bohr transitions use E = h c R∞ Z² (μ/m_e) (1/n₁² − 1/n₂²), with the
  * bracket evaluated as (n₂ − n₁)(n₂ + n₁)/(n₁² n₂²) to avoid cancellation.
@@ -182,7 +182,7 @@ export function diracCentroidTransitionEnergyUnchecked(nLower: number, nUpper: n
 }
 
 /**
- * Ionisation energy from level n in the Bohr model,
+ * Ionization energy from level n in the Bohr model,
  * I_n = h c R∞ Z² (μ/m_e) / n², J (positive).
  *
  * @example
@@ -260,7 +260,7 @@ export function seriesLineEnergySI(series: SeriesName, nUpper: number, z: number
 }
 
 /**
- * Series limit (n_upper → ∞) energy of a named series: the ionisation energy
+ * Series limit (n_upper → ∞) energy of a named series: the ionization energy
  * of its lower level, J.
  *
  * @example

@@ -19,7 +19,7 @@
  * The roots x₂…x₅ are computed once (src/values/wien-roots.ts) and shared
  * with the typed constants `constants.wienB` and `constants.wienBPrime`.
  * Accuracy: each result is one multiplication or division by a constant, so
- * ≤ 2 ulp from the exact-constant value (see kernels/wien.test.ts).
+ * ≤ 2 ulp from the exact-constant value (see kernels/displacement.test.ts).
  *
  * Source: W. Wien, Sitzungsber. Preuss. Akad. Wiss. (1893); CODATA 2018.
  *
@@ -39,88 +39,88 @@ import {
   temperatureFromPhotonPeakFrequencyUnchecked,
   temperatureFromPhotonPeakWavelengthUnchecked,
   temperatureFromPhotonPeakWavenumberUnchecked,
-  wienPeakFrequencyUnchecked,
-  wienPeakWavelengthUnchecked,
-  wienPeakWavenumberUnchecked,
-  wienPhotonPeakFrequencyUnchecked,
-  wienPhotonPeakWavelengthUnchecked,
-  wienPhotonPeakWavenumberUnchecked,
-} from "./kernels/wien";
+  peakFrequencyUnchecked,
+  peakWavelengthUnchecked,
+  peakWavenumberUnchecked,
+  photonPeakFrequencyUnchecked,
+  photonPeakWavelengthUnchecked,
+  photonPeakWavenumberUnchecked,
+} from "./kernels/displacement";
 
-const temperature = lawInput("temperature", kinds.temperature);
-const peakWavelength = lawInput("peakWavelength", kinds.length, { vacuum: true });
-const peakFrequency = lawInput("peakFrequency", kinds.frequency);
-const peakWavenumber = lawInput("peakWavenumber", kinds.wavenumber);
+const temperatureInput = lawInput("temperature", kinds.temperature);
+const peakWavelengthInput = lawInput("peakWavelength", kinds.length, { vacuum: true });
+const peakFrequencyInput = lawInput("peakFrequency", kinds.frequency);
+const peakWavenumberInput = lawInput("peakWavenumber", kinds.wavenumber);
 
-const wienPeakWavelengthLaw = defineLaw({
+const peakWavelengthLaw = defineLaw({
   name: "the peak wavelength",
-  inputs: [temperature],
+  inputs: [temperatureInput],
   result: kinds.length,
-  kernel: wienPeakWavelengthUnchecked,
+  kernel: peakWavelengthUnchecked,
 });
-const wienPeakFrequencyLaw = defineLaw({
+const peakFrequencyLaw = defineLaw({
   name: "the peak frequency",
-  inputs: [temperature],
+  inputs: [temperatureInput],
   result: kinds.frequency,
-  kernel: wienPeakFrequencyUnchecked,
+  kernel: peakFrequencyUnchecked,
 });
-const wienPeakWavenumberLaw = defineLaw({
+const peakWavenumberLaw = defineLaw({
   name: "the peak wavenumber",
-  inputs: [temperature],
+  inputs: [temperatureInput],
   result: kinds.wavenumber,
-  kernel: wienPeakWavenumberUnchecked,
+  kernel: peakWavenumberUnchecked,
 });
-const wienPhotonPeakWavelengthLaw = defineLaw({
+const photonPeakWavelengthLaw = defineLaw({
   name: "the photon peak wavelength",
-  inputs: [temperature],
+  inputs: [temperatureInput],
   result: kinds.length,
-  kernel: wienPhotonPeakWavelengthUnchecked,
+  kernel: photonPeakWavelengthUnchecked,
 });
-const wienPhotonPeakFrequencyLaw = defineLaw({
+const photonPeakFrequencyLaw = defineLaw({
   name: "the photon peak frequency",
-  inputs: [temperature],
+  inputs: [temperatureInput],
   result: kinds.frequency,
-  kernel: wienPhotonPeakFrequencyUnchecked,
+  kernel: photonPeakFrequencyUnchecked,
 });
-const wienPhotonPeakWavenumberLaw = defineLaw({
+const photonPeakWavenumberLaw = defineLaw({
   name: "the photon peak wavenumber",
-  inputs: [temperature],
+  inputs: [temperatureInput],
   result: kinds.wavenumber,
-  kernel: wienPhotonPeakWavenumberUnchecked,
+  kernel: photonPeakWavenumberUnchecked,
 });
 const temperatureFromPeakWavelengthLaw = defineLaw({
   name: "the temperature",
-  inputs: [peakWavelength],
+  inputs: [peakWavelengthInput],
   result: kinds.temperature,
   kernel: temperatureFromPeakWavelengthUnchecked,
 });
 const temperatureFromPeakFrequencyLaw = defineLaw({
   name: "the temperature",
-  inputs: [peakFrequency],
+  inputs: [peakFrequencyInput],
   result: kinds.temperature,
   kernel: temperatureFromPeakFrequencyUnchecked,
 });
 const temperatureFromPeakWavenumberLaw = defineLaw({
   name: "the temperature",
-  inputs: [peakWavenumber],
+  inputs: [peakWavenumberInput],
   result: kinds.temperature,
   kernel: temperatureFromPeakWavenumberUnchecked,
 });
 const temperatureFromPhotonPeakWavelengthLaw = defineLaw({
   name: "the temperature",
-  inputs: [peakWavelength],
+  inputs: [peakWavelengthInput],
   result: kinds.temperature,
   kernel: temperatureFromPhotonPeakWavelengthUnchecked,
 });
 const temperatureFromPhotonPeakFrequencyLaw = defineLaw({
   name: "the temperature",
-  inputs: [peakFrequency],
+  inputs: [peakFrequencyInput],
   result: kinds.temperature,
   kernel: temperatureFromPhotonPeakFrequencyUnchecked,
 });
 const temperatureFromPhotonPeakWavenumberLaw = defineLaw({
   name: "the temperature",
-  inputs: [peakWavenumber],
+  inputs: [peakWavenumberInput],
   result: kinds.temperature,
   kernel: temperatureFromPhotonPeakWavenumberUnchecked,
 });
@@ -133,12 +133,12 @@ const temperatureFromPhotonPeakWavenumberLaw = defineLaw({
  * @throws RangeError when T is not finite and > 0, or λ_max overflows (subnormal T)
  * @example
  * ```ts
- * import { SI, units, wienPeakWavelength } from "starlume";
- * SI.valueIn(wienPeakWavelength(SI, SI.of(5772, units.K)), units.nm); // ≈ 502.0
+ * import { SI, units, peakWavelength } from "starlume";
+ * SI.valueIn(peakWavelength(SI, SI.of(5772, units.K)), units.nm); // ≈ 502.0
  * ```
  */
-export function wienPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
-  return wienPeakWavelengthLaw(sys, temperature);
+export function peakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
+  return peakWavelengthLaw(sys, temperature);
 }
 
 /**
@@ -150,12 +150,12 @@ export function wienPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, tem
  * @throws RangeError when T is not finite and > 0, or ν_max overflows
  * @example
  * ```ts
- * import { SI, units, wienPeakFrequency } from "starlume";
- * SI.valueIn(wienPeakFrequency(SI, SI.of(2.7255, units.K)), units.GHz); // ≈ 160.2 (CMB)
+ * import { SI, units, peakFrequency } from "starlume";
+ * SI.valueIn(peakFrequency(SI, SI.of(2.7255, units.K)), units.GHz); // ≈ 160.2 (CMB)
  * ```
  */
-export function wienPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
-  return wienPeakFrequencyLaw(sys, temperature);
+export function peakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
+  return peakFrequencyLaw(sys, temperature);
 }
 
 /**
@@ -167,12 +167,12 @@ export function wienPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temp
  * @throws RangeError when T is not finite and > 0, or σ̃_max overflows
  * @example
  * ```ts
- * import { CGS, units, wienPeakWavenumber } from "starlume";
- * CGS.valueIn(wienPeakWavenumber(CGS, CGS.of(300, units.K)), units.per_cm); // ≈ 588.3
+ * import { CGS, units, peakWavenumber } from "starlume";
+ * CGS.valueIn(peakWavenumber(CGS, CGS.of(300, units.K)), units.per_cm); // ≈ 588.3
  * ```
  */
-export function wienPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
-  return wienPeakWavenumberLaw(sys, temperature);
+export function peakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
+  return peakWavenumberLaw(sys, temperature);
 }
 
 /**
@@ -183,12 +183,12 @@ export function wienPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, tem
  * @throws RangeError when T is not finite and > 0, or the result overflows
  * @example
  * ```ts
- * import { SI, units, wienPhotonPeakWavelength } from "starlume";
- * SI.valueIn(wienPhotonPeakWavelength(SI, SI.of(5772, units.K)), units.nm); // ≈ 635.8
+ * import { SI, units, photonPeakWavelength } from "starlume";
+ * SI.valueIn(photonPeakWavelength(SI, SI.of(5772, units.K)), units.nm); // ≈ 635.8
  * ```
  */
-export function wienPhotonPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
-  return wienPhotonPeakWavelengthLaw(sys, temperature);
+export function photonPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
+  return photonPeakWavelengthLaw(sys, temperature);
 }
 
 /**
@@ -199,12 +199,12 @@ export function wienPhotonPeakWavelength<S extends SystemName>(sys: UnitSystem<S
  * @throws RangeError when T is not finite and > 0, or the result overflows
  * @example
  * ```ts
- * import { SI, units, wienPhotonPeakFrequency } from "starlume";
- * const nu = wienPhotonPeakFrequency(SI, SI.of(5772, units.K)); // ≈ 1.92e14 Hz
+ * import { SI, units, photonPeakFrequency } from "starlume";
+ * const nu = photonPeakFrequency(SI, SI.of(5772, units.K)); // ≈ 1.92e14 Hz
  * ```
  */
-export function wienPhotonPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
-  return wienPhotonPeakFrequencyLaw(sys, temperature);
+export function photonPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
+  return photonPeakFrequencyLaw(sys, temperature);
 }
 
 /**
@@ -215,12 +215,12 @@ export function wienPhotonPeakFrequency<S extends SystemName>(sys: UnitSystem<S>
  * @throws RangeError when T is not finite and > 0, or the result overflows
  * @example
  * ```ts
- * import { CGS, units, wienPhotonPeakWavenumber } from "starlume";
- * const k = wienPhotonPeakWavenumber(CGS, CGS.of(5772, units.K)); // ≈ 6393 cm^-1
+ * import { CGS, units, photonPeakWavenumber } from "starlume";
+ * const k = photonPeakWavenumber(CGS, CGS.of(5772, units.K)); // ≈ 6393 cm^-1
  * ```
  */
-export function wienPhotonPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
-  return wienPhotonPeakWavenumberLaw(sys, temperature);
+export function photonPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
+  return photonPeakWavenumberLaw(sys, temperature);
 }
 
 /**
