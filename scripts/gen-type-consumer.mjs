@@ -29,7 +29,7 @@ const ops = [
   (i) => `const k${i} = s.planckRadianceWavelength(CGS, CGS.of(500, units.nm), c${i - 7});`,
   (i) => `const l${i}: boolean = s.lt(a${i - 10}, f${i - 5});`,
   (i) => `const m${i} = s.scale(j${i - 3}, 2);`,
-  (i) => `const n${i}: Length<"CGS"> = s.wienPeakWavelength(CGS, c${i - 10});`,
+  (i) => `const n${i}: Length<"CGS"> = s.peakWavelength(CGS, c${i - 10});`,
   (i) => `const o${i} = s.pow(b${i - 12}, 2);`,
   (i) => `const p${i}: Flux<"SI"> = s.fluxFromLuminosity(SI, j${i - 6}, a${i - 14});`,
 ];

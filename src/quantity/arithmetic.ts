@@ -169,7 +169,7 @@ export function abs<Q extends AnyQuantity>(a: Q): Q {
  * @example
  * ```ts
  * import { SI, mul, units, type Area, type Length } from "starlume";
- * const r = SI.of(1, units.Rsol);
+ * const r = SI.of(1, units.Rsun);
  * const a: Area<"SI"> = mul(r, r);
  * const d: Length<"SI"> = mul(2, r);
  * ```

@@ -9,7 +9,7 @@ import {
   CGS,
   SI,
   add,
-  airToVacuum,
+  vacuumFromAir,
   angularDiameter,
   asSolidAngle,
   ccm89Extinction,
@@ -30,12 +30,12 @@ import {
   min,
   mul,
   parallaxFromDistance,
-  photonEnergyFromWavelength,
+  photonEnergyFromVacuumWavelength,
   planckRadianceWavelength,
   pow,
   reddenFlux,
   scale,
-  solidAngleOfDisk,
+  solidAngleFromAngularDiameter,
   sqrt,
   stefanBoltzmannExitance,
   sub,
@@ -44,7 +44,7 @@ import {
   temperatureFromExitance,
   units,
   vacuumWavelength,
-  wienPeakWavelength,
+  peakWavelength,
   type AirWavelength,
   type Angle,
   type Area,
@@ -154,7 +154,7 @@ describe("generic code over S extends SystemName", () => {
     }
     // ok: a generic pipeline step: T → peak λ → photon energy
     function peakPhoton<S extends SystemName>(sys: UnitSystem<S>, temp: Temperature): Energy<S> {
-      return photonEnergyFromWavelength(sys, wienPeakWavelength(sys, temp));
+      return photonEnergyFromVacuumWavelength(sys, peakWavelength(sys, temp));
     }
     // ok: each used in both systems
     expectTypeOf(lum(SI, rSI, T)).toEqualTypeOf<Power<"SI">>();
@@ -195,7 +195,7 @@ describe("vacuum-wavelength laws", () => {
     // ok: branded vacuum wavelength to f_ν ← f_λ
     fNuFromFLambda(SI, fLamSI, vac);
     // ok: an air wavelength converted first
-    fNuFromFLambda(SI, fLamSI, airToVacuum(SI, air));
+    fNuFromFLambda(SI, fLamSI, vacuumFromAir(SI, air));
     // ok: CCM89 at a vacuum wavelength
     ccm89Ratio(SI, vac);
     // ok: CCM89 at an unmarked wavelength
@@ -241,7 +241,7 @@ describe("pipeline steps", () => {
     // ok: surface brightness of a disk
     const I: Radiance<"SI"> = surfaceBrightness(SI, FSI, th);
     // ok: solid angle of a disk
-    const om: SolidAngle = solidAngleOfDisk(th);
+    const om: SolidAngle = solidAngleFromAngularDiameter(th);
     // ok: angle² made a solid angle explicitly
     const om2: SolidAngle = asSolidAngle(mul(theta, theta));
     // ok: radiance × solid angle is a flux

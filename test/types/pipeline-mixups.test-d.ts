@@ -12,7 +12,7 @@ import {
   SI,
   abMagnitude,
   add,
-  airToVacuum,
+  vacuumFromAir,
   angularDiameter,
   apparentBolometricMagnitude,
   brightnessTemperatureFrequency,
@@ -42,13 +42,13 @@ import {
   near,
   parallaxFromDistance,
   photonEnergyFromFrequency,
-  photonEnergyFromWavelength,
+  photonEnergyFromVacuumWavelength,
   planckRadianceFrequency,
   planckRadianceWavelength,
   radiusFromAngularDiameter,
   reddenFlux,
   scale,
-  solidAngleOfDisk,
+  solidAngleFromAngularDiameter,
   sqrt,
   stefanBoltzmannExitance,
   sub,
@@ -57,8 +57,8 @@ import {
   temperatureFromExitance,
   temperatureFromPeakWavelength,
   units,
-  vacuumToAir,
-  wienPeakWavelength,
+  airFromVacuum,
+  peakWavelength,
   type AirWavelength,
   type Angle,
   type Area,
@@ -122,7 +122,7 @@ declare const mag: number;
 describe("system mixes through helpers and arrays", () => {
   test("helpers that return one system fed to another", () => {
     // @ts-expect-error an SI peak wavelength into a CGS Planck call
-    planckRadianceWavelength(CGS, wienPeakWavelength(SI, T), T);
+    planckRadianceWavelength(CGS, peakWavelength(SI, T), T);
     // @ts-expect-error a CGS luminosity into an SI inverse-square law
     fluxFromLuminosity(SI, luminosityFromRadiusTemperature(CGS, rCGS, T), dSI);
     // @ts-expect-error an SI flux into a CGS luminosity
@@ -292,7 +292,7 @@ describe("air against vacuum", () => {
     // @ts-expect-error Planck at an air wavelength
     planckRadianceWavelength(SI, air, T);
     // @ts-expect-error photon energy at an air wavelength
-    photonEnergyFromWavelength(SI, air);
+    photonEnergyFromVacuumWavelength(SI, air);
     // @ts-expect-error frequency of an air wavelength
     frequencyFromVacuumWavelength(SI, air);
     // @ts-expect-error Wien temperature from an air peak
@@ -300,9 +300,9 @@ describe("air against vacuum", () => {
     // @ts-expect-error brightness temperature at an air wavelength
     brightnessTemperatureWavelength(SI, air, bLamSI);
     // @ts-expect-error converting air to air
-    airToVacuum(SI, vac);
+    vacuumFromAir(SI, vac);
     // @ts-expect-error converting vacuum to vacuum
-    vacuumToAir(SI, air);
+    airFromVacuum(SI, air);
     // @ts-expect-error an air wavelength is not a vacuum wavelength
     const v: VacuumWavelength<"SI"> = air;
     // @ts-expect-error a vacuum wavelength is not an air wavelength
@@ -326,7 +326,7 @@ describe("angle, solid angle and length", () => {
     // @ts-expect-error surface brightness takes the angular diameter, not a solid angle
     surfaceBrightness(SI, FSI, omega);
     // @ts-expect-error solid angle of a disk from a length
-    solidAngleOfDisk(rSI);
+    solidAngleFromAngularDiameter(rSI);
     // @ts-expect-error radius from a solid angle
     radiusFromAngularDiameter(SI, omega, dSI);
     // @ts-expect-error adding an angle and a solid angle
