@@ -67,10 +67,12 @@ for (const [name, doc, exps] of defs) {
   out.push(`/** Dimension of ${name}. ${doc} */`);
   out.push(`export type ${name}Dimension = L_M_T_K_N_A_Sr<${keys.map((k) => exps[k] ?? 0).join(", ")}>;`);
   if (free) {
-    out.push(`/** ${doc} System-free: the same value in SI and CGS. The optional \`S\` is accepted and ignored. */`);
-    out.push(`export type ${name}<S extends SystemName = SystemName> = Quantity<${name}Dimension, S>;`);
-    out.push(`/** A \`Float64Array\` of ${name} values. */`);
-    out.push(`export type ${name}Array<S extends SystemName = SystemName> = QuantityArray<${name}Dimension, S>;`);
+    // No type parameter: a system-free alias with an ignored `S` printed as
+    // `Time<S>` in hovers and errors (the body does not depend on `S`).
+    out.push(`/** ${doc} System-free: the same value in SI and CGS, so it takes no system argument. */`);
+    out.push(`export type ${name} = Quantity<${name}Dimension, "SI=CGS">;`);
+    out.push(`/** A \`Float64Array\` of ${name} values (system-free). */`);
+    out.push(`export type ${name}Array = QuantityArray<${name}Dimension, SystemName>;`);
   } else {
     out.push(`/** ${doc} \`S\` is the system its value is expressed in. */`);
     out.push(`export type ${name}<S extends SystemName> = Quantity<${name}Dimension, S>;`);

@@ -26,9 +26,15 @@
 import { defineLaw } from "../law/define";
 import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
-import type { Length } from "../quantity/aliases";
-import type { Dimension } from "../quantity/dimension";
-import type { AnyQuantity, Brand, Pure, SystemName, SystemTag } from "../quantity/quantity";
+import type {
+  Flux,
+  PhotonFlux,
+  SpectralFluxPerFrequency,
+  SpectralFluxPerWavelength,
+  SpectralFluxPerWavenumber,
+} from "../quantity/aliases";
+import type { NotAirWavelength } from "../quantity/medium";
+import type { Pure, SystemName } from "../quantity/quantity";
 import { SI, type UnitSystem } from "../quantity/system";
 import {
   aVFromColorExcessUnchecked,
@@ -51,6 +57,7 @@ const mag = (name: string) => lawInput(name, kinds.dimensionless, { check: "fini
 
 /** λ in the CCM89 fit range, x = 1/λ in [0.3, 10] µm⁻¹ (bounds in SI: 1e-7 m to 3.333…e-6 m). */
 const wavelengthIn = lawInput("wavelength", kinds.length, {
+  vacuum: true,
   min: 1e-6 / CCM89_X_MAX_INV_UM,
   max: 1e-6 / CCM89_X_MIN_INV_UM,
   rangeNote: "x = 1/λ in [0.3, 10] µm^-1 for the CCM89 law",
@@ -77,33 +84,19 @@ export const RV_DIFFUSE: number = RV_DIFFUSE_ISM;
 export const CCM89_RV_RANGE: readonly [number, number] = [CCM89_RV_FIT_MIN, CCM89_RV_FIT_MAX];
 
 /**
- * A flux-like quantity that extinction dims: energy flux, flux density per
- * frequency or wavelength, radiance and their spectral forms (mass¹ and
- * time⁻³ or time⁻²), or photon fluxes and radiances (time⁻¹, per area).
+ * A flux-like quantity that extinction dims, in either system: bolometric
+ * (energy) flux, spectral flux density per wavelength, per frequency or per
+ * wavenumber, or photon flux. Exactly these kinds: a power (luminosity), an
+ * energy, a force or a radiance does not compile (extinction dims what
+ * reaches the observer per unit area; magnitudes go through
+ * {@link reddenMagnitude}).
  */
 export type FluxLike =
-  | (AnyQuantity &
-      Brand<
-        Dimension & {
-          /** Mass exponent 1: an energy quantity (W = kg m² s⁻³). */
-          readonly mass: 1;
-          /** Time exponent −3 (flux, radiance and their per-wavelength or per-wavenumber forms) or −2 (their per-frequency forms). */
-          readonly time: -3 | -2;
-        },
-        SystemTag
-      >)
-  | (AnyQuantity &
-      Brand<
-        Dimension & {
-          /** Mass exponent 0: a photon (count) quantity. */
-          readonly mass: 0;
-          /** Time exponent −1: photons per second. */
-          readonly time: -1;
-          /** Length exponent −2 (photons per area), −3 (per area per wavelength) or −1 (per area per wavenumber). */
-          readonly length: -1 | -2 | -3;
-        },
-        SystemTag
-      >);
+  | Flux<SystemName>
+  | SpectralFluxPerWavelength<SystemName>
+  | SpectralFluxPerFrequency<SystemName>
+  | SpectralFluxPerWavenumber<SystemName>
+  | PhotonFlux<SystemName>;
 
 /**
  * CCM89 extinction curve A_λ / A_V = a(x) + b(x)/R_V at a wavelength.
@@ -120,7 +113,7 @@ export type FluxLike =
  * ccm89Ratio(SI, SI.of(440, units.nm), 3.1); // B band, ≈ 1.32
  * ```
  */
-export function ccm89Ratio<S extends SystemName>(sys: UnitSystem<S>, wavelength: Length<NoInfer<S>>, rV: Pure = RV_DIFFUSE_ISM): number {
+export function ccm89Ratio<S extends SystemName>(sys: UnitSystem<S>, wavelength: NotAirWavelength<NoInfer<S>>, rV: Pure = RV_DIFFUSE_ISM): number {
   return ratioLaw(sys, wavelength, rV);
 }
 
@@ -141,7 +134,7 @@ export function ccm89Ratio<S extends SystemName>(sys: UnitSystem<S>, wavelength:
  */
 export function ccm89Extinction<S extends SystemName>(
   sys: UnitSystem<S>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
   aV: Pure,
   rV: Pure = RV_DIFFUSE_ISM,
 ): number {
@@ -187,7 +180,7 @@ export function colourExcessFromAV(aV: Pure, rV: Pure = RV_DIFFUSE_ISM): number 
  * Redden a flux-like quantity: F_obs = F_intrinsic × 10^(A/−2.5). Returns the
  * type it was given (an SI f_λ stays an SI f_λ).
  *
- * @param flux - intrinsic flux, flux density or radiance (> 0)
+ * @param flux - intrinsic flux or flux density (> 0; see {@link FluxLike})
  * @param extinction - A at its wavelength or band, mag
  * @returns the extinguished value, same type (underflows to 0 for A ≳ 800 mag)
  * @throws RangeError naming `flux` or `extinction`
@@ -206,7 +199,7 @@ export function reddenFlux<Q extends FluxLike>(flux: Q, extinction: Pure): Q {
 /**
  * Deredden (correct) a flux-like quantity: F_intrinsic = F_obs × 10^(A/2.5).
  *
- * @param flux - observed flux, flux density or radiance (> 0)
+ * @param flux - observed flux or flux density (> 0; see {@link FluxLike})
  * @param extinction - A at its wavelength or band, mag
  * @returns the corrected value, same type
  * @throws RangeError naming `flux` or `extinction`, or on overflow

@@ -37,6 +37,7 @@ import { defineLaw } from "../law/define";
 import { lawInput } from "../law/input";
 import { kinds } from "../quantity/aliases";
 import type { Flux, Length, Power, SpectralFluxPerFrequency, SpectralFluxPerWavelength } from "../quantity/aliases";
+import type { NotAirWavelength } from "../quantity/medium";
 import type { AnyQuantity, Pure, SystemName } from "../quantity/quantity";
 import { SI, type UnitSystem } from "../quantity/system";
 import {
@@ -65,7 +66,7 @@ const luminosityIn = lawInput("luminosity", kinds.power);
 const bolometricFluxIn = lawInput("bolometric flux", kinds.flux);
 const fNuIn = lawInput("spectral flux density f_nu", kinds.spectralFluxPerFrequency);
 const fLambdaIn = lawInput("spectral flux density f_lambda", kinds.spectralFluxPerWavelength);
-const wavelengthIn = lawInput("wavelength", kinds.length);
+const wavelengthIn = lawInput("wavelength", kinds.length, { vacuum: true });
 const extinctionIn = mag("extinction");
 
 const magnitudeDifferenceLaw = defineLaw({
@@ -394,7 +395,7 @@ export function fNuFromAbMagnitude<S extends SystemName>(sys: UnitSystem<S>, abM
 export function fLambdaFromFNu<S extends SystemName>(
   sys: UnitSystem<S>,
   fNu: SpectralFluxPerFrequency<NoInfer<S>>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
 ): SpectralFluxPerWavelength<S> {
   return fLambdaLaw(sys, fNu, wavelength);
 }
@@ -418,7 +419,7 @@ export function fLambdaFromFNu<S extends SystemName>(
 export function fNuFromFLambda<S extends SystemName>(
   sys: UnitSystem<S>,
   fLambda: SpectralFluxPerWavelength<NoInfer<S>>,
-  wavelength: Length<NoInfer<S>>,
+  wavelength: NotAirWavelength<NoInfer<S>>,
 ): SpectralFluxPerFrequency<S> {
   return fNuLaw(sys, fLambda, wavelength);
 }

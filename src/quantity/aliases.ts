@@ -10,10 +10,10 @@ import type { Quantity, QuantityArray, SystemName } from "./quantity";
 
 /** Dimension of Dimensionless. A pure number (ratio, count, magnitude difference). */
 export type DimensionlessDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, 0, 0, 0>;
-/** A pure number (ratio, count, magnitude difference). System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
-export type Dimensionless<S extends SystemName = SystemName> = Quantity<DimensionlessDimension, S>;
-/** A `Float64Array` of Dimensionless values. */
-export type DimensionlessArray<S extends SystemName = SystemName> = QuantityArray<DimensionlessDimension, S>;
+/** A pure number (ratio, count, magnitude difference). System-free: the same value in SI and CGS, so it takes no system argument. */
+export type Dimensionless = Quantity<DimensionlessDimension, "SI=CGS">;
+/** A `Float64Array` of Dimensionless values (system-free). */
+export type DimensionlessArray = QuantityArray<DimensionlessDimension, SystemName>;
 
 /** Dimension of Length. Length: m (SI) or cm (CGS). */
 export type LengthDimension = L_M_T_K_N_A_Sr<1, 0, 0, 0, 0, 0, 0>;
@@ -31,38 +31,38 @@ export type MassArray<S extends SystemName> = QuantityArray<MassDimension, S>;
 
 /** Dimension of Time. Time: s in both systems. */
 export type TimeDimension = L_M_T_K_N_A_Sr<0, 0, 1, 0, 0, 0, 0>;
-/** Time: s in both systems. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
-export type Time<S extends SystemName = SystemName> = Quantity<TimeDimension, S>;
-/** A `Float64Array` of Time values. */
-export type TimeArray<S extends SystemName = SystemName> = QuantityArray<TimeDimension, S>;
+/** Time: s in both systems. System-free: the same value in SI and CGS, so it takes no system argument. */
+export type Time = Quantity<TimeDimension, "SI=CGS">;
+/** A `Float64Array` of Time values (system-free). */
+export type TimeArray = QuantityArray<TimeDimension, SystemName>;
 
 /** Dimension of Temperature. Thermodynamic temperature: K in both systems. */
 export type TemperatureDimension = L_M_T_K_N_A_Sr<0, 0, 0, 1, 0, 0, 0>;
-/** Thermodynamic temperature: K in both systems. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
-export type Temperature<S extends SystemName = SystemName> = Quantity<TemperatureDimension, S>;
-/** A `Float64Array` of Temperature values. */
-export type TemperatureArray<S extends SystemName = SystemName> = QuantityArray<TemperatureDimension, S>;
+/** Thermodynamic temperature: K in both systems. System-free: the same value in SI and CGS, so it takes no system argument. */
+export type Temperature = Quantity<TemperatureDimension, "SI=CGS">;
+/** A `Float64Array` of Temperature values (system-free). */
+export type TemperatureArray = QuantityArray<TemperatureDimension, SystemName>;
 
 /** Dimension of Amount. Amount of substance: mol in both systems. */
 export type AmountDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, 1, 0, 0>;
-/** Amount of substance: mol in both systems. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
-export type Amount<S extends SystemName = SystemName> = Quantity<AmountDimension, S>;
-/** A `Float64Array` of Amount values. */
-export type AmountArray<S extends SystemName = SystemName> = QuantityArray<AmountDimension, S>;
+/** Amount of substance: mol in both systems. System-free: the same value in SI and CGS, so it takes no system argument. */
+export type Amount = Quantity<AmountDimension, "SI=CGS">;
+/** A `Float64Array` of Amount values (system-free). */
+export type AmountArray = QuantityArray<AmountDimension, SystemName>;
 
 /** Dimension of Angle. Plane angle: rad in both systems (a dimension of its own here). */
 export type AngleDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, 0, 1, 0>;
-/** Plane angle: rad in both systems (a dimension of its own here). System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
-export type Angle<S extends SystemName = SystemName> = Quantity<AngleDimension, S>;
-/** A `Float64Array` of Angle values. */
-export type AngleArray<S extends SystemName = SystemName> = QuantityArray<AngleDimension, S>;
+/** Plane angle: rad in both systems (a dimension of its own here). System-free: the same value in SI and CGS, so it takes no system argument. */
+export type Angle = Quantity<AngleDimension, "SI=CGS">;
+/** A `Float64Array` of Angle values (system-free). */
+export type AngleArray = QuantityArray<AngleDimension, SystemName>;
 
 /** Dimension of SolidAngle. Solid angle: sr in both systems (a dimension of its own here). */
 export type SolidAngleDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, 0, 0, 1>;
-/** Solid angle: sr in both systems (a dimension of its own here). System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
-export type SolidAngle<S extends SystemName = SystemName> = Quantity<SolidAngleDimension, S>;
-/** A `Float64Array` of SolidAngle values. */
-export type SolidAngleArray<S extends SystemName = SystemName> = QuantityArray<SolidAngleDimension, S>;
+/** Solid angle: sr in both systems (a dimension of its own here). System-free: the same value in SI and CGS, so it takes no system argument. */
+export type SolidAngle = Quantity<SolidAngleDimension, "SI=CGS">;
+/** A `Float64Array` of SolidAngle values (system-free). */
+export type SolidAngleArray = QuantityArray<SolidAngleDimension, SystemName>;
 
 /** Dimension of Area. Area: m² or cm². */
 export type AreaDimension = L_M_T_K_N_A_Sr<2, 0, 0, 0, 0, 0, 0>;
@@ -94,10 +94,10 @@ export type AccelerationArray<S extends SystemName> = QuantityArray<Acceleration
 
 /** Dimension of Frequency. Frequency: Hz in both systems. */
 export type FrequencyDimension = L_M_T_K_N_A_Sr<0, 0, -1, 0, 0, 0, 0>;
-/** Frequency: Hz in both systems. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
-export type Frequency<S extends SystemName = SystemName> = Quantity<FrequencyDimension, S>;
-/** A `Float64Array` of Frequency values. */
-export type FrequencyArray<S extends SystemName = SystemName> = QuantityArray<FrequencyDimension, S>;
+/** Frequency: Hz in both systems. System-free: the same value in SI and CGS, so it takes no system argument. */
+export type Frequency = Quantity<FrequencyDimension, "SI=CGS">;
+/** A `Float64Array` of Frequency values (system-free). */
+export type FrequencyArray = QuantityArray<FrequencyDimension, SystemName>;
 
 /** Dimension of Wavenumber. Wavenumber (inverse length): m⁻¹ or cm⁻¹. */
 export type WavenumberDimension = L_M_T_K_N_A_Sr<-1, 0, 0, 0, 0, 0, 0>;
@@ -220,10 +220,10 @@ export type SpectralFluxPerWavenumberArray<S extends SystemName> = QuantityArray
 
 /** Dimension of PhotonRate. Photon emission rate: photons s⁻¹ (dimension of a frequency). */
 export type PhotonRateDimension = L_M_T_K_N_A_Sr<0, 0, -1, 0, 0, 0, 0>;
-/** Photon emission rate: photons s⁻¹ (dimension of a frequency). System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
-export type PhotonRate<S extends SystemName = SystemName> = Quantity<PhotonRateDimension, S>;
-/** A `Float64Array` of PhotonRate values. */
-export type PhotonRateArray<S extends SystemName = SystemName> = QuantityArray<PhotonRateDimension, S>;
+/** Photon emission rate: photons s⁻¹ (dimension of a frequency). System-free: the same value in SI and CGS, so it takes no system argument. */
+export type PhotonRate = Quantity<PhotonRateDimension, "SI=CGS">;
+/** A `Float64Array` of PhotonRate values (system-free). */
+export type PhotonRateArray = QuantityArray<PhotonRateDimension, SystemName>;
 
 /** Dimension of PhotonFlux. Photon flux: photons s⁻¹ m⁻² or cm⁻². */
 export type PhotonFluxDimension = L_M_T_K_N_A_Sr<-2, 0, -1, 0, 0, 0, 0>;
@@ -276,10 +276,10 @@ export type LengthTemperatureArray<S extends SystemName> = QuantityArray<LengthT
 
 /** Dimension of FrequencyPerTemperature. Frequency per kelvin (Wien's b′): Hz K⁻¹. */
 export type FrequencyPerTemperatureDimension = L_M_T_K_N_A_Sr<0, 0, -1, -1, 0, 0, 0>;
-/** Frequency per kelvin (Wien's b′): Hz K⁻¹. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
-export type FrequencyPerTemperature<S extends SystemName = SystemName> = Quantity<FrequencyPerTemperatureDimension, S>;
-/** A `Float64Array` of FrequencyPerTemperature values. */
-export type FrequencyPerTemperatureArray<S extends SystemName = SystemName> = QuantityArray<FrequencyPerTemperatureDimension, S>;
+/** Frequency per kelvin (Wien's b′): Hz K⁻¹. System-free: the same value in SI and CGS, so it takes no system argument. */
+export type FrequencyPerTemperature = Quantity<FrequencyPerTemperatureDimension, "SI=CGS">;
+/** A `Float64Array` of FrequencyPerTemperature values (system-free). */
+export type FrequencyPerTemperatureArray = QuantityArray<FrequencyPerTemperatureDimension, SystemName>;
 
 /** Dimension of PowerArea. Power × area (c₁): W m². */
 export type PowerAreaDimension = L_M_T_K_N_A_Sr<4, 1, -3, 0, 0, 0, 0>;
@@ -297,10 +297,10 @@ export type PowerAreaPerSolidAngleArray<S extends SystemName> = QuantityArray<Po
 
 /** Dimension of PerAmount. Per mole (Avogadro): mol⁻¹. */
 export type PerAmountDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, -1, 0, 0>;
-/** Per mole (Avogadro): mol⁻¹. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
-export type PerAmount<S extends SystemName = SystemName> = Quantity<PerAmountDimension, S>;
-/** A `Float64Array` of PerAmount values. */
-export type PerAmountArray<S extends SystemName = SystemName> = QuantityArray<PerAmountDimension, S>;
+/** Per mole (Avogadro): mol⁻¹. System-free: the same value in SI and CGS, so it takes no system argument. */
+export type PerAmount = Quantity<PerAmountDimension, "SI=CGS">;
+/** A `Float64Array` of PerAmount values (system-free). */
+export type PerAmountArray = QuantityArray<PerAmountDimension, SystemName>;
 
 /** Dimension of MolarHeatCapacity. J mol⁻¹ K⁻¹ (gas constant). */
 export type MolarHeatCapacityDimension = L_M_T_K_N_A_Sr<2, 1, -2, -1, -1, 0, 0>;
@@ -311,10 +311,10 @@ export type MolarHeatCapacityArray<S extends SystemName> = QuantityArray<MolarHe
 
 /** Dimension of AngularArea. Angle squared (rad²): not a solid angle; see `asSolidAngle`. */
 export type AngularAreaDimension = L_M_T_K_N_A_Sr<0, 0, 0, 0, 0, 2, 0>;
-/** Angle squared (rad²): not a solid angle; see `asSolidAngle`. System-free: the same value in SI and CGS. The optional `S` is accepted and ignored. */
-export type AngularArea<S extends SystemName = SystemName> = Quantity<AngularAreaDimension, S>;
-/** A `Float64Array` of AngularArea values. */
-export type AngularAreaArray<S extends SystemName = SystemName> = QuantityArray<AngularAreaDimension, S>;
+/** Angle squared (rad²): not a solid angle; see `asSolidAngle`. System-free: the same value in SI and CGS, so it takes no system argument. */
+export type AngularArea = Quantity<AngularAreaDimension, "SI=CGS">;
+/** A `Float64Array` of AngularArea values (system-free). */
+export type AngularAreaArray = QuantityArray<AngularAreaDimension, SystemName>;
 
 /** A named kind of quantity: a name and its runtime dimension. Used to check parsed text and to convert between systems. */
 export interface Kind<D extends Dimension = Dimension> {

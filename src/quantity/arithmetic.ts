@@ -5,26 +5,33 @@
  * - `add`, `sub`, comparisons, `min`, `max`, `sum`: operands must share
  *   dimension and system (a CGS length never adds to an SI length).
  * - `mul`, `div`: dimensions combine; an SI operand may meet an SI or a
- *   system-free operand (or a plain number), never a CGS one.
+ *   system-free operand, never a CGS one. A plain number is a dimensionless
+ *   operand (`mul(r, 2)` keeps `r`'s type).
  * - `pow`, `sqrt`, `cbrt`: integer powers from -4 to 4; roots only where every
  *   exponent divides evenly (a compile error otherwise).
  *
  * @module
  */
-import type { HasNever, DimCbrt, DimInverse, DimPower, DimProduct, DimQuotient, DimSqrt, PowerExponent } from "./dimension";
+import type { BaseDimension, CheckedDimension, Dimension, HasNever, DimCbrt, DimInverse, DimPower, DimProduct, DimQuotient, DimSqrt, PowerExponent } from "./dimension";
 import type {
   AnyQuantity,
+  Brand,
   CombinedTag,
+  Quantity,
   DimensionOf,
+  FactorFor,
   OperandFor,
   Pure,
   QuantityWithTag,
   SystemOf,
+  SystemTag,
 } from "./quantity";
+import type { HalfTable, ThirdTable } from "./exponents";
 
 /**
  * An operand of `mul`, `div`, `inv`, `pow`, `sqrt`, `cbrt`: a branded
- * quantity. (Multiply by a plain number with {@link scale}.)
+ * quantity. (`mul` and `div` also take a plain number as a dimensionless
+ * operand.)
  */
 export type Operand = AnyQuantity;
 
@@ -40,22 +47,54 @@ export type Quotient<A extends AnyQuantity, B extends AnyQuantity> = QuantityWit
   CombinedTag<SystemOf<A>, SystemOf<B>>
 >;
 
+
+/**
+ * The type of `mul(a, b)` where either operand may be a plain number (a
+ * dimensionless factor: the other operand's type is kept as it is). The
+ * tests use `Brand<any, any>` so that they hold for a generic system `S` too.
+ */
+export type MulResult<A, B> = A extends AnyBrand ? (B extends AnyBrand ? Product<A, B> : A) : B extends AnyBrand ? B : number;
+
+/** The type of `div(a, b)` where either operand may be a plain number. */
+export type DivResult<A, B> = A extends AnyBrand ? (B extends AnyBrand ? Quotient<A, B> : A) : B extends AnyBrand ? Inverse<B> : number;
+
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+type AnyBrand = number & Brand<any, any>;
+
 /** The type of `1 / a`. */
 export type Inverse<A extends AnyQuantity> = QuantityWithTag<DimInverse<DimensionOf<A>>, SystemOf<A>>;
+
+/**
+ * The type of a root: `never` where an exponent does not divide (the
+ * argument is then already an error naming the odd exponent, and `never`
+ * keeps a second, less helpful error off the result).
+ */
+export type Root<D, T extends SystemTag> =
+  CheckedDimension<D> extends infer C ? (C extends Dimension ? Quantity<C, T> : never) : never;
 
 /** The type of `a ** n` (named `Raised` because `Power` is the physical quantity). */
 export type Raised<A extends AnyQuantity, N extends PowerExponent> = QuantityWithTag<DimPower<DimensionOf<A>, N>, SystemOf<A>>;
 
-/** Marker in a compile error: a square root needs every exponent even. */
-export interface SquareRootNeedsEvenExponents<Q> {
-  /** The key is the message the compile error shows; `Q` is the offending quantity type. Never present at run time. */
-  readonly "cannot take the square root: some dimension exponent is odd": Q;
+/** The names of the base dimensions whose exponent in `D` fails a root (`T` is the halving or third table). */
+type FailingDimensions<D extends Dimension, T extends HalfTable | ThirdTable> = {
+  [K in BaseDimension]: [T[`${D[K]}`]] extends [never] ? K : never;
+}[BaseDimension];
+
+/**
+ * Marker in a compile error: a square root needs every exponent even. The
+ * type argument names the base dimension(s) with an odd exponent, so the
+ * first line of the error reads e.g.
+ * `… not assignable to parameter of type 'SquareRootNeedsEvenExponents<"length">'`.
+ */
+export interface SquareRootNeedsEvenExponents<Odd extends BaseDimension> {
+  /** The key is the message the compile error shows; `Odd` names the odd exponents. Never present at run time. */
+  readonly "cannot take the square root: an exponent is odd": Odd;
 }
 
-/** Marker in a compile error: a cube root needs every exponent divisible by 3. */
-export interface CubeRootNeedsExponentsDivisibleBy3<Q> {
-  /** The key is the message the compile error shows; `Q` is the offending quantity type. Never present at run time. */
-  readonly "cannot take the cube root: some dimension exponent is not divisible by 3": Q;
+/** Marker in a compile error: a cube root needs every exponent divisible by 3 (the type argument names those that are not). */
+export interface CubeRootNeedsExponentsDivisibleBy3<Bad extends BaseDimension> {
+  /** The key is the message the compile error shows; `Bad` names the exponents not divisible by 3. Never present at run time. */
+  readonly "cannot take the cube root: an exponent is not divisible by 3": Bad;
 }
 
 type IsUnion<T, U = T> = T extends unknown ? ([U] extends [T] ? false : true) : never;
@@ -123,21 +162,26 @@ export function abs<Q extends AnyQuantity>(a: Q): Q {
 
 /**
  * Product; dimensions add exponent-wise. Mixing SI and CGS operands does not
- * compile; system-free quantities and plain numbers combine with either.
+ * compile; system-free quantities and plain numbers combine with either. A
+ * plain number is a dimensionless operand: `mul(r, 2)` and `mul(2, r)` are
+ * `r`'s type, like `scale(r, 2)`.
  *
  * @example
  * ```ts
- * import { SI, mul, units, type Area } from "starlume";
+ * import { SI, mul, units, type Area, type Length } from "starlume";
  * const r = SI.of(1, units.Rsun);
  * const a: Area<"SI"> = mul(r, r);
+ * const d: Length<"SI"> = mul(2, r);
  * ```
  */
-export function mul<A extends Operand, B extends OperandFor<SystemOf<A>>>(a: A, b: B): Product<A, B> {
-  return (a * b) as Product<A, B>;
+export function mul<A extends number, B extends FactorFor<SystemOf<A & AnyQuantity>>>(a: A, b: B): MulResult<A, B> {
+  return (a * b) as MulResult<A, B>;
 }
 
 /**
- * Quotient; dimensions subtract exponent-wise. Same system rule as {@link mul}.
+ * Quotient; dimensions subtract exponent-wise. Same system rule as {@link mul};
+ * a plain number is a dimensionless operand (`div(r, 2)` is a length,
+ * `div(1, t)` a frequency).
  *
  * @example
  * ```ts
@@ -145,8 +189,8 @@ export function mul<A extends Operand, B extends OperandFor<SystemOf<A>>>(a: A, 
  * const v: Velocity<"SI"> = div(SI.of(1, units.au), SI.of(1, units.day));
  * ```
  */
-export function div<A extends Operand, B extends OperandFor<SystemOf<A>>>(a: A, b: B): Quotient<A, B> {
-  return (a / b) as Quotient<A, B>;
+export function div<A extends number, B extends FactorFor<SystemOf<A & AnyQuantity>>>(a: A, b: B): DivResult<A, B> {
+  return (a / b) as DivResult<A, B>;
 }
 
 /**
@@ -220,9 +264,9 @@ export function pow<A extends Operand, N extends PowerExponent>(a: A, n: N): Rai
  * ```
  */
 export function sqrt<Q extends Operand>(
-  a: HasNever<DimSqrt<DimensionOf<Q>>> extends true ? SquareRootNeedsEvenExponents<Q> : Q,
-): QuantityWithTag<DimSqrt<DimensionOf<Q>>, SystemOf<Q>> {
-  return Math.sqrt(a as number) as QuantityWithTag<DimSqrt<DimensionOf<Q>>, SystemOf<Q>>;
+  a: HasNever<DimSqrt<DimensionOf<Q>>> extends true ? (FailingDimensions<DimensionOf<Q>, HalfTable> extends infer N extends BaseDimension ? SquareRootNeedsEvenExponents<N & BaseDimension> : never) : Q,
+): Root<DimSqrt<DimensionOf<Q>>, SystemOf<Q>> {
+  return Math.sqrt(a as number) as Root<DimSqrt<DimensionOf<Q>>, SystemOf<Q>>;
 }
 
 /**
@@ -235,9 +279,9 @@ export function sqrt<Q extends Operand>(
  * ```
  */
 export function cbrt<Q extends Operand>(
-  a: HasNever<DimCbrt<DimensionOf<Q>>> extends true ? CubeRootNeedsExponentsDivisibleBy3<Q> : Q,
-): QuantityWithTag<DimCbrt<DimensionOf<Q>>, SystemOf<Q>> {
-  return Math.cbrt(a as number) as QuantityWithTag<DimCbrt<DimensionOf<Q>>, SystemOf<Q>>;
+  a: HasNever<DimCbrt<DimensionOf<Q>>> extends true ? (FailingDimensions<DimensionOf<Q>, ThirdTable> extends infer N extends BaseDimension ? CubeRootNeedsExponentsDivisibleBy3<N & BaseDimension> : never) : Q,
+): Root<DimCbrt<DimensionOf<Q>>, SystemOf<Q>> {
+  return Math.cbrt(a as number) as Root<DimCbrt<DimensionOf<Q>>, SystemOf<Q>>;
 }
 
 /**

@@ -108,6 +108,16 @@ export type OperandFor<T extends SystemTag> = AnyQuantity & {
   readonly [systemBrand]?: T | "SI=CGS" | (T extends "SI=CGS" ? SystemName : never);
 };
 
+/**
+ * Operands that may meet an operand of system tag `T` in `mul` or `div`: a
+ * quantity of the same system, a system-free quantity, or a plain number (a
+ * dimensionless factor).
+ */
+export type FactorFor<T extends SystemTag> = number & {
+  /** Absent (a plain number), `T` or `"SI=CGS"` (and either system when `T` is itself `"SI=CGS"`); compile time only. */
+  readonly [systemBrand]?: T | "SI=CGS" | (T extends "SI=CGS" ? SystemName : never);
+};
+
 /** A quantity in SI, a system-free quantity or a plain number. */
 export type SIOperand = number & {
   /** Absent (a plain number), `"SI"` or `"SI=CGS"` (compile time only). */
