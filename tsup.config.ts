@@ -54,6 +54,11 @@ export default defineConfig([
     splitting: false,
     treeshake: false,
     target: "es2020",
+    // keep class fields as written (every engine that runs ES2020 modules in
+    // practice has them) rather than a lowering helper repeated in each module
+    esbuildOptions(options) {
+      options.supported = { ...options.supported, "class-field": true, "class-static-field": true };
+    },
   },
   {
     // the library, CommonJS: one file (require() users do not tree-shake)
