@@ -28,7 +28,13 @@ for (const [name, pin] of Object.entries(pins)) {
     continue;
   }
   mkdirSync(dir, { recursive: true });
-  writeFileSync(join(dir, "package.json"), `${JSON.stringify({ name: `starlume-runtime-${name}`, private: true })}\n`);
+  // The node package's install script fetches its platform's binary (another
+  // npm package): approve that one script, the others need none.
+  const allowScripts = pin.package === "node" ? { node: true } : {};
+  writeFileSync(
+    join(dir, "package.json"),
+    `${JSON.stringify({ name: `starlume-runtime-${name}`, private: true, allowScripts })}\n`,
+  );
   const started = Date.now();
   try {
     execFileSync(npm, ["install", "--no-audit", "--no-fund", "--save-exact", "--loglevel=error", spec], {

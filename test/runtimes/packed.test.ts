@@ -101,6 +101,18 @@ describe("the packed package", () => {
     expect(built).toBe(false);
   });
 
+  test.runIf(built)("ships every file the CLI's help mentions", () => {
+    const installed = join(app, "node_modules", "starlume");
+    const cli = join(installed, "dist", "cli.js");
+    const help = (args: string[]) =>
+      execFileSync(process.execPath, [cli, ...args], { cwd: app, env, encoding: "utf8", timeout: 60_000 });
+    const texts = [help(["--help"])];
+    for (const c of ["solve", "fit", "planck", "convert", "lines", "demo"]) texts.push(help([c, "--help"]));
+    const paths = new Set(texts.flatMap((t) => [...t.matchAll(/\b(?:docs|examples)\/[\w./-]*[\w/]/g)].map((m) => m[0])));
+    expect(paths.size).toBeGreaterThan(0);
+    for (const p of paths) expect(existsSync(join(installed, p)), `${p} is in the package`).toBe(true);
+  }, 120_000);
+
   for (const rt of runtimes) {
     describe(rt.name, () => {
       test.runIf(built && rt.bin === undefined)(
