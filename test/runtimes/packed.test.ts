@@ -148,7 +148,7 @@ describe("the packed package", () => {
         const sun = rows[0] as string[];
         expect(sun[header.indexOf("status")]).toBe("ok");
         // IAU 2015 B3: T = 5772 K and R = 1 R☉ᴺ give L ≈ 1 L☉ᴺ (the nominal values agree to ~1e-5)
-        expect(Math.abs(col(sun, "luminosity [Lsol]") - 1)).toBeLessThan(1e-4);
+        expect(Math.abs(col(sun, "luminosity [Lsun]") - 1)).toBeLessThan(1e-4);
         // d = 1/ϖ: 100 mas is 10 pc
         close(col(sun, "distance [pc]"), 10);
       }, 120_000);
