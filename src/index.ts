@@ -6,6 +6,7 @@
  * - Laws take the system first (`SI` or `CGS`) and return results in it.
  *
  * @packageDocumentation
+ * @module starlume
  */
 export * from "./quantity/index";
 export { constants } from "./constants/index";
