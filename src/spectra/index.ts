@@ -115,3 +115,5 @@ export type {
   SynthesisResult,
 } from "./synthesize";
 export { equivalentWidth, lineCentroid, lineDepth } from "./measure";
+export { faddeeva } from "./faddeeva";
+export type { Complex } from "./faddeeva";
