@@ -22,6 +22,7 @@ import {
   vacuumToAirArray,
   vacuumWavelength,
   vacuumWavelengths,
+  type VacuumWavelengthArray,
 } from "./medium";
 
 const rel = (a: number, b: number): number => Math.abs(a / b - 1);
@@ -91,7 +92,7 @@ describe("properties", () => {
 
 describe("arrays", () => {
   it("match the scalar conversions, report out-of-range rows, and work in CGS", () => {
-    const v = vacuumWavelengths(SI, SI.arrayOf([486.27, 656.47, 50, Number.NaN, 2000], units.nm));
+    const v = vacuumWavelengths(SI, SI.arrayOf([486.27, 656.47, 50, 1e5, 2000], units.nm));
     const { values, invalid } = vacuumToAirArray(SI, v);
     expect(invalid).toEqual([2, 3]);
     expect(values[0]).toBe(vacuumToAir(SI, vacSI(v[0] as number)));
@@ -121,9 +122,21 @@ describe("bad input: RangeError naming the parameter, value and the caller's uni
   });
 });
 
+describe("array brands check every row (issue 16: NaN and −1 passed unchecked)", () => {
+  it("vacuumWavelengths / airWavelengths throw a RangeError naming the first bad row, its value and the caller's unit", () => {
+    expect(() => vacuumWavelengths(SI, SI.arrayOf([500, Number.NaN], units.nm))).toThrow(/^lengths\[1\]: length must be a finite number > 0 m; got NaN$/);
+    expect(() => airWavelengths(CGS, assumeArray<LengthArray<"CGS">>(Float64Array.of(5e-5, -1)))).toThrow(/^lengths\[1\]: length must be a finite number > 0 cm; got -1$/);
+    expect(() => airWavelengths(SI, assumeArray<LengthArray<"SI">>(Float64Array.of(0)))).toThrow(/lengths\[0\]/);
+    expect(() => vacuumWavelengths(SI, assumeArray<LengthArray<"SI">>(Float64Array.of(Infinity)))).toThrow(/got Infinity/);
+    expect(vacuumWavelengths(SI, assumeArray<LengthArray<"SI">>(new Float64Array(0))).length).toBe(0);
+  });
+});
+
 describe("array rows carry the scalar form's message, in the caller's unit", () => {
   it("outside the formula's range, or not positive", () => {
-    const r = vacuumToAirArray(CGS, vacuumWavelengths(CGS, assumeArray<LengthArray<"CGS">>(Float64Array.of(6.5646e-5, 1e-5, -1))));
+    // a row that is no length at all (−1) cannot be branded; the batch still
+    // flags one that reaches it by a cast
+    const r = vacuumToAirArray(CGS, assumeArray<VacuumWavelengthArray<"CGS">>(Float64Array.of(6.5646e-5, 1e-5, -1)));
     expect(r.invalid).toEqual([1, 2]);
     expect(r.reasons[0]).toMatch(/^wavelength must be in \[0\.0000200064\d*, 0\.0020005\d*\] cm \(standard-air formula range, 200 nm to 20 µm in air\); got 0\.00001$/);
     expect(r.reasons[1]).toBe("wavelength must be a finite number > 0 cm; got -1");

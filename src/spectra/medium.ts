@@ -180,8 +180,9 @@ export function airWavelength<S extends SystemName>(
 }
 
 /**
- * Brand an array of lengths as vacuum wavelengths (no copy, no check: the
- * functions that read it validate its rows).
+ * Brand an array of lengths as vacuum wavelengths (no copy). Every row must
+ * be a finite length > 0: a RangeError names the first row that is not
+ * (NaN, ±∞, 0 or negative).
  *
  * @example
  * ```ts
@@ -193,12 +194,21 @@ export function vacuumWavelengths<S extends SystemName>(
   sys: UnitSystem<S>,
   lengths: NotAirWavelengthArray<NoInfer<S>>,
 ): VacuumWavelengthArray<S> {
-  void sys;
+  checkLengths(sys, lengths);
   return lengths as Float64Array as VacuumWavelengthArray<S>;
 }
 
+/** Throw a RangeError naming the first row that is not a finite length > 0 (NaN, ±∞, 0, negative). */
+function checkLengths(sys: UnitSystem<SystemName>, lengths: Float64Array): void {
+  for (let i = 0; i < lengths.length; i++) {
+    const v = lengths[i] as number;
+    if (!(v > 0 && v < Infinity)) throw new RangeError(`lengths[${i}]: ${anyLength.reason(sys, v)}`);
+  }
+}
+
 /**
- * Brand an array of lengths as standard-air wavelengths (no copy, no check).
+ * Brand an array of lengths as standard-air wavelengths (no copy). Every row
+ * must be a finite length > 0: a RangeError names the first row that is not.
  *
  * @example
  * ```ts
@@ -210,7 +220,7 @@ export function airWavelengths<S extends SystemName>(
   sys: UnitSystem<S>,
   lengths: NotVacuumWavelengthArray<NoInfer<S>>,
 ): AirWavelengthArray<S> {
-  void sys;
+  checkLengths(sys, lengths);
   return lengths as Float64Array as AirWavelengthArray<S>;
 }
 
