@@ -18,6 +18,8 @@ export {
   vacuumWavelengths,
 } from "./medium";
 export type {
+  AirIndexModel,
+  AirIndexOptions,
   AirWavelength,
   AirWavelengthArray,
   MaybeInMedium,

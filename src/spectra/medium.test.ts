@@ -146,3 +146,23 @@ describe("array rows carry the scalar form's message, in the caller's unit", () 
     expect(a.reasons).toEqual(["wavelength must be in [2e-7, 0.00002] m (standard-air formula range); got 0.00003"]);
   });
 });
+
+describe("named air-index models through the typed conversions", () => {
+  it("default = edlen1966 = no options, bit for bit; other models differ by parts in 10⁸; round trips in SI and CGS", () => {
+    const v = vacuumWavelength(SI, SI.of(656.4614, units.nm));
+    expect(vacuumToAir(SI, v, { model: "edlen1966" })).toBe(vacuumToAir(SI, v));
+    const bd = vacuumToAir(SI, v, { model: "birch-downs1994" });
+    expect(Math.abs(bd / vacuumToAir(SI, v) - 1)).toBeGreaterThan(1e-8);
+    expect(Math.abs(bd / vacuumToAir(SI, v) - 1)).toBeLessThan(2e-8);
+    const opts = { model: "ciddor1996", conditions: { temperature: SI.of(293.15, units.K), pressurePa: 80000, relativeHumidity: 0.3 } } as const;
+    const c = vacuumToAir(CGS, vacuumWavelength(CGS, CGS.of(6564.614, units.angstrom)), opts);
+    expect(rel(airToVacuum(CGS, c, opts), 6564.614e-8)).toBeLessThan(1e-15);
+    expect(rel(c, vacuumToAir(SI, v, opts) * 100)).toBeLessThan(1e-15);
+    expect(airRefractiveIndex(SI, v, { model: "birch-downs1994" })).toBeGreaterThan(airRefractiveIndex(SI, v));
+  });
+  it("conditions with a standard-air model, or out of range, throw a RangeError naming them", () => {
+    const v = vacuumWavelength(SI, SI.of(500, units.nm));
+    expect(() => vacuumToAir(SI, v, { conditions: { pressurePa: 9e4 } })).toThrow(/conditions need model "ciddor1996"/);
+    expect(() => vacuumToAir(SI, v, { model: "ciddor1996", conditions: { pressurePa: -1 } })).toThrow(/^pressurePa must be in/);
+  });
+});

@@ -262,6 +262,16 @@ describe("system and dimension mix-ups that must not compile", () => {
   });
 });
 
+describe("air-index model options", () => {
+  test("the model is a named union; temperature is a Temperature, not a bare number", () => {
+    expectTypeOf(vacuumToAir(SI, vacSI, { model: "ciddor1996", conditions: { temperature: SI.of(293.15, units.K), pressurePa: 101325 } })).toEqualTypeOf<AirWavelength<"SI">>();
+    // @ts-expect-error an unknown model name does not compile
+    vacuumToAir(SI, vacSI, { model: "edlen" });
+    // @ts-expect-error the temperature is a typed Temperature, not a number
+    vacuumToAir(SI, vacSI, { model: "ciddor1996", conditions: { temperature: 293.15 } });
+  });
+});
+
 describe("the Faddeeva function takes and returns plain complex numbers", () => {
   test("w(z) is a Complex; a quantity or a bare number is not a complex argument", () => {
     expectTypeOf(faddeeva({ re: 1, im: 0.5 })).toEqualTypeOf<Complex>();
