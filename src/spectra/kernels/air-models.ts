@@ -9,7 +9,7 @@
  * - `"edlen1966"`: B. Edlén 1966, Metrologia 2, 71, standard air (15 °C,
  *   101 325 Pa, dry, 300 ppm CO₂):
  *   (n − 1)·10⁸ = 8342.13 + 2 406 030/(130 − σ²) + 15 997/(38.9 − σ²).
- *   This is the formula of `vacuumToAir`/`airToVacuum` (kernels/air-vacuum.ts).
+ *   This is the formula of `airFromVacuum`/`vacuumFromAir` (kernels/air-vacuum.ts).
  * - `"birch-downs1994"`: K. P. Birch & M. J. Downs 1994, Metrologia 31, 315
  *   (correcting their 1993 update of Edlén), as adopted for standard air by
  *   D. C. Morton 2000, ApJS 130, 403, eq. 8 (the IAU convention):

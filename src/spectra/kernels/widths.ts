@@ -85,13 +85,13 @@ export function product4(a: number, b: number, c: number, d: number): number {
  * ```
  */
 export function dopplerWidthWavelengthSI(
-  centerWavelengthM: number,
+  centreWavelengthM: number,
   temperatureK: number,
   massKg: number,
   microturbulenceMs: number,
 ): number {
-  requirePositive("centerWavelengthM", centerWavelengthM, "m");
-  return dopplerWidthUnchecked(centerWavelengthM, dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs));
+  requirePositive("centreWavelengthM", centreWavelengthM, "m");
+  return dopplerWidthUnchecked(centreWavelengthM, dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs));
 }
 
 /**
@@ -113,13 +113,13 @@ export function dopplerWidthUnchecked(center: number, velocityWidthMs: number): 
  * ```
  */
 export function dopplerWidthFrequencySI(
-  centerFrequencyHz: number,
+  centreFrequencyHz: number,
   temperatureK: number,
   massKg: number,
   microturbulenceMs: number,
 ): number {
-  requirePositive("centerFrequencyHz", centerFrequencyHz, "Hz");
-  return dopplerWidthUnchecked(centerFrequencyHz, dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs));
+  requirePositive("centreFrequencyHz", centreFrequencyHz, "Hz");
+  return dopplerWidthUnchecked(centreFrequencyHz, dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs));
 }
 
 /**
@@ -148,15 +148,15 @@ export function lorentzHwhmFrequencyUnchecked(dampingRatePerS: number): number {
  * lorentzHwhmWavelengthSI(121.567e-9, 6.265e8); // ≈ 2.46e-15 m
  * ```
  */
-export function lorentzHwhmWavelengthSI(centerWavelengthM: number, dampingRatePerS: number): number {
-  requirePositive("centerWavelengthM", centerWavelengthM, "m");
+export function lorentzHwhmWavelengthSI(centreWavelengthM: number, dampingRatePerS: number): number {
+  requirePositive("centreWavelengthM", centreWavelengthM, "m");
   requireNonNegative("dampingRatePerS", dampingRatePerS, "s^-1");
-  return lorentzHwhmWavelengthUnchecked(centerWavelengthM, dampingRatePerS);
+  return lorentzHwhmWavelengthUnchecked(centreWavelengthM, dampingRatePerS);
 }
 
 /** {@link lorentzHwhmWavelengthSI} without the input checks. @internal */
-export function lorentzHwhmWavelengthUnchecked(centerWavelengthM: number, dampingRatePerS: number): number {
-  return product4(centerWavelengthM, centerWavelengthM, dampingRatePerS, INV_4PI_C);
+export function lorentzHwhmWavelengthUnchecked(centreWavelengthM: number, dampingRatePerS: number): number {
+  return product4(centreWavelengthM, centreWavelengthM, dampingRatePerS, INV_4PI_C);
 }
 
 /**
