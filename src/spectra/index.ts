@@ -18,6 +18,8 @@ export {
   vacuumWavelengthArray,
 } from "./medium";
 export type {
+  AirIndexModel,
+  AirIndexOptions,
   AirWavelength,
   AirWavelengthArray,
   MaybeInMedium,
@@ -115,3 +117,5 @@ export type {
   SynthesisResult,
 } from "./synthesize";
 export { equivalentWidth, lineCentroid, lineDepth } from "./measure";
+export { faddeeva } from "./faddeeva";
+export type { Complex } from "./faddeeva";

@@ -12,7 +12,8 @@ import {
   diracLevelEnergySI,
   reducedMassKg,
 } from "./kernels/hydrogen-like";
-import { ionizationEnergySI } from "./kernels/transitions";
+import { diracTransitionEnergySI, ionizationEnergySI } from "./kernels/transitions";
+import { transitionEnergy, transitionVacuumWavelength } from "./lines";
 import {
   bohrLevelEnergy,
   diracLevelCentroidEnergy,
@@ -36,7 +37,7 @@ describe("typed = kernel (SI); CGS = SI × 10^k exactly", () => {
         expect(bohrLevelEnergy(SI, i, n)).toBe(bohrLevelEnergySI(n, i.z, i.nuclearMassKg));
         expect(diracLevelEnergy(SI, i, n, n - 0.5)).toBe(diracLevelEnergySI(n, n - 0.5, i.z, i.nuclearMassKg));
         expect(diracLevelCentroidEnergy(SI, i, n)).toBe(diracLevelCentroidEnergySI(n, i.z, i.nuclearMassKg));
-        expect(ionizationEnergy(SI, i, n)).toBe(ionizationEnergySI(n, i.z, i.nuclearMassKg));
+        expect(ionizationEnergy(SI, i, n, { model: "bohr" })).toBe(ionizationEnergySI(n, i.z, i.nuclearMassKg));
         expect(ionizationEnergy(SI, i, n, { model: "dirac-centroid" })).toBe(-diracLevelCentroidEnergySI(n, i.z, i.nuclearMassKg));
       }
       expect(reducedMass(SI, i)).toBe(reducedMassKg(i.nuclearMassKg));
@@ -68,7 +69,7 @@ describe("ionization energies against NIST (from memory (NIST ASD))", () => {
   it("the Bohr value is the reduced-mass Rydberg energy h c R∞ μ/m_e (13.598 287 eV)", () => {
     // exact identity up to rounding of the few products (≤ 4 ulp → 1e-15)
     const ref = (H * C * RYDBERG) / (1 + M_E / PROTON_MASS_KG);
-    expect(rel(ionizationEnergy(SI, ions.H), ref)).toBeLessThan(1e-15);
+    expect(rel(ionizationEnergy(SI, ions.H, 1, { model: "bohr" }), ref)).toBeLessThan(1e-15);
     expect(rel(-bohrLevelEnergy(SI, ions.hydrogenInfiniteMass, 1), H * C * RYDBERG)).toBeLessThan(1e-15);
   });
   it("⁴He⁺ 1s: 54.417 765 eV", () => {
@@ -142,5 +143,35 @@ describe("the infinite-mass limit in CGS", () => {
   it("the nuclear mass stays Infinity, the reduced mass is m_e in grams (× 10³ exactly)", () => {
     expect(nuclearMass(CGS, ions.hydrogenInfiniteMass)).toBe(Infinity);
     expect(reducedMass(CGS, ions.hydrogenInfiniteMass)).toBe(times10(M_E, 3));
+  });
+});
+
+describe("default level model and the size of what it omits (measured lines)", () => {
+  it("the default is the Dirac shell centroid (closer to measured lines); Bohr must be named", () => {
+    expect(transitionEnergy(SI, ions.H, 2, 3)).toBe(transitionEnergy(SI, ions.H, 2, 3, { model: "dirac-centroid" }));
+    expect(ionizationEnergy(SI, ions.H)).toBe(ionizationEnergy(SI, ions.H, 1, { model: "dirac-centroid" }));
+    // Hα in vacuum, NIST ASD (from memory): 656.4614 nm (fine-structure blend); Bohr is 1.4e-5 off, the default 1e-6
+    const rel = (a: number, b: number): number => Math.abs(a / b - 1);
+    const ha = SI.valueIn(transitionVacuumWavelength(SI, ions.H, 2, 3), units.nm);
+    const bohr = SI.valueIn(transitionVacuumWavelength(SI, ions.H, 2, 3, { model: "bohr" }), units.nm);
+    expect(rel(ha, 656.4614)).toBeLessThan(2e-6); // reference printed to 7 digits: ±8e-8, plus the Lamb shift
+    expect(rel(bohr, 656.4614)).toBeGreaterThan(1e-5);
+  });
+  it("the Lamb shift is the residual: Dirac 1s½–2s½ minus the measured 1S–2S hyperfine centroid = L(1S) − L(2S) − recoil", () => {
+    // Measured 1S–2S hyperfine-centroid frequency 2 466 061 413 187 035(10) Hz
+    // (Parthey et al. 2011, PRL 107, 203001 — from memory). Lamb shifts
+    // (from memory): L(1S) = 8172.9 MHz, L(2S) = 1045.0 MHz. The model omits
+    // them and the next recoil term −μ²c²(f − 1)²/(2(m_e + M)), computed here.
+    const measured = 2466061413187035;
+    const model = diracTransitionEnergySI(1, 0.5, 2, 0.5, 1, PROTON_MASS_KG) / H;
+    const mu = M_E / (1 + M_E / PROTON_MASS_KG);
+    const za = 7.2973525693e-3;
+    const fm1 = (n: number): number => 1 / Math.sqrt(1 + (za / n) ** 2) - 1; // s½ levels: δ ≈ (Zα)²/2, negligible here
+    const recoil = ((mu * mu * C * C) / (2 * (M_E + PROTON_MASS_KG)) * (fm1(1) ** 2 - fm1(2) ** 2)) / H; // widens the interval
+    const expected = (8172.9e6 - 1045.0e6) - recoil;
+    // from-memory Lamb shifts to 0.1 MHz; finite size and the rest of the QED below ~2 MHz of the difference
+    expect(Math.abs(model - measured - expected)).toBeLessThan(5e6);
+    // the documented size: 2.9e-6 of the 1s–2s interval
+    expect(Math.abs((model - measured) / measured - 2.88e-6)).toBeLessThan(0.02e-6);
   });
 });

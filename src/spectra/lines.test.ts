@@ -44,16 +44,16 @@ describe("typed = kernel (SI)", () => {
   it("Bohr transitions and series are the kernel's numbers", () => {
     for (const i of [ions.H, ions.D, ions.HeII]) {
       for (const [nl, nu] of [[1, 2], [2, 3], [3, 4], [4, 10]] as const) {
-        expect(transitionEnergy(SI, i, nl, nu)).toBe(transitionEnergySI(nl, nu, i.z, i.nuclearMassKg));
-        expect(transitionWavenumber(SI, i, nl, nu)).toBe(transitionWavenumberSI(nl, nu, i.z, i.nuclearMassKg));
-        expect(transitionFrequency(SI, i, nl, nu)).toBe(transitionFrequencySI(nl, nu, i.z, i.nuclearMassKg));
-        expect(transitionVacuumWavelength(SI, i, nl, nu)).toBe(transitionVacuumWavelengthSI(nl, nu, i.z, i.nuclearMassKg));
+        expect(transitionEnergy(SI, i, nl, nu, { model: "bohr" })).toBe(transitionEnergySI(nl, nu, i.z, i.nuclearMassKg));
+        expect(transitionWavenumber(SI, i, nl, nu, { model: "bohr" })).toBe(transitionWavenumberSI(nl, nu, i.z, i.nuclearMassKg));
+        expect(transitionFrequency(SI, i, nl, nu, { model: "bohr" })).toBe(transitionFrequencySI(nl, nu, i.z, i.nuclearMassKg));
+        expect(transitionVacuumWavelength(SI, i, nl, nu, { model: "bohr" })).toBe(transitionVacuumWavelengthSI(nl, nu, i.z, i.nuclearMassKg));
         expect(transitionEnergy(SI, i, nl, nu, { model: "dirac-centroid" })).toBe(diracCentroidTransitionEnergySI(nl, nu, i.z, i.nuclearMassKg));
       }
       for (const s of seriesNames) {
-        expect(seriesLimitEnergy(SI, i, s)).toBe(seriesLimitEnergySI(s, i.z, i.nuclearMassKg));
-        expect(seriesLimitVacuumWavelength(SI, i, s)).toBe(seriesLimitVacuumWavelengthSI(s, i.z, i.nuclearMassKg));
-        expect(Array.from(seriesVacuumWavelengths(SI, i, s, 5))).toEqual(Array.from(seriesVacuumWavelengthsSI(s, 5, i.z, i.nuclearMassKg)));
+        expect(seriesLimitEnergy(SI, i, s, { model: "bohr" })).toBe(seriesLimitEnergySI(s, i.z, i.nuclearMassKg));
+        expect(seriesLimitVacuumWavelength(SI, i, s, { model: "bohr" })).toBe(seriesLimitVacuumWavelengthSI(s, i.z, i.nuclearMassKg));
+        expect(Array.from(seriesVacuumWavelengths(SI, i, s, 5, { model: "bohr" }))).toEqual(Array.from(seriesVacuumWavelengthsSI(s, 5, i.z, i.nuclearMassKg)));
       }
     }
     expect(diracTransitionEnergy(SI, ions.H, { n: 2, j: 0.5 }, { n: 3, j: 1.5 })).toBe(diracTransitionEnergySI(2, 0.5, 3, 1.5, 1, ions.H.nuclearMassKg));

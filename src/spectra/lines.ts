@@ -6,10 +6,13 @@
  * Paschen (3), Brackett (4), Pfund (5) and Humphreys (6), with their limits.
  *
  * Bohr transitions: σ = R∞ Z² (μ/m_e)(1/n₁² − 1/n₂²), the bracket evaluated
- * as (n₂ − n₁)(n₂ + n₁)/(n₁² n₂²) (no cancellation); E = hcσ, ν = cσ,
- * λ = 1/σ. With `{ model: "dirac-centroid" }` the energy is the difference
- * of the Dirac shell centroids (levels.ts), then σ = E/(hc), ν = E/h,
- * λ = hc/E. Wavelengths are in vacuum: convert with `airFromVacuum`.
+ * as ((n₂ − n₁)/n₂)(1 + n₁/n₂)/n₁² (no cancellation and no square: finite
+ * for any n₂, tending to the series limit); E = hcσ, ν = cσ,
+ * λ = 1/σ (with `{ model: "bohr" }`). By default (`{ model:
+ * "dirac-centroid" }`) the energy is the difference of the Dirac shell
+ * centroids (levels.ts), then σ = E/(hc), ν = E/h, λ = hc/E: the default is
+ * the model closer to measured lines. Wavelengths are in vacuum: convert
+ * with `airFromVacuum`.
  *
  * Accuracy: ≤ 4e-15 relative to 50-digit mpmath (kernels/transitions.test.ts).
  * Against measured lines (NIST ASD, from memory; lines.test.ts): the Bohr
@@ -154,14 +157,15 @@ export function seriesLowerLevel(series: SeriesName): number {
 }
 
 /**
- * Energy of the transition n_lower → n_upper, E = h c R∞ Z² (μ/m_e)(1/n₁² − 1/n₂²)
- * (Bohr, default) or the Dirac shell-centroid difference.
+ * Energy of the transition n_lower → n_upper: by default the difference of
+ * the Dirac shell centroids; with `{ model: "bohr" }`,
+ * E = h c R∞ Z² (μ/m_e)(1/n₁² − 1/n₂²).
  *
  * @param sys - `SI` (J) or `CGS` (erg)
  * @param ionValue - the ion ({@link ions} has H, D, He II)
  * @param nLower - lower principal quantum number (integer ≥ 1)
  * @param nUpper - upper principal quantum number (integer > nLower)
- * @param options - level model
+ * @param options - level model: `"dirac-centroid"` (default, closer to measured lines) or `"bohr"`
  * @throws RangeError when n is ≤ 0 or not an integer, or nUpper ≤ nLower (naming it)
  * @example
  * ```ts
@@ -190,7 +194,7 @@ export function transitionEnergy<S extends SystemName>(
  * @example
  * ```ts
  * import { CGS, ions, transitionWavenumber, units } from "starlume";
- * CGS.valueIn(transitionWavenumber(CGS, ions.H, 2, 3), units.per_cm); // Hα ≈ 15233.00 cm^-1 (Bohr)
+ * CGS.valueIn(transitionWavenumber(CGS, ions.H, 2, 3, { model: "bohr" }), units.per_cm); // Hα ≈ 15233.00 cm^-1 (Bohr)
  * ```
  */
 export function transitionWavenumber<S extends SystemName>(
@@ -320,7 +324,7 @@ export function seriesLineEnergy<S extends SystemName>(
  * @example
  * ```ts
  * import { SI, ions, seriesLineVacuumWavelength, units } from "starlume";
- * SI.valueIn(seriesLineVacuumWavelength(SI, ions.H, "lyman", 2), units.nm); // Lyα ≈ 121.5684 (Bohr)
+ * SI.valueIn(seriesLineVacuumWavelength(SI, ions.H, "lyman", 2, { model: "bohr" }), units.nm); // Lyα ≈ 121.5684 (Bohr)
  * ```
  */
 export function seriesLineVacuumWavelength<S extends SystemName>(
@@ -334,7 +338,7 @@ export function seriesLineVacuumWavelength<S extends SystemName>(
 }
 
 /**
- * Series-limit energy (n_upper → ∞): the ionization energy of the series'
+ * Series-limit energy (n_upper → ∞): the ionisation energy of the series'
  * lower level, h c R∞ Z² (μ/m_e)/n₁² (Bohr) or −Ē_{n₁} (Dirac centroid).
  *
  * @example

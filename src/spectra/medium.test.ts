@@ -22,6 +22,7 @@ import {
   airFromVacuumBatch,
   vacuumWavelength,
   vacuumWavelengthArray,
+  type VacuumWavelengthArray,
 } from "./medium";
 
 const rel = (a: number, b: number): number => Math.abs(a / b - 1);
@@ -91,7 +92,7 @@ describe("properties", () => {
 
 describe("arrays", () => {
   it("match the scalar conversions, report out-of-range rows, and work in CGS", () => {
-    const v = vacuumWavelengthArray(SI, SI.arrayOf([486.27, 656.47, 50, Number.NaN, 2000], units.nm));
+    const v = vacuumWavelengthArray(SI, SI.arrayOf([486.27, 656.47, 50, 1e5, 2000], units.nm));
     const { values, invalid } = airFromVacuumBatch(SI, v);
     expect(invalid).toEqual([2, 3]);
     expect(values[0]).toBe(airFromVacuum(SI, vacSI(v[0] as number)));
@@ -121,9 +122,21 @@ describe("bad input: RangeError naming the parameter, value and the caller's uni
   });
 });
 
+describe("array brands check every row (issue 16: NaN and −1 passed unchecked)", () => {
+  it("vacuumWavelengthArray / airWavelengthArray throw a RangeError naming the first bad row, its value and the caller's unit", () => {
+    expect(() => vacuumWavelengthArray(SI, SI.arrayOf([500, Number.NaN], units.nm))).toThrow(/^lengths\[1\]: length must be a finite number > 0 m; got NaN$/);
+    expect(() => airWavelengthArray(CGS, assumeArray<LengthArray<"CGS">>(Float64Array.of(5e-5, -1)))).toThrow(/^lengths\[1\]: length must be a finite number > 0 cm; got -1$/);
+    expect(() => airWavelengthArray(SI, assumeArray<LengthArray<"SI">>(Float64Array.of(0)))).toThrow(/lengths\[0\]/);
+    expect(() => vacuumWavelengthArray(SI, assumeArray<LengthArray<"SI">>(Float64Array.of(Infinity)))).toThrow(/got Infinity/);
+    expect(vacuumWavelengthArray(SI, assumeArray<LengthArray<"SI">>(new Float64Array(0))).length).toBe(0);
+  });
+});
+
 describe("array rows carry the scalar form's message, in the caller's unit", () => {
   it("outside the formula's range, or not positive", () => {
-    const r = airFromVacuumBatch(CGS, vacuumWavelengthArray(CGS, assumeArray<LengthArray<"CGS">>(Float64Array.of(6.5646e-5, 1e-5, -1))));
+    // a row that is no length at all (−1) cannot be branded; the batch still
+    // flags one that reaches it by a cast
+    const r = airFromVacuumBatch(CGS, assumeArray<VacuumWavelengthArray<"CGS">>(Float64Array.of(6.5646e-5, 1e-5, -1)));
     expect(r.invalid).toEqual([1, 2]);
     expect(r.reasons[0]).toMatch(/^wavelength must be in \[0\.0000200064\d*, 0\.0020005\d*\] cm \(standard-air formula range, 200 nm to 20 µm in air\); got 0\.00001$/);
     expect(r.reasons[1]).toBe("wavelength must be a finite number > 0 cm; got -1");
@@ -131,5 +144,25 @@ describe("array rows carry the scalar form's message, in the caller's unit", () 
     const a = vacuumFromAirBatch(SI, airWavelengthArray(SI, assumeArray<LengthArray<"SI">>(Float64Array.of(30e-6, 500e-9))));
     expect(a.invalid).toEqual([0]);
     expect(a.reasons).toEqual(["wavelength must be in [2e-7, 0.00002] m (standard-air formula range); got 0.00003"]);
+  });
+});
+
+describe("named air-index models through the typed conversions", () => {
+  it("default = edlen1966 = no options, bit for bit; other models differ by parts in 10⁸; round trips in SI and CGS", () => {
+    const v = vacuumWavelength(SI, SI.of(656.4614, units.nm));
+    expect(airFromVacuum(SI, v, { model: "edlen1966" })).toBe(airFromVacuum(SI, v));
+    const bd = airFromVacuum(SI, v, { model: "birch-downs1994" });
+    expect(Math.abs(bd / airFromVacuum(SI, v) - 1)).toBeGreaterThan(1e-8);
+    expect(Math.abs(bd / airFromVacuum(SI, v) - 1)).toBeLessThan(2e-8);
+    const opts = { model: "ciddor1996", conditions: { temperature: SI.of(293.15, units.K), pressurePa: 80000, relativeHumidity: 0.3 } } as const;
+    const c = airFromVacuum(CGS, vacuumWavelength(CGS, CGS.of(6564.614, units.angstrom)), opts);
+    expect(rel(vacuumFromAir(CGS, c, opts), 6564.614e-8)).toBeLessThan(1e-15);
+    expect(rel(c, airFromVacuum(SI, v, opts) * 100)).toBeLessThan(1e-15);
+    expect(airRefractiveIndex(SI, v, { model: "birch-downs1994" })).toBeGreaterThan(airRefractiveIndex(SI, v));
+  });
+  it("conditions with a standard-air model, or out of range, throw a RangeError naming them", () => {
+    const v = vacuumWavelength(SI, SI.of(500, units.nm));
+    expect(() => airFromVacuum(SI, v, { conditions: { pressurePa: 9e4 } })).toThrow(/conditions need model "ciddor1996"/);
+    expect(() => airFromVacuum(SI, v, { model: "ciddor1996", conditions: { pressurePa: -1 } })).toThrow(/^pressurePa must be in/);
   });
 });

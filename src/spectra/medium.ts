@@ -101,6 +101,53 @@ import {
   airToVacuumWavelengthUnchecked,
   vacuumToAirWavelengthUnchecked,
 } from "./kernels/air-vacuum";
+import { airRefractivityModelSI, airToVacuumModelSI, vacuumToAirModelSI, type AirConditionsSI, type AirIndexModelName } from "./kernels/air-models";
+import type { Temperature } from "../quantity/aliases";
+import { fromSI as lengthFromSI } from "../internal/typed";
+
+/** A named air-index model: `"edlen1966"` (the default), `"birch-downs1994"` (Morton 2000's standard air), `"ciddor1996"` (real conditions). */
+export type AirIndexModel = AirIndexModelName;
+
+/**
+ * Options of the scalar air ↔ vacuum functions: the air-index model and, for
+ * `"ciddor1996"`, the observing conditions. Pressures are in pascals (the
+ * library has no pressure kind yet, so the unit is in the field name).
+ */
+export interface AirIndexOptions {
+  /** The model; default `"edlen1966"` (Edlén 1966 standard air). */
+  readonly model?: AirIndexModel;
+  /** Observing conditions, `"ciddor1996"` only (a RangeError with the standard-air models). */
+  readonly conditions?: {
+    /** Air temperature (default 15 °C = 288.15 K). */
+    readonly temperature?: Temperature;
+    /** Total pressure, Pa (default 101 325). */
+    readonly pressurePa?: number;
+    /** Water-vapour partial pressure, Pa (default 0); or give relativeHumidity. */
+    readonly waterVapourPressurePa?: number;
+    /** Relative humidity, a fraction 0…1. */
+    readonly relativeHumidity?: number;
+    /** CO₂ mole fraction (default 450e-6). */
+    readonly co2MoleFraction?: number;
+  };
+}
+
+/** The kernel's conditions from the typed options (undefined when none are given). */
+function conditionsSI(o: AirIndexOptions | undefined): AirConditionsSI | undefined {
+  const c = o?.conditions;
+  if (c === undefined) return undefined;
+  const r: { -readonly [K in keyof AirConditionsSI]: AirConditionsSI[K] } = {};
+  if (c.temperature !== undefined) r.temperatureK = c.temperature as number;
+  if (c.pressurePa !== undefined) r.pressurePa = c.pressurePa;
+  if (c.waterVapourPressurePa !== undefined) r.waterVapourPressurePa = c.waterVapourPressurePa;
+  if (c.relativeHumidity !== undefined) r.relativeHumidity = c.relativeHumidity;
+  if (c.co2MoleFraction !== undefined) r.co2MoleFraction = c.co2MoleFraction;
+  return r;
+}
+
+/** Whether the options ask for anything but the default Edlén 1966 standard air. */
+function namedModel(o: AirIndexOptions | undefined): boolean {
+  return o !== undefined && ((o.model !== undefined && o.model !== "edlen1966") || o.conditions !== undefined);
+}
 
 /** A wavelength to brand: finite and > 0, in the caller's unit. */
 const anyLength = lawInput("length", kinds.length);
@@ -180,8 +227,9 @@ export function airWavelength<S extends SystemName>(
 }
 
 /**
- * Brand an array of lengths as vacuum wavelengths (no copy, no check: the
- * functions that read it validate its rows).
+ * Brand an array of lengths as vacuum wavelengths (no copy). Every row must
+ * be a finite length > 0: a RangeError names the first row that is not
+ * (NaN, ±∞, 0 or negative).
  *
  * @example
  * ```ts
@@ -193,12 +241,21 @@ export function vacuumWavelengthArray<S extends SystemName>(
   sys: UnitSystem<S>,
   lengths: NotAirWavelengthArray<NoInfer<S>>,
 ): VacuumWavelengthArray<S> {
-  void sys;
+  checkLengths(sys, lengths);
   return lengths as Float64Array as VacuumWavelengthArray<S>;
 }
 
+/** Throw a RangeError naming the first row that is not a finite length > 0 (NaN, ±∞, 0, negative). */
+function checkLengths(sys: UnitSystem<SystemName>, lengths: Float64Array): void {
+  for (let i = 0; i < lengths.length; i++) {
+    const v = lengths[i] as number;
+    if (!(v > 0 && v < Infinity)) throw new RangeError(`lengths[${i}]: ${anyLength.reason(sys, v)}`);
+  }
+}
+
 /**
- * Brand an array of lengths as standard-air wavelengths (no copy, no check).
+ * Brand an array of lengths as standard-air wavelengths (no copy). Every row
+ * must be a finite length > 0: a RangeError names the first row that is not.
  *
  * @example
  * ```ts
@@ -210,7 +267,7 @@ export function airWavelengthArray<S extends SystemName>(
   sys: UnitSystem<S>,
   lengths: NotVacuumWavelengthArray<NoInfer<S>>,
 ): AirWavelengthArray<S> {
-  void sys;
+  checkLengths(sys, lengths);
   return lengths as Float64Array as AirWavelengthArray<S>;
 }
 
@@ -221,6 +278,7 @@ export function airWavelengthArray<S extends SystemName>(
  *
  * @param sys - `SI` or `CGS`
  * @param wavelength - vacuum wavelength (or unbranded length), in `sys`; 200.065 nm to 20.005 µm
+ * @param options - the air-index model, default `"edlen1966"` (Edlén 1966 standard air); `"birch-downs1994"` or `"ciddor1996"` with `conditions` (kernels/air-models.ts)
  * @throws RangeError outside the formula's range (in the caller's unit)
  * @example
  * ```ts
@@ -231,8 +289,11 @@ export function airWavelengthArray<S extends SystemName>(
 export function airRefractiveIndex<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: NotAirWavelength<NoInfer<S>>,
+  options?: AirIndexOptions,
 ): Dimensionless {
-  return refractiveIndex(sys, wavelength);
+  if (!namedModel(options)) return refractiveIndex(sys, wavelength);
+  const v = anyLength.toSI(sys, wavelength);
+  return (1 + airRefractivityModelSI(v, options?.model ?? "edlen1966", conditionsSI(options))) as Dimensionless;
 }
 
 /**
@@ -242,6 +303,7 @@ export function airRefractiveIndex<S extends SystemName>(
  *
  * @param sys - `SI` or `CGS`
  * @param wavelength - a {@link VacuumWavelength} in `sys` (vacuum range 200.065 nm – 20.005 µm)
+ * @param options - the air-index model, default `"edlen1966"` (Edlén 1966 standard air); `"birch-downs1994"` or `"ciddor1996"` with `conditions` (kernels/air-models.ts)
  * @returns the {@link AirWavelength}
  * @throws RangeError outside the range (in the caller's unit)
  * @example
@@ -254,8 +316,12 @@ export function airRefractiveIndex<S extends SystemName>(
 export function airFromVacuum<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: VacuumWavelength<NoInfer<S>>,
+  options?: AirIndexOptions,
 ): AirWavelength<S> {
-  return toAir(sys, wavelength) as AirWavelength<S>;
+  if (!namedModel(options)) return toAir(sys, wavelength) as AirWavelength<S>;
+  const v = anyLength.toSI(sys, wavelength);
+  const a = vacuumToAirModelSI(v, options?.model ?? "edlen1966", conditionsSI(options));
+  return lengthFromSI(sys, a, kinds.length.dimension) as number as AirWavelength<S>;
 }
 
 /**
@@ -264,6 +330,7 @@ export function airFromVacuum<S extends SystemName>(
  *
  * @param sys - `SI` or `CGS`
  * @param wavelength - an {@link AirWavelength} in `sys` (200 nm – 20 µm)
+ * @param options - the air-index model, default `"edlen1966"` (Edlén 1966 standard air); `"birch-downs1994"` or `"ciddor1996"` with `conditions` (kernels/air-models.ts)
  * @returns the {@link VacuumWavelength}
  * @throws RangeError outside the range (in the caller's unit)
  * @example
@@ -276,8 +343,12 @@ export function airFromVacuum<S extends SystemName>(
 export function vacuumFromAir<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: AirWavelength<NoInfer<S>>,
+  options?: AirIndexOptions,
 ): VacuumWavelength<S> {
-  return toVacuum(sys, wavelength) as VacuumWavelength<S>;
+  if (!namedModel(options)) return toVacuum(sys, wavelength) as VacuumWavelength<S>;
+  const a = anyLength.toSI(sys, wavelength);
+  const v = airToVacuumModelSI(a, options?.model ?? "edlen1966", conditionsSI(options));
+  return lengthFromSI(sys, v, kinds.length.dimension) as number as VacuumWavelength<S>;
 }
 
 /**

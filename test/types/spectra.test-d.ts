@@ -22,6 +22,7 @@ import {
   type Wavenumber,
   type WavenumberArray,
 } from "../../src/quantity/index";
+import type { Complex } from "../../src/spectra/index";
 import {
   vacuumFromAir,
   vacuumFromAirBatch,
@@ -32,6 +33,7 @@ import {
   observedWavelengthFromRadialVelocityBatch,
   dopplerWidth,
   equivalentWidth,
+  faddeeva,
   frequencyFromVacuumWavelength,
   gaussianProfile,
   ion,
@@ -257,6 +259,29 @@ describe("system and dimension mix-ups that must not compile", () => {
     // @ts-expect-error τ₀ is dimensionless, not a length
     const t: SynthesisLine<"SI"> = { centre: vacSI, dopplerWidth: widthSI, tau0: widthSI };
     void [both, none, w, t];
+  });
+});
+
+describe("air-index model options", () => {
+  test("the model is a named union; temperature is a Temperature, not a bare number", () => {
+    expectTypeOf(airFromVacuum(SI, vacSI, { model: "ciddor1996", conditions: { temperature: SI.of(293.15, units.K), pressurePa: 101325 } })).toEqualTypeOf<AirWavelength<"SI">>();
+    // @ts-expect-error an unknown model name does not compile
+    airFromVacuum(SI, vacSI, { model: "edlen" });
+    // @ts-expect-error the temperature is a typed Temperature, not a number
+    airFromVacuum(SI, vacSI, { model: "ciddor1996", conditions: { temperature: 293.15 } });
+  });
+});
+
+describe("the Faddeeva function takes and returns plain complex numbers", () => {
+  test("w(z) is a Complex; a quantity or a bare number is not a complex argument", () => {
+    expectTypeOf(faddeeva({ re: 1, im: 0.5 })).toEqualTypeOf<Complex>();
+    expectTypeOf(faddeeva(faddeeva({ re: 0, im: 1 })).re).toEqualTypeOf<number>();
+    // @ts-expect-error a bare number is not a complex argument
+    faddeeva(1.5);
+    // @ts-expect-error the parts are named re and im
+    faddeeva({ x: 1, y: 0 });
+    // @ts-expect-error the result is read-only
+    faddeeva({ re: 1, im: 0 }).re = 2;
   });
 });
 

@@ -68,8 +68,16 @@ export function radialVelocityFromRedshiftSI(redshift: number): number {
 
 /** {@link radialVelocityFromRedshiftSI} without the input check (z finite, > −1 assumed). @internal */
 export function velocityFromRedshiftUnchecked(redshift: number): number {
-  const q = redshift * (2 + redshift);
-  return (C * q) / (2 + q);
+  if (redshift <= 1) {
+    // β = q/(2 + q), q = (1+z)² − 1 = z(2 + z): no cancellation for small z
+    const q = redshift * (2 + redshift);
+    return (C * q) / (2 + q);
+  }
+  // z > 1: β = (1 − r²)/(1 + r²), r = 1/(1 + z); r² underflows harmlessly,
+  // so a huge z tends to c instead of ∞/∞
+  const r = 1 / (1 + redshift);
+  const r2 = r * r;
+  return (C * (1 - r2)) / (1 + r2);
 }
 
 /**
@@ -155,6 +163,12 @@ export function radialVelocityFromWavelengthsSI(observedWavelengthM: number, res
 
 /** {@link radialVelocityFromWavelengthsSI} without the input checks. @internal */
 export function radialVelocityFromWavelengthsUnchecked(observedWavelengthM: number, restWavelengthM: number): number {
+  if (observedWavelengthM > 2 * restWavelengthM) {
+    // 1 + z = λ_obs/λ_rest may overflow: β = (1 − r²)/(1 + r²) with r = λ_rest/λ_obs
+    const r = restWavelengthM / observedWavelengthM;
+    const r2 = r * r;
+    return (C * (1 - r2)) / (1 + r2);
+  }
   return velocityFromRedshiftUnchecked(redshiftFromWavelengthsUnchecked(observedWavelengthM, restWavelengthM));
 }
 

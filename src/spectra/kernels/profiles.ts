@@ -44,7 +44,7 @@ export function gaussianProfileSI(offset: number, dopplerWidth: number): number 
 /** {@link gaussianProfileSI} without the input checks (Δ finite, b finite and > 0 assumed). @internal */
 export function gaussianProfileUnchecked(offset: number, dopplerWidth: number): number {
   const u = offset / dopplerWidth;
-  return Math.exp(-u * u) / (dopplerWidth * SQRT_PI);
+  return Math.exp(-u * u) / SQRT_PI / dopplerWidth;
 }
 
 /**
@@ -65,8 +65,16 @@ export function lorentzianProfileSI(offset: number, lorentzHwhm: number): number
 
 /** {@link lorentzianProfileSI} without the input checks (Δ finite, γ finite and > 0 assumed). @internal */
 export function lorentzianProfileUnchecked(offset: number, lorentzHwhm: number): number {
-  const u = offset / lorentzHwhm;
-  return 1 / (Math.PI * lorentzHwhm * (1 + u * u));
+  const d = Math.abs(offset);
+  if (d <= lorentzHwhm) {
+    const u = d / lorentzHwhm;
+    return 1 / Math.PI / lorentzHwhm / (1 + u * u);
+  }
+  // far wing: γ/(π(Δ² + γ²)) = (r/|Δ|)/(π(1 + r²)), r = γ/|Δ| < 1 — no square
+  // of Δ or γ is formed, so the value underflows only where it is below the
+  // double range
+  const r = lorentzHwhm / d;
+  return r / (Math.PI * (1 + r * r)) / d;
 }
 
 /**
@@ -97,10 +105,19 @@ export function voigtProfileSI(offset: number, dopplerWidth: number, lorentzHwhm
 export function voigtProfileUnchecked(offset: number, dopplerWidth: number, lorentzHwhm: number): number {
   if (dopplerWidth === 0) return lorentzianProfileUnchecked(offset, lorentzHwhm);
   const u = offset / dopplerWidth;
-  if (lorentzHwhm === 0) return Math.exp(-u * u) / (dopplerWidth * SQRT_PI);
-  faddeeva(u, lorentzHwhm / dopplerWidth, w);
-  return (w[0] as number) / (dopplerWidth * SQRT_PI);
+  if (lorentzHwhm === 0) return Math.exp(-u * u) / SQRT_PI / dopplerWidth;
+  const a = lorentzHwhm / dopplerWidth;
+  // |u + ia| ≥ 1e8 (or u, a beyond the double range): Re w = a/(√π|z|²) to
+  // double precision (kernels/faddeeva.ts, region 0), i.e. the profile is the
+  // Lorentzian itself — evaluated in the caller's offsets and widths, so a
+  // huge offset or a vanishing Doppler width never forms ∞/∞.
+  if (Math.abs(u) >= VOIGT_LORENTZ_LIMIT || a >= VOIGT_LORENTZ_LIMIT) return lorentzianProfileUnchecked(offset, lorentzHwhm);
+  faddeeva(u, a, w);
+  return (w[0] as number) / SQRT_PI / dopplerWidth;
 }
+
+/** |u| or a at and beyond which the Voigt profile equals the Lorentzian to double precision. */
+const VOIGT_LORENTZ_LIMIT = 1e8;
 
 /**
  * Batch Voigt profile over offsets (batch.ts convention: a non-finite offset

@@ -90,8 +90,18 @@ function simpson(f: (x: number) => number, lo: number, hi: number, n: number): n
   return (s * h) / 3;
 }
 
-function curveOfGrowth(tau0: number, b: number, gamma: number): number {
+/**
+ * a = γ/b at and beyond which the curve of growth is that of a pure
+ * Lorentzian: the Gaussian core changes W by O(1/a²) ≤ 1e-16 relative, so b
+ * is replaced by γ/1e8 (an equivalent-width-preserving substitution, not a
+ * clamp of the answer). This keeps a finite and the quadrature bounded when
+ * b is tiny or subnormal.
+ */
+const PURE_LORENTZ_A = 1e8;
+
+function curveOfGrowth(tau0: number, bIn: number, gamma: number): number {
   if (tau0 === 0) return 0;
+  const b = gamma / bIn >= PURE_LORENTZ_A ? gamma / PURE_LORENTZ_A : bIn;
   const a = gamma / b;
   const k0 = voigtK(0, a);
   const f = (u: number): number => -Math.expm1((-tau0 * voigtK(u, a)) / k0);
@@ -101,7 +111,8 @@ function curveOfGrowth(tau0: number, b: number, gamma: number): number {
   if (a > 0) {
     // Damping wings: [U1, Umax] in s = ln u (integrand f(e^s) e^s), then the
     // analytic weak Lorentz tail ∫_Umax^∞ τ₀ a/(√π K(0,a) u²) du.
-    const uSat = Math.sqrt((tau0 * a) / (SQRT_PI * k0));
+    // √(τ₀ a/(√π K₀)) as a product of roots: τ₀ a may overflow
+    const uSat = Math.sqrt(tau0) * Math.sqrt(a / (SQRT_PI * k0));
     const uMax = Math.max(1e4 * u1, 1e4 * uSat);
     const sLo = Math.log(u1);
     const sHi = Math.log(uMax);
@@ -110,7 +121,7 @@ function curveOfGrowth(tau0: number, b: number, gamma: number): number {
       const u = Math.exp(s);
       return f(u) * u;
     }, sLo, sHi, n);
-    integral += (tau0 * a) / (SQRT_PI * k0 * uMax);
+    integral += (tau0 / uMax) * (a / (SQRT_PI * k0));
   }
   return 2 * b * integral;
 }
@@ -143,21 +154,42 @@ export function equivalentWidthFromTau0Unchecked(tau0: number, dopplerWidthM: nu
   return curveOfGrowth(tau0, dopplerWidthM, lorentzHwhmM);
 }
 
-function solveTau0(wTarget: number, b: number, gamma: number): number {
+/** The RangeError for an equivalent width whose τ₀ exceeds the double range. */
+function tau0Overflow(wTarget: number, b: number, gamma: number): never {
+  throw new RangeError(
+    `equivalentWidthM = ${show(wTarget)} m needs a central optical depth beyond the double range (dopplerWidthM = ${show(b)} m, lorentzHwhmM = ${show(gamma)} m)`,
+  );
+}
+
+function solveTau0(wTarget: number, bIn: number, gamma: number): number {
   if (wTarget === 0) return 0;
+  const b = gamma / bIn >= PURE_LORENTZ_A ? gamma / PURE_LORENTZ_A : bIn; // as in curveOfGrowth
   const a = gamma / b;
   const k0 = voigtK(0, a);
   // Weak-line limit W = τ₀ b √π / K(0,a) is an upper bound on W(τ₀), so its
   // τ₀ is a lower bound on the root.
-  let lo = (wTarget * k0) / (b * SQRT_PI);
+  const ratio = wTarget / b;
+  let lo = (ratio * k0) / SQRT_PI;
+  if (!(lo < Infinity)) tau0Overflow(wTarget, bIn, gamma);
+  if (lo === 0) return 0; // W/b below the double range: τ₀ underflows with it
   let wLo = curveOfGrowth(lo, b, gamma);
   if (Math.abs(wLo - wTarget) <= 1e-12 * wTarget) return lo;
-  let hi = lo * 2;
+  // Upper bracket from the saturated limits, so that the search below takes a
+  // bounded number of steps: flat part W ≈ 2b√(ln τ₀) gives τ₀ = e^{(W/2b)²};
+  // damping part W ≈ 2b√(√π τ₀ a/K₀) gives τ₀ = (W/2b)² K₀/(√π a).
+  const half = ratio / 2;
+  const flat = Math.exp(half * half);
+  const damp = a > 0 ? half * ((half * k0) / (SQRT_PI * a)) : Infinity;
+  let hi = Math.max(2 * lo, Math.min(4 * flat, 4 * damp));
+  if (!(hi < Infinity)) hi = Number.MAX_VALUE;
   let wHi = curveOfGrowth(hi, b, gamma);
-  for (let i = 0; wHi < wTarget && i < 2000; i++) {
+  // At most ~2100 steps of ×4 span the double range; in practice the bracket
+  // above already holds and this loop does not run.
+  for (let i = 0; wHi < wTarget && i < 600; i++) {
+    if (hi === Number.MAX_VALUE) tau0Overflow(wTarget, bIn, gamma);
     lo = hi;
     wLo = wHi;
-    hi *= 4;
+    hi = Math.min(hi * 4, Number.MAX_VALUE);
     wHi = curveOfGrowth(hi, b, gamma);
   }
   // Illinois (regula falsi) in ln τ₀ on f = W(τ₀) − W.
@@ -171,7 +203,7 @@ function solveTau0(wTarget: number, b: number, gamma: number): number {
     x = (xl * fh - xh * fl) / (fh - fl);
     if (!(x > xl && x < xh)) x = 0.5 * (xl + xh);
     const fx = curveOfGrowth(Math.exp(x), b, gamma) - wTarget;
-    if (Math.abs(fx) <= 1e-10 * wTarget || xh - xl < 1e-14) break;
+    if (Math.abs(fx) <= 1e-10 * wTarget || xh - xl <= 4e-16 * Math.max(1, Math.abs(x))) break;
     if (fx < 0) {
       xl = x;
       fl = fx;

@@ -54,8 +54,17 @@ export function transitionWavenumberSI(nLower: number, nUpper: number, z: number
 
 /** {@link transitionWavenumberSI} without the checks (levels ordered, Z and M valid). @internal */
 export function transitionWavenumberUnchecked(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
-  const bracket = ((nUpper - nLower) * (nUpper + nLower)) / (nLower * nLower * nUpper * nUpper);
-  return RYDBERG * z * z * reducedMassRatioUnchecked(nuclearMassKg) * bracket;
+  // 1/n_l² − 1/n_u² = [(n_u − n_l)/n_u]·[1 + n_l/n_u]/n_l², divided by n_l
+  // twice last: no square is formed, so n_u up to 1.8e308 gives the series
+  // limit, and huge n_l underflow gradually instead of giving NaN.
+  const k = RYDBERG * z * z * reducedMassRatioUnchecked(nuclearMassKg);
+  return ((k * ((nUpper - nLower) / nUpper)) / nLower) * ((1 + nLower / nUpper) / nLower);
+}
+
+/** 1/σ of the Bohr transition, m, formed as n_l/(K a) · n_l/b so that it stays finite wherever it is a double. @internal */
+function bohrWavelength(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
+  const k = RYDBERG * z * z * reducedMassRatioUnchecked(nuclearMassKg);
+  return (nLower / (k * ((nUpper - nLower) / nUpper))) * (nLower / (1 + nLower / nUpper));
 }
 
 /**
@@ -102,12 +111,14 @@ export function transitionFrequencyUnchecked(nLower: number, nUpper: number, z: 
  * ```
  */
 export function transitionVacuumWavelengthSI(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
-  return 1 / transitionWavenumberSI(nLower, nUpper, z, nuclearMassKg);
+  requireOrdered(nLower, nUpper);
+  requireNuclearCharge(z);
+  return bohrWavelength(nLower, nUpper, z, requireNuclearMass(nuclearMassKg));
 }
 
 /** {@link transitionVacuumWavelengthSI} without the checks. @internal */
 export function transitionVacuumWavelengthUnchecked(nLower: number, nUpper: number, z: number, nuclearMassKg: number): number {
-  return 1 / transitionWavenumberUnchecked(nLower, nUpper, z, nuclearMassKg);
+  return bohrWavelength(nLower, nUpper, z, nuclearMassKg);
 }
 
 /**
@@ -198,7 +209,7 @@ export function ionizationEnergySI(n: number, z: number, nuclearMassKg: number):
 
 /** {@link ionizationEnergySI} without the checks. @internal */
 export function ionizationEnergyUnchecked(n: number, z: number, nuclearMassKg: number): number {
-  return (H * C * RYDBERG * z * z * reducedMassRatioUnchecked(nuclearMassKg)) / (n * n);
+  return (H * C * RYDBERG * z * z * reducedMassRatioUnchecked(nuclearMassKg)) / n / n;
 }
 
 /** Names of the hydrogen series and their lower levels n₁. */
@@ -288,7 +299,7 @@ export function seriesLimitVacuumWavelengthSI(series: SeriesName, z: number, nuc
 
 /** {@link seriesLimitVacuumWavelengthSI} for lower level n₁, without the checks. @internal */
 export function seriesLimitVacuumWavelengthUnchecked(n1: number, z: number, nuclearMassKg: number): number {
-  return (n1 * n1) / (RYDBERG * z * z * reducedMassRatioUnchecked(nuclearMassKg));
+  return (n1 / (RYDBERG * z * z * reducedMassRatioUnchecked(nuclearMassKg))) * n1;
 }
 
 /**

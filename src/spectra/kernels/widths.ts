@@ -17,6 +17,10 @@
 import { C, K_B, M_U } from "../../values/constants";
 import { requireNonNegative, requirePositive } from "../../internal/checks";
 
+const SQRT_2K = Math.sqrt(2 * K_B);
+const INV_4PI_C = 1 / (4 * Math.PI * C);
+const SQRT_02166 = Math.sqrt(0.2166);
+
 /**
  * Mass of an atom from its relative atomic mass (e.g. 55.845 for Fe),
  * m = A_r m_u, kg.
@@ -56,7 +60,20 @@ export function dopplerVelocityWidthSI(temperatureK: number, massKg: number, mic
 
 /** {@link dopplerVelocityWidthSI} without the input checks. @internal */
 export function dopplerVelocityWidthUnchecked(temperatureK: number, massKg: number, microturbulenceMs: number): number {
-  return Math.sqrt((2 * K_B * temperatureK) / massKg + microturbulenceMs * microturbulenceMs);
+  // √(2kT/m) as √(2k)·√T/√m and the quadrature sum as a scaled hypot: no
+  // intermediate square or ratio leaves the double range unless b_v does
+  const thermal = (SQRT_2K * Math.sqrt(temperatureK)) / Math.sqrt(massKg);
+  return microturbulenceMs === 0 ? thermal : Math.hypot(thermal, microturbulenceMs);
+}
+
+/**
+ * Product of positive factors ordered so that no partial product over- or
+ * underflows unless the result does: the largest is paired with the
+ * smallest, then the middle two. @internal
+ */
+export function product4(a: number, b: number, c: number, d: number): number {
+  const f = [a, b, c, d].sort((x, y) => x - y) as [number, number, number, number];
+  return (f[0] * f[3]) * (f[1] * f[2]);
 }
 
 /**
@@ -82,7 +99,9 @@ export function dopplerWidthWavelengthSI(
  * frequency in Hz) for the velocity width b (m s⁻¹), without checks. @internal
  */
 export function dopplerWidthUnchecked(centre: number, velocityWidthMs: number): number {
-  return (centre * velocityWidthMs) / C;
+  // λ₀ b_v/c ordered so that the partial product stays in range: the larger
+  // factor is divided by c first
+  return centre >= velocityWidthMs ? (centre / C) * velocityWidthMs : centre * (velocityWidthMs / C);
 }
 
 /**
@@ -137,7 +156,7 @@ export function lorentzHwhmWavelengthSI(centreWavelengthM: number, dampingRatePe
 
 /** {@link lorentzHwhmWavelengthSI} without the input checks. @internal */
 export function lorentzHwhmWavelengthUnchecked(centreWavelengthM: number, dampingRatePerS: number): number {
-  return (centreWavelengthM * centreWavelengthM * dampingRatePerS) / (4 * Math.PI * C);
+  return product4(centreWavelengthM, centreWavelengthM, dampingRatePerS, INV_4PI_C);
 }
 
 /**
@@ -177,5 +196,6 @@ export function dopplerWidthFromSigma(sigma: number): number {
 export function voigtFwhmApprox(gaussianFwhm: number, lorentzFwhm: number): number {
   requireNonNegative("gaussianFwhm", gaussianFwhm, "(any width unit)");
   requireNonNegative("lorentzFwhm", lorentzFwhm, "(any width unit)");
-  return 0.5346 * lorentzFwhm + Math.sqrt(0.2166 * lorentzFwhm * lorentzFwhm + gaussianFwhm * gaussianFwhm);
+  // the square root of 0.2166 f_L² + f_G² as a scaled hypot (no square overflows)
+  return 0.5346 * lorentzFwhm + Math.hypot(SQRT_02166 * lorentzFwhm, gaussianFwhm);
 }
