@@ -147,7 +147,7 @@ export interface PreparedSedModelSI {
    * coordinates) into `d[c * np + a]`; `q` internal, length np.
    */
   evaluate(q: ArrayLike<number>, means: Float64Array, d: Float64Array): void;
-  /** Band means of term `t` alone with unit amplitude (A = 1) and no attenuation of its amplitude... (attenuation included). */
+  /** Band means of term `t` alone at unit amplitude (a^power = 1; its attenuation included) into `out`. */
   termShapeMeans(t: number, q: ArrayLike<number>, out: Float64Array): void;
 }
 
@@ -581,7 +581,13 @@ export function prepareSedModelSI(model: SedModelSI, channels: readonly ModelCha
 
   function termShapeMeans(ti: number, q: ArrayLike<number>, out: Float64Array): void {
     const t = terms[ti] as (typeof terms)[number];
-    termSums(ti, q, true);
+    const acc = t.ev.accumulate;
+    termSums(ti, q, acc === undefined);
+    if (acc !== undefined) {
+      acc.call(t.ev, t.q, t.we, null, offs, t.s0, t.ds, t.sk);
+      for (let c = 0; c < nCh; c++) out[c] = t.comp.amplitudeConstant * (t.s0[c] as number);
+      return;
+    }
     for (let c = 0; c < nCh; c++) {
       let s0 = 0;
       const end = offs[c + 1] as number;
