@@ -35,7 +35,7 @@ export type {
   StellarFromFitSI,
   StellarParameters,
 } from "./blackbody";
-export type { DerivedQuantitySI, StarConsistency, StarInputKind, StarQuantity } from "../photometry/kernels/solver";
+export type { DerivedQuantitySI, StarConsistencySI, StarInputKindSI, StarQuantitySI } from "../photometry/kernels/solver";
 // SED models you can compose and extend (plain SI numbers), the model fitter and the least-squares engine
 export {
   blackbodyComponentSI,

@@ -183,7 +183,7 @@ export interface BlackbodyFitSI {
   /** Covariance of the fitted parameters in K, rad, mag (products thereof). */
   readonly covariance: number[][];
   /** Covariance of (ln T, ln θ, A_V) for the fitted parameters. */
-  readonly logCovariance: number[][];
+  readonly lnCovariance: number[][];
   /** Correlation matrix of the fitted parameters. */
   readonly correlation: number[][];
   /** χ² = Σ pulls² at the solution (flux residuals for flux data, magnitude residuals for magnitudes). */
@@ -387,7 +387,7 @@ export function createBlackbodyFitterSI(channels: readonly FitChannelSI[], setti
       rV: ext ? rV : null,
       parameters: params,
       covariance: cov,
-      logCovariance: logCov,
+      lnCovariance: logCov,
       correlation: res.correlation,
       chi2: res.chi2,
       dof,

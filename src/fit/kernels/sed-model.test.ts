@@ -29,7 +29,7 @@ const CL = 299792458;
 const KB = 1.380649e-23;
 const planck = (l: number, T: number): number => (2 * H * CL * CL) / l ** 5 / Math.expm1((H * CL) / (l * KB * T));
 
-const band = (centerM: number): PreparedBandSI => prepareBandSI(topHatResponseSI(centerM, 0.2 * centerM, 21), "energy");
+const band = (centreM: number): PreparedBandSI => prepareBandSI(topHatResponseSI(centreM, 0.2 * centreM, 21), "energy");
 const OPTICAL = [0.365e-6, 0.445e-6, 0.551e-6, 0.658e-6, 0.806e-6, 1.22e-6, 1.63e-6, 2.19e-6].map(band);
 const FAR_IR = [24e-6, 70e-6, 100e-6, 160e-6, 250e-6, 350e-6, 500e-6, 850e-6].map(band);
 const MID_IR = [12e-6, 22e-6, 70e-6, 100e-6, 160e-6, 250e-6, 350e-6, 500e-6].map(band);
