@@ -10,7 +10,7 @@
  * @module
  */
 import { AB_ZERO_POINT, C } from "../values/constants";
-import { ccm89Ratio } from "../photometry/index";
+import { blackbodyComponentSI, ccm89AttenuationSI, sedModelSI, sedSpectrumSI } from "../fit/index";
 import type { LengthArray } from "../quantity/aliases";
 import { SI } from "../quantity/system";
 import { units } from "../quantity/units";
@@ -76,18 +76,23 @@ export function logGrid(a: number, b: number, n: number): Float64Array {
   return out;
 }
 
-/** π (θ/2)² B_λ(λ, T) · 10^(−0.4 A_V k(λ)) on a grid (m → W m⁻³), via the typed Planck batch. */
+/**
+ * π (θ/2)² B_λ(λ, T) · 10^(−0.4 A_V k(λ)) on a grid (m → W m⁻³), through the
+ * fit's own model evaluation (src/fit sed-model: the blackbody component,
+ * CCM89-attenuated); outside CCM89's 0.1–3.33 µm the curve is drawn unreddened.
+ */
 export function blackbodyFluxSI(gridM: Float64Array, temperatureK: number, thetaRad: number, aV: number, rV: number | null): Float64Array {
-  const { values } = planckRadianceWavelengthBatch(SI, gridM as LengthArray<"SI">, SI.of(temperatureK, units.K));
-  const dilution = Math.PI * (thetaRad / 2) ** 2;
-  const out = new Float64Array(gridM.length);
-  for (let i = 0; i < gridM.length; i++) {
-    let f = (values[i] as number) * dilution;
-    if (aV > 0 && rV !== null) {
-      const l = gridM[i] as number;
-      if (l >= 0.1e-6 && l <= 3.33e-6) f *= 10 ** (-0.4 * aV * ccm89Ratio(SI, SI.of(l, units.m), rV));
-    }
-    out[i] = f;
+  const star = blackbodyComponentSI();
+  const out = sedSpectrumSI(sedModelSI([{ component: star }]), [temperatureK, thetaRad], gridM);
+  if (aV > 0 && rV !== null) {
+    const inside: number[] = [];
+    for (let i = 0; i < gridM.length; i++) if ((gridM[i] as number) >= 0.1e-6 && (gridM[i] as number) <= 3.33e-6) inside.push(i);
+    const reddened = sedSpectrumSI(
+      sedModelSI([{ component: star, attenuation: ccm89AttenuationSI(rV) }]),
+      [temperatureK, thetaRad, aV],
+      inside.map((i) => gridM[i] as number),
+    );
+    inside.forEach((i, j) => (out[i] = reddened[j] as number));
   }
   return out;
 }

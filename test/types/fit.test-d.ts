@@ -5,6 +5,13 @@
  */
 import { describe, expectTypeOf, test } from "vitest";
 import {
+  blackbodyComponentSI,
+  ccm89AttenuationSI,
+  createSedFitterSI,
+  sedModelSI,
+  type ParameterEstimateSI,
+  type SedComponentSI,
+  type SedFitSI,
   createBlackbodyFitter,
   fitBlackbody,
   fitBlackbodySpectrum,
@@ -159,5 +166,19 @@ describe("fit: must compile", () => {
     expectTypeOf(a.bolometricFlux).toEqualTypeOf<Flux<"SI">>();
     const b = stellarParametersFromFit(CGS, fit, { distance: CGS.of(100, units.pc), sigma: CGS.of(1, units.pc) });
     expectTypeOf(b.luminosity).toEqualTypeOf<Power<"CGS">>();
+  });
+  test("composable SED models: terms, attenuation, estimates; an incomplete component or a bad transform does not compile", () => {
+    const model = sedModelSI([{ component: blackbodyComponentSI(), attenuation: ccm89AttenuationSI(3.1), label: "star" }]);
+    const fit = createSedFitterSI([vCGS.si, vCGS.si], model).fit([1, 2], [0.1, 0.2], [0, 0]);
+    expectTypeOf(fit).toEqualTypeOf<SedFitSI>();
+    expectTypeOf(fit.parameters).toEqualTypeOf<ParameterEstimateSI[]>();
+    // @ts-expect-error a component needs prepare(), its shape evaluator
+    const noEvaluator: SedComponentSI = { kind: "x", parameters: [], amplitudeIndex: 0, amplitudeConstant: 1, amplitudePower: 1 };
+    // @ts-expect-error the internal coordinate is "log" or "linear"
+    const badTransform: SedComponentSI["parameters"][number] = { name: "t", unit: "K", transform: "sqrt", lower: 1, upper: 2, start: 1 };
+    // @ts-expect-error a term takes a component, not a bare model
+    sedModelSI([{ component: model }]);
+    void noEvaluator;
+    void badTransform;
   });
 });

@@ -15,7 +15,7 @@ import { optInteger, optString, type ParsedArgs } from "../args";
 import { INTERNAL_EXIT, type Command } from "../command";
 import { UsageError, say, type CliIO } from "../context";
 import { loadBands, type BandSet, type CliBand } from "../bands";
-import { fitStar, raisedFlags, type StarDistance, type StarFitResult, type StarMeasurement } from "../fit-adapter";
+import { createStarFitter, raisedFlags, type StarDistance, type StarFitResult, type StarMeasurement } from "../fit-adapter";
 import { chi2Text, roundedK, hrFigure, luminosityLabel, planckFamilyFigure, sedFigure, spreadByTemperature, temperatureText, type HrPoint, type SedData } from "../figures";
 import { formatValueUncertainty } from "../io/write";
 import { writeReport } from "../report-write";
@@ -147,6 +147,7 @@ export function bindFit(columns: readonly ColumnSpec[], bandSet: BandSet, args: 
   const extinctionRV = extinction ? rV : undefined;
   const sigmaSpec = (name: string): ColumnSpec => ({ name: `sigma(${name})`, unit: null, uncertaintyOf: null, uncertaintySide: null });
 
+  const fitStar = createStarFitter(extinctionRV !== undefined ? { extinctionRV } : {}); // one fitter per set of bands present, reused across rows
   const fitRow = (cells: readonly InCell[]): FitOutcome => {
     const idText = id !== -1 ? textCell(cells[id]) : "";
     try {
@@ -178,7 +179,7 @@ export function bindFit(columns: readonly ColumnSpec[], bandSet: BandSet, args: 
           dist = { kind: distance.kind, value, sigma };
         }
       }
-      const result = fitStar(measurements, dist, extinctionRV !== undefined ? { extinctionRV } : {});
+      const result = fitStar(measurements, dist);
       return { ok: true, id: idText, measurements, result, flags: raisedFlags(result.fit) };
     } catch (e) {
       return { ok: false, id: idText, reason: e instanceof Error ? e.message : String(e) };

@@ -367,7 +367,7 @@ describe("agreement with an independent brute-force grid search on the same data
     expect(Math.abs(r.extinctionAV - aInterp)).toBeLessThanOrEqual(aStep);
     expect(r.chi2).toBeLessThanOrEqual(best * (1 + 1e-12));
     expect(Math.abs(r.extinctionAV - aV0)).toBeLessThan(3 * r.sigmaExtinctionAV);
-  });
+  }, 60_000);
 });
 
 describe("flags and degenerate input", () => {

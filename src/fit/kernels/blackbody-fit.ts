@@ -81,32 +81,28 @@
  * still fitted exactly, dof = 0; a singular information matrix gives NaN
  * covariance entries); poorFit (p = P(χ²_dof ≥ χ²) < 0.001, p-value.ts).
  *
+ * Since the model refactor this fitter is the blackbody model
+ * (sed-model.ts `blackbodyComponentSI`, CCM89 `ccm89AttenuationSI`) on the
+ * generic fitter (model-fit.ts) and the one least-squares engine
+ * (least-squares.ts); the colour-temperature start is its start strategy.
+ * Results agree with the pre-refactor fitter to ≤ 1e-12 relative (fixture
+ * test/fixtures/fit/blackbody-fit-baseline.json).
+ *
  * Allocation: the fitter allocates its work arrays once; an iteration
  * allocates nothing (the colour-temperature start and the result object
  * allocate once per fit).
  *
  * @internal
  */
-import { AB_ZERO_POINT, C, C1L, C2 } from "../../values/constants";
-import { requireFinite, requirePositive } from "../../internal/checks";
+import { C1L, C2 } from "../../values/constants";
+import { requirePositive } from "../../internal/checks";
 import { ccm89RatioSI, RV_DIFFUSE_ISM } from "../../photometry/kernels/extinction";
 import { colourTemperatureFromRatioSI } from "../../radiation/kernels/colour-temperature";
-import { chiSquarePValue } from "./p-value";
+import type { StopReason } from "./least-squares";
+import { createSedFitterSI, DATA_AB_MAGNITUDE, DATA_FLUX_LAMBDA, type FitChannelSI, type StartContextSI } from "./model-fit";
+import { blackbodyComponentSI, ccm89AttenuationSI, sedModelSI, type SedModelSI } from "./sed-model";
 
-/** Data kind of a channel: band-mean f_λ (W m⁻³). */
-export const DATA_FLUX_LAMBDA = 0;
-/** Data kind of a channel: AB magnitude (mag). */
-export const DATA_AB_MAGNITUDE = 1;
-
-/** One channel (band or spectrum pixel) as the fitter sees it. */
-export interface FitChannelSI {
-  /** Nodes, m (> 0). */
-  readonly wavelengthsM: ArrayLike<number>;
-  /** Normalized weights (Σ = 1). */
-  readonly weights: ArrayLike<number>;
-  /** Pivot wavelength, m (for magnitudes and the colour-temperature start). */
-  readonly pivotWavelengthM: number;
-}
+export { DATA_AB_MAGNITUDE, DATA_FLUX_LAMBDA, type FitChannelSI };
 
 /**
  * Planck's B_λ in the closed form the fitter's inner loop uses,
@@ -152,7 +148,7 @@ export interface BlackbodyFitSettingsSI {
 export type FitParameterName = "temperatureK" | "angularDiameterRad" | "extinctionAV";
 
 /** Why the iteration stopped. */
-export type FitStopReason = "step" | "chi2" | "exact" | "maxIterations" | "stalled";
+export type FitStopReason = StopReason;
 
 /** Quality flags. */
 export interface BlackbodyFitFlags {
@@ -228,12 +224,19 @@ export interface BlackbodyFitterSI {
   fit(values: ArrayLike<number>, sigmas: ArrayLike<number>, kinds: ArrayLike<number>): BlackbodyFitSI;
 }
 
-const LN10 = Math.LN10;
-const K04 = 0.4 * LN10; // d ln f / d A (per mag)
-const MAG_PER_LN = 2.5 / LN10;
-const GRID_POINTS = 61;
+const K04 = 0.4 * Math.LN10; // d ln f / d A (per mag)
+const MAG_PER_LN = 2.5 / Math.LN10;
 const DEFAULT_T_RANGE: readonly [number, number] = [300, 1e6];
 const COLOUR_MIN_PIVOT_RATIO = 1.15;
+
+/** The fitter's model: a blackbody disc, CCM89-attenuated when `extinction` is set. */
+export function blackbodyModelSI(settings: BlackbodyFitSettingsSI = {}): SedModelSI {
+  const ext = settings.extinction;
+  const range = settings.temperatureRangeK ?? DEFAULT_T_RANGE;
+  const star = blackbodyComponentSI({ temperatureRangeK: [range[0], range[1]] });
+  if (ext === undefined) return sedModelSI([{ component: star }]);
+  return sedModelSI([{ component: star, attenuation: ccm89AttenuationSI(ext.rV ?? RV_DIFFUSE_ISM, ext.aV ?? 0, ext.fitAV ?? true) }]);
+}
 
 /**
  * Build a fitter for the given channels (weights and CCM89 ratios are
@@ -251,7 +254,7 @@ const COLOUR_MIN_PIVOT_RATIO = 1.15;
 export function createBlackbodyFitterSI(channels: readonly FitChannelSI[], settings: BlackbodyFitSettingsSI = {}): BlackbodyFitterSI {
   const nCh = channels.length;
   if (nCh < 1) throw new RangeError("channels must contain at least one band or pixel; got 0");
-  // ---- settings
+  // ---- settings (checked here first, with the messages of the fitter's API)
   const ext = settings.extinction !== undefined;
   const rV = ext ? requirePositive("extinction.rV", settings.extinction?.rV ?? RV_DIFFUSE_ISM, "(dimensionless)") : 0;
   const aV0 = ext ? settings.extinction?.aV ?? 0 : 0;
@@ -267,210 +270,39 @@ export function createBlackbodyFitterSI(channels: readonly FitChannelSI[], setti
   const lnTMax = Math.log(tMax);
   const maxIter = settings.maxIterations ?? 200;
   if (!Number.isInteger(maxIter) || maxIter < 1) throw new RangeError(`maxIterations must be an integer >= 1; got ${String(maxIter)}`);
-  const xtol = requirePositive("stepTolerance", settings.stepTolerance ?? 1e-10, "(dimensionless)");
-  const ftol = requirePositive("chi2Tolerance", settings.chi2Tolerance ?? 1e-12, "(dimensionless)");
+  requirePositive("stepTolerance", settings.stepTolerance ?? 1e-10, "(dimensionless)");
+  requirePositive("chi2Tolerance", settings.chi2Tolerance ?? 1e-12, "(dimensionless)");
   const startMode = settings.start ?? "auto";
   if (startMode !== "auto" && startMode !== "grid") throw new RangeError(`start must be "auto" or "grid"; got ${String(startMode)}`);
 
-  // ---- flatten channels
-  const offs = new Int32Array(nCh + 1);
-  let total = 0;
-  for (let c = 0; c < nCh; c++) {
-    const ch = channels[c] as FitChannelSI;
-    const n = ch.wavelengthsM.length;
-    if (n < 1 || ch.weights.length !== n) {
-      throw new RangeError(`channels[${c}] must have at least one node and as many weights as wavelengths; got ${n} and ${ch.weights.length}`);
-    }
-    requirePositive(`channels[${c}].pivotWavelength`, ch.pivotWavelengthM, "m");
-    offs[c] = total;
-    total += n;
-  }
-  offs[nCh] = total;
-  const aC = new Float64Array(total); // 2hc²/λ⁵
-  const cX = new Float64Array(total); // c₂/λ
-  const w = new Float64Array(total);
-  const kx = new Float64Array(total);
-  const we = new Float64Array(total);
-  const pf = new Float64Array(nCh); // ⟨f_ν⟩/3631 Jy = ⟨f_λ⟩ · pf
-  const kBar = new Float64Array(nCh); // band-mean k (for dereddening the colour start)
+  // band-mean CCM89 ratio per channel (dereddening of the colour start)
+  const kBar = new Float64Array(nCh);
   const pivot = new Float64Array(nCh);
   for (let c = 0; c < nCh; c++) {
     const ch = channels[c] as FitChannelSI;
-    const o = offs[c] as number;
-    const n = ch.wavelengthsM.length;
+    pivot[c] = ch.pivotWavelengthM;
+    if (!ext) continue;
     let kb = 0;
-    for (let i = 0; i < n; i++) {
-      const l = requirePositive(`channels[${c}].wavelengths[${i}]`, ch.wavelengthsM[i] as number, "m");
+    for (let i = 0; i < ch.wavelengthsM.length; i++) {
       const wi = ch.weights[i] as number;
-      if (!(wi >= 0) || wi === Infinity) throw new RangeError(`channels[${c}].weights[${i}] must be a finite number >= 0; got ${String(wi)}`);
-      const l2 = l * l;
-      aC[o + i] = C1L / (l2 * l2 * l);
-      cX[o + i] = C2 / l;
-      w[o + i] = wi;
-      we[o + i] = wi;
-      if (ext && wi > 0) {
-        let k: number;
-        try {
-          k = ccm89RatioSI(l, rV);
-        } catch (e) {
-          throw new RangeError(
-            `channels[${c}] has a node at ${l} m, outside the CCM89 extinction law's domain [1e-7, 3.333e-6] m; ` +
-              `trim the band or fit without extinction (${(e as Error).message})`,
-          );
-        }
-        kx[o + i] = k;
-        kb += wi * k;
+      const l = ch.wavelengthsM[i] as number;
+      if (!(wi > 0) || !(l > 0)) continue;
+      try {
+        kb += wi * ccm89RatioSI(l, rV);
+      } catch {
+        // reported by the model preparation, naming the channel
       }
     }
     kBar[c] = kb;
-    pivot[c] = ch.pivotWavelengthM;
-    pf[c] = (ch.pivotWavelengthM * ch.pivotWavelengthM) / C / AB_ZERO_POINT;
   }
-  let cachedAV = ext ? NaN : 0;
-
-  // ---- per-fit data and work arrays (allocated once)
-  const y = new Float64Array(nCh);
-  const sg = new Float64Array(nCh);
-  const kind = new Uint8Array(nCh);
-  let r = new Float64Array(nCh);
-  let rT = new Float64Array(nCh);
-  let J = new Float64Array(nCh * 3);
-  let JT = new Float64Array(nCh * 3);
-  let mod = new Float64Array(nCh);
-  let modT = new Float64Array(nCh);
-  const s0buf = new Float64Array(nCh);
-  const H = new Float64Array(9);
-  const g = new Float64Array(3);
-  const A = new Float64Array(9);
-  const delta = new Float64Array(3);
-  const p = new Float64Array(3);
-  const zs = new Float64Array(3);
-  const free = new Uint8Array(3);
-  const idx = new Int32Array(3);
   const order = new Int32Array(nCh);
-  let evaluations = 0;
-
-  function setAV(aV: number): void {
-    if (aV === cachedAV) return;
-    for (let i = 0; i < total; i++) we[i] = (w[i] as number) * Math.exp(-K04 * aV * (kx[i] as number));
-    cachedAV = aV;
-  }
-
-  /** χ² at (ln T, ln θ, A_V); fills residuals, Jacobian (stride 3) and model. Infinity when not finite. */
-  function evaluate(lnT: number, lnTh: number, aV: number, rOut: Float64Array, jOut: Float64Array, mOut: Float64Array): number {
-    evaluations++;
-    const invT = Math.exp(-lnT);
-    const s = (Math.PI / 4) * Math.exp(2 * lnTh);
-    if (ext) setAV(aV);
-    let chi2 = 0;
-    for (let c = 0; c < nCh; c++) {
-      let s0 = 0;
-      let s1 = 0;
-      let s2 = 0;
-      const end = offs[c + 1] as number;
-      for (let i = offs[c] as number; i < end; i++) {
-        // B = a/expm1(x); T ∂B/∂T = B x eˣ/(eˣ − 1) = B x (em + 1)/em
-        const x = (cX[i] as number) * invT;
-        const em = Math.expm1(x);
-        if (em === Infinity) continue; // B underflows to 0
-        const wb = ((we[i] as number) * (aC[i] as number)) / em;
-        s0 += wb;
-        s1 += (wb * x * (em + 1)) / em;
-        s2 += wb * (kx[i] as number);
-      }
-      const sig = sg[c] as number;
-      let m: number;
-      let j0: number;
-      let j1: number;
-      let j2: number;
-      if (kind[c] === DATA_FLUX_LAMBDA) {
-        m = s * s0;
-        j0 = (s * s1) / sig;
-        j1 = (2 * m) / sig;
-        j2 = (-K04 * s * s2) / sig;
-      } else {
-        const f = s * s0;
-        if (!(f > 0)) return Infinity;
-        m = -2.5 * Math.log10(f * (pf[c] as number));
-        j0 = (-MAG_PER_LN * (s1 / s0)) / sig;
-        j1 = (-2 * MAG_PER_LN) / sig;
-        j2 = s2 / s0 / sig;
-      }
-      const rr = ((y[c] as number) - m) / sig;
-      rOut[c] = rr;
-      mOut[c] = m;
-      jOut[3 * c] = j0;
-      jOut[3 * c + 1] = j1;
-      jOut[3 * c + 2] = j2;
-      chi2 += rr * rr;
-    }
-    return Number.isFinite(chi2) ? chi2 : Infinity;
-  }
-
-  /** Band-mean B (S₀) per channel at (T, A_V) into s0buf. */
-  function fillS0(T: number, aV: number): void {
-    evaluations++;
-    if (ext) setAV(aV);
-    for (let c = 0; c < nCh; c++) {
-      let s0 = 0;
-      const end = offs[c + 1] as number;
-      const invT = 1 / T;
-      for (let i = offs[c] as number; i < end; i++) s0 += ((we[i] as number) * (aC[i] as number)) / Math.expm1((cX[i] as number) * invT);
-      s0buf[c] = s0;
-    }
-  }
-
-  /** ln θ minimizing χ² (flux-only: linear least squares in s; otherwise in log flux) at (T, A_V); NaN if none. */
-  function profileLnTheta(T: number, aV: number): number {
-    fillS0(T, aV);
-    let allFlux = true;
-    for (let c = 0; c < nCh; c++) if (kind[c] !== DATA_FLUX_LAMBDA) allFlux = false;
-    if (allFlux) {
-      let num = 0;
-      let den = 0;
-      for (let c = 0; c < nCh; c++) {
-        const s0 = s0buf[c] as number;
-        const iv = 1 / ((sg[c] as number) * (sg[c] as number));
-        num += (y[c] as number) * s0 * iv;
-        den += s0 * s0 * iv;
-      }
-      const s = num / den;
-      if (s > 0 && s !== Infinity) return 0.5 * Math.log((4 * s) / Math.PI);
-    }
-    let num = 0;
-    let den = 0;
-    for (let c = 0; c < nCh; c++) {
-      const s0 = s0buf[c] as number;
-      if (!(s0 > 0)) continue;
-      let lnF: number;
-      let sl: number;
-      if (kind[c] === DATA_FLUX_LAMBDA) {
-        if (!((y[c] as number) > 0)) continue;
-        lnF = Math.log(y[c] as number);
-        sl = (sg[c] as number) / (y[c] as number);
-      } else {
-        lnF = -((y[c] as number) / MAG_PER_LN) - Math.log(pf[c] as number);
-        sl = (sg[c] as number) / MAG_PER_LN;
-      }
-      const iv = 1 / (sl * sl);
-      num += (lnF - Math.log(s0)) * iv;
-      den += iv;
-    }
-    if (!(den > 0)) return NaN;
-    const lnS = num / den;
-    return 0.5 * (lnS + Math.log(4 / Math.PI));
-  }
-
-  /** Observed band-mean f_λ of channel c (NaN for a non-positive flux). */
-  function observedFLambda(c: number): number {
-    if (kind[c] === DATA_FLUX_LAMBDA) return (y[c] as number) > 0 ? (y[c] as number) : NaN;
-    return 10 ** ((y[c] as number) / -2.5) / (pf[c] as number);
-  }
 
   /** Colour-temperature start (NaN when not available). */
-  function colourStart(aV: number): number {
+  function colourStart(ctx: StartContextSI, aV: number): number {
     if (nCh < 2) return NaN;
-    // S/N order (insertion sort of indices; nCh is small for photometry)
+    const y = ctx.values;
+    const sg = ctx.sigmas;
+    const kind = ctx.kinds;
     const snr = (c: number): number =>
       kind[c] === DATA_FLUX_LAMBDA ? (y[c] as number) / (sg[c] as number) : MAG_PER_LN / (sg[c] as number);
     for (let c = 0; c < nCh; c++) order[c] = c;
@@ -484,19 +316,19 @@ export function createBlackbodyFitterSI(channels: readonly FitChannelSI[], setti
       order[b + 1] = v;
     }
     const c1 = order[0] as number;
-    const f1 = observedFLambda(c1);
+    const f1 = ctx.observedFluxLambda(c1);
     if (!(f1 > 0)) return NaN;
     let c2 = -1;
     for (let a = 1; a < nCh; a++) {
       const c = order[a] as number;
       const q = (pivot[c] as number) / (pivot[c1] as number);
-      if ((q >= COLOUR_MIN_PIVOT_RATIO || q <= 1 / COLOUR_MIN_PIVOT_RATIO) && observedFLambda(c) > 0) {
+      if ((q >= COLOUR_MIN_PIVOT_RATIO || q <= 1 / COLOUR_MIN_PIVOT_RATIO) && ctx.observedFluxLambda(c) > 0) {
         c2 = c;
         break;
       }
     }
     if (c2 < 0) return NaN;
-    let ratio = f1 / observedFLambda(c2);
+    let ratio = f1 / ctx.observedFluxLambda(c2);
     if (ext && aV > 0) ratio *= Math.exp(K04 * aV * ((kBar[c1] as number) - (kBar[c2] as number)));
     if (!(ratio > 0) || ratio === Infinity) return NaN;
     try {
@@ -506,231 +338,43 @@ export function createBlackbodyFitterSI(channels: readonly FitChannelSI[], setti
     }
   }
 
-  /** Cholesky solve of the k×k system in A (row-major, stride 3) with rhs g[idx]; result into delta[idx]. */
-  function choleskySolve(k: number): boolean {
-    // in-place lower factor in A
-    for (let i = 0; i < k; i++) {
-      for (let j = 0; j <= i; j++) {
-        let sum = A[i * 3 + j] as number;
-        for (let m = 0; m < j; m++) sum -= (A[i * 3 + m] as number) * (A[j * 3 + m] as number);
-        if (i === j) {
-          // A pivot within 64 ulp of the diagonal it came from is rounding noise (forming
-          // H and the subtraction each cost a few ulp of it): treat it as singular, so an
-          // exactly rank-deficient H is flagged whatever the sign of its last bits.
-          if (!(sum > 64 * Number.EPSILON * (A[i * 3 + i] as number)) || !Number.isFinite(sum)) return false;
-          A[i * 3 + i] = Math.sqrt(sum);
-        } else {
-          A[i * 3 + j] = sum / (A[j * 3 + j] as number);
-        }
-      }
-    }
-    const z = zs; // scratch for forward and back substitution
-    for (let i = 0; i < k; i++) {
-      let sum = g[idx[i] as number] as number;
-      for (let m = 0; m < i; m++) sum -= (A[i * 3 + m] as number) * (z[m] as number);
-      z[i] = sum / (A[i * 3 + i] as number);
-    }
-    for (let i = k - 1; i >= 0; i--) {
-      let sum = z[i] as number;
-      for (let m = i + 1; m < k; m++) sum -= (A[m * 3 + i] as number) * (z[m] as number);
-      z[i] = sum / (A[i * 3 + i] as number);
-    }
-    for (let i = 0; i < 3; i++) delta[i] = 0;
-    for (let i = 0; i < k; i++) delta[idx[i] as number] = z[i] as number;
-    return true;
-  }
-
-  /** Inverse of the np×np matrix H (stride 3) into a nested array; null if not positive definite. */
-  function inverseH(np: number): number[][] | null {
-    // column by column through the Cholesky solver (np ≤ 3); null when not positive definite
-    for (let i = 0; i < np; i++) idx[i] = i;
-    const out: number[][] = [];
-    for (let col = 0; col < np; col++) {
-      for (let i = 0; i < 9; i++) A[i] = H[i] as number;
-      for (let i = 0; i < 3; i++) g[i] = i === col ? 1 : 0;
-      if (!choleskySolve(np)) return null;
-      out.push(Array.from(delta.subarray(0, np)));
-    }
-    // symmetric: out[col][row]; return as rows
-    return out.map((_, i) => out.map((colv) => colv[i] as number));
-  }
+  const fitter = createSedFitterSI(channels, blackbodyModelSI(settings), {
+    maxIterations: maxIter,
+    ...(settings.stepTolerance !== undefined ? { stepTolerance: settings.stepTolerance } : {}),
+    ...(settings.chi2Tolerance !== undefined ? { chi2Tolerance: settings.chi2Tolerance } : {}),
+    startMode,
+    start: {
+      name: "colour",
+      strategy(ctx, q) {
+        const tc = colourStart(ctx, aV0);
+        if (!(tc >= tMin && tc <= tMax)) return false;
+        q[0] = Math.log(tc);
+        return ctx.profileAmplitudes(q) && Number.isFinite(q[1]);
+      },
+    },
+  });
+  const mask = new Uint8Array(ext ? 3 : 2);
 
   function fit(values: ArrayLike<number>, sigmas: ArrayLike<number>, kinds: ArrayLike<number>): BlackbodyFitSI {
-    if (values.length !== nCh || sigmas.length !== nCh || kinds.length !== nCh) {
-      throw new RangeError(`values, sigmas and kinds must each have ${nCh} entries (one per channel); got ${values.length}, ${sigmas.length}, ${kinds.length}`);
-    }
-    for (let c = 0; c < nCh; c++) {
-      const k = kinds[c] as number;
-      if (k !== DATA_FLUX_LAMBDA && k !== DATA_AB_MAGNITUDE) throw new RangeError(`kinds[${c}] must be 0 (f_λ) or 1 (AB magnitude); got ${String(k)}`);
-      requireFinite(`values[${c}]`, values[c] as number, k === DATA_FLUX_LAMBDA ? "W m^-3" : "mag");
-      requirePositive(`sigmas[${c}]`, sigmas[c] as number, k === DATA_FLUX_LAMBDA ? "W m^-3" : "mag");
-      y[c] = values[c] as number;
-      sg[c] = sigmas[c] as number;
-      kind[c] = k;
-    }
-    if (nCh < 2) {
+    if (values.length === nCh && sigmas.length === nCh && kinds.length === nCh && nCh < 2) {
       throw new RangeError(`observations must include at least 2 bands (or spectrum pixels) to determine both T and θ; got ${nCh}`);
     }
-    let anyPositive = false;
-    for (let c = 0; c < nCh; c++) if (kind[c] === DATA_AB_MAGNITUDE || (y[c] as number) > 0) anyPositive = true;
-    if (!anyPositive) throw new RangeError("observations: no flux is > 0, so no blackbody can be fitted");
-    evaluations = 0;
     const fitAV = fitAVRequested && nCh >= 3;
     const np = fitAV ? 3 : 2;
-    const aVStart = aV0;
-
-    // ---- start
-    let startMethod: "colour" | "grid" = "grid";
-    let lnT0 = NaN;
-    let lnTh0 = NaN;
-    if (startMode === "auto") {
-      const tc = colourStart(aVStart);
-      if (tc >= tMin && tc <= tMax) {
-        const lt = profileLnTheta(tc, aVStart);
-        if (Number.isFinite(lt)) {
-          lnT0 = Math.log(tc);
-          lnTh0 = lt;
-          startMethod = "colour";
-        }
-      }
-    }
-    if (startMethod === "grid") {
-      let best = Infinity;
-      for (let i = 0; i < GRID_POINTS; i++) {
-        const lt = lnTMin + ((lnTMax - lnTMin) * i) / (GRID_POINTS - 1);
-        const lth = profileLnTheta(Math.exp(lt), aVStart);
-        if (!Number.isFinite(lth)) continue;
-        const chi = evaluate(lt, lth, aVStart, rT, JT, modT);
-        if (chi < best) {
-          best = chi;
-          lnT0 = lt;
-          lnTh0 = lth;
-        }
-      }
-      if (!Number.isFinite(lnT0)) {
-        throw new RangeError(`observations: no blackbody between ${tMin} K and ${tMax} K gives a finite χ² for these data`);
-      }
-    }
-    const startT = Math.exp(lnT0);
-
-    // ---- Levenberg–Marquardt
-    p[0] = lnT0;
-    p[1] = lnTh0;
-    p[2] = aVStart;
-    let chi2 = evaluate(p[0] as number, p[1] as number, p[2] as number, r, J, mod);
-    if (chi2 === Infinity) throw new RangeError("observations: the model is not finite at the starting point");
-    let lambda = 1e-3;
-    let iterations = 0;
-    let stop: FitStopReason = "maxIterations";
-    if (chi2 === 0) stop = "exact";
-    while (stop === "maxIterations" && iterations < maxIter) {
-      // normal equations
-      for (let a = 0; a < 3; a++) {
-        let ga = 0;
-        for (let c = 0; c < nCh; c++) ga += (J[3 * c + a] as number) * (r[c] as number);
-        g[a] = ga;
-        for (let b = 0; b <= a; b++) {
-          let h = 0;
-          for (let c = 0; c < nCh; c++) h += (J[3 * c + a] as number) * (J[3 * c + b] as number);
-          H[a * 3 + b] = h;
-          H[b * 3 + a] = h;
-        }
-      }
-      // active set
-      const p0 = p[0] as number;
-      free[0] = (p0 <= lnTMin && (g[0] as number) < 0) || (p0 >= lnTMax && (g[0] as number) > 0) ? 0 : 1;
-      free[1] = 1;
-      free[2] = np === 3 && !((p[2] as number) <= 0 && (g[2] as number) <= 0) ? 1 : 0;
-      let k = 0;
-      for (let a = 0; a < 3; a++) if (free[a] === 1) idx[k++] = a;
-      for (let i = 0; i < k; i++) {
-        for (let j = 0; j < k; j++) {
-          const ai = idx[i] as number;
-          const aj = idx[j] as number;
-          const h = H[ai * 3 + aj] as number;
-          A[i * 3 + j] = i === j ? h * (1 + lambda) + (h === 0 ? lambda : 0) : h;
-        }
-      }
-      iterations++;
-      if (!choleskySolve(k)) {
-        lambda *= 10;
-        if (lambda > 1e16) {
-          stop = "stalled";
-          break;
-        }
-        continue;
-      }
-      // trial point, projected onto the box
-      let tl: number = (p[0] as number) + (delta[0] as number);
-      if (tl < lnTMin) tl = lnTMin;
-      if (tl > lnTMax) tl = lnTMax;
-      let ta: number = (p[2] as number) + (delta[2] as number);
-      if (np < 3) ta = p[2] as number;
-      if (ta < 0) ta = 0;
-      const th: number = (p[1] as number) + (delta[1] as number);
-      const step = Math.max(Math.abs(tl - (p[0] as number)), Math.abs(th - (p[1] as number)), Math.abs(ta - (p[2] as number)));
-      const chiT = evaluate(tl, th, ta, rT, JT, modT);
-      if (chiT < chi2) {
-        const rel = (chi2 - chiT) / chiT;
-        const usedLambda = lambda;
-        p[0] = tl;
-        p[1] = th;
-        p[2] = ta;
-        chi2 = chiT;
-        let t = r; r = rT; rT = t;
-        t = J; J = JT; JT = t;
-        t = mod; mod = modT; modT = t;
-        if (chi2 === 0) stop = "exact";
-        else if (step <= xtol) stop = "step";
-        else if (rel <= ftol && usedLambda <= 1) stop = "chi2";
-        lambda = Math.max(lambda / 10, 1e-12);
-      } else {
-        if (step <= xtol) {
-          stop = "step";
-          break;
-        }
-        lambda *= 10;
-        if (lambda > 1e16) {
-          stop = "stalled";
-          break;
-        }
-      }
-    }
-
-    // ---- covariance at the solution (full JᵀJ of the fitted parameters)
-    for (let a = 0; a < np; a++) {
-      for (let b = 0; b < np; b++) {
-        let h = 0;
-        for (let c = 0; c < nCh; c++) h += (J[3 * c + a] as number) * (J[3 * c + b] as number);
-        H[a * 3 + b] = h;
-      }
-    }
-    const inv = inverseH(np);
-    const T = Math.exp(p[0] as number);
-    const theta = Math.exp(p[1] as number);
-    const aV = p[2] as number;
-    const dScale = [T, theta, 1];
-    const logCov: number[][] = [];
-    const cov: number[][] = [];
-    const cor: number[][] = [];
-    for (let a = 0; a < np; a++) {
-      const lc: number[] = [];
-      const cc: number[] = [];
-      const rc: number[] = [];
-      for (let b = 0; b < np; b++) {
-        const v = inv === null ? NaN : (inv[a]?.[b] as number);
-        lc.push(v);
-        cc.push((dScale[a] as number) * (dScale[b] as number) * v);
-        rc.push(inv === null ? NaN : v / Math.sqrt((inv[a]?.[a] as number) * (inv[b]?.[b] as number)));
-      }
-      logCov.push(lc);
-      cov.push(cc);
-      cor.push(rc);
-    }
+    mask[0] = 1;
+    mask[1] = 1;
+    if (ext) mask[2] = fitAV ? 1 : 0;
+    const out = fitter.fitDetailed(values, sigmas, kinds, mask);
+    const res = out.result;
+    const q = out.q;
+    const T = Math.exp(q[0] as number);
+    const theta = Math.exp(q[1] as number);
+    const aV = ext ? (q[2] as number) : 0;
+    const cov = res.covariance.matrix;
+    const inv = out.internalCovariance;
+    const logCov = res.covariance.internalMatrix;
     const dof = nCh - np;
-    const tooFew = dof < 1 || inv === null || (fitAVRequested && !fitAV);
-    const pValue = dof >= 1 ? chiSquarePValue(chi2, dof) : null;
-    const atT = Math.abs((p[0] as number) - lnTMin) <= 1e-9 || Math.abs((p[0] as number) - lnTMax) <= 1e-9;
+    const atT = Math.abs((q[0] as number) - lnTMin) <= 1e-9 || Math.abs((q[0] as number) - lnTMax) <= 1e-9;
     const params: FitParameterName[] = ["temperatureK", "angularDiameterRad"];
     if (fitAV) params.push("extinctionAV");
     return {
@@ -744,23 +388,23 @@ export function createBlackbodyFitterSI(channels: readonly FitChannelSI[], setti
       parameters: params,
       covariance: cov,
       lnCovariance: logCov,
-      correlation: cor,
-      chi2,
+      correlation: res.correlation,
+      chi2: res.chi2,
       dof,
-      reducedChi2: dof >= 1 ? chi2 / dof : null,
-      pValue,
-      iterations,
-      evaluations,
-      startTemperatureK: startT,
-      startMethod,
-      stopReason: stop,
-      model: Array.from(mod),
-      pulls: Array.from(r),
+      reducedChi2: res.reducedChi2,
+      pValue: res.pValue,
+      iterations: res.iterations,
+      evaluations: res.evaluations,
+      startTemperatureK: Math.exp(out.startInternal[0] as number),
+      startMethod: res.startMethod === "colour" ? "colour" : "grid",
+      stopReason: res.stopReason,
+      model: res.model,
+      pulls: res.pulls,
       flags: {
-        notConverged: stop === "maxIterations" || stop === "stalled",
+        notConverged: res.flags.notConverged,
         atLimit: atT || (fitAV && aV === 0),
-        tooFewBands: tooFew,
-        poorFit: pValue !== null && pValue < 0.001,
+        tooFewBands: dof < 1 || inv === null || (fitAVRequested && !fitAV),
+        poorFit: res.flags.poorFit,
       },
     };
   }
