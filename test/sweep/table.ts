@@ -190,7 +190,7 @@ export const radiationTable: SweepEntry[] = [
   { name: "radiusFromLuminosityTemperature", args: [pos("luminosity"), T], call: (l, t) => radiusFromLuminosityTemperature(SI, q(l), q(t)), truth: (l, t) => l.div(R.PI.mul(4).mul(R.SIGMA).mul(t.pow(4))).sqrt(), tol: LOG_PATH_TOL, result: "radius" },
   { name: "temperatureFromLuminosityRadius", args: [pos("luminosity"), pos("radius")], call: (l, r) => temperatureFromLuminosityRadius(SI, q(l), q(r)), truth: (l, r) => l.div(R.PI.mul(4).mul(R.SIGMA).mul(r.pow(2))).pow(0.25), tol: LOG_PATH_TOL, result: "temperature" },
   { name: "photonExitance", args: [T], call: (t) => photonExitance(SI, q(t)), truth: (t) => photonTotalRadiance(t).mul(R.PI), tol: LOG_PATH_TOL, result: "photon exitance" },
-  { name: "photonEmissionRate", args: [pos("radius"), T], call: (r, t) => photonEmissionRate(SI, q(r), q(t)), truth: (r, t) => photonTotalRadiance(t).mul(R.PI).mul(R.PI.mul(4).mul(r.pow(2))), tol: LOG_PATH_TOL, result: "photon" },
+  { name: "photonEmissionRate", args: [pos("radius"), T], call: (r, t) => photonEmissionRate(SI, q(r), q(t)), truth: (r, t) => photonTotalRadiance(t).mul(R.PI).mul(R.PI.mul(4).mul(r.pow(2))), tol: 1e-14, result: "photon" },
   { name: "lambertianExitance", args: [nonneg("radiance")], call: (l) => lambertianExitance(q(l)) as unknown as number, truth: (l) => l.mul(R.PI), tol: 1e-15, result: "exitance" },
   { name: "lambertianRadiance", args: [nonneg("exitance")], call: (m) => lambertianRadiance(q(m)) as unknown as number, truth: (m) => m.div(R.PI), tol: 1e-15, result: "radiance" },
   // Brightness temperatures: T = (hc/λk) / ln(1 + 2hc²/(λ⁵B)), T = (hν/k) / ln(1 + 2hν³/(c²B)).
@@ -198,8 +198,8 @@ export const radiationTable: SweepEntry[] = [
     focus: (r) => { const t = logIn(r, -3, 12); const l = lamOfX(logIn(r, -8, 3), t); return [l, R.bLambda(R.exact(l), R.exact(t)).toNumber()]; } },
   { name: "brightnessTemperatureFrequency", args: [nu, pos("radiance")], call: (n, b) => brightnessTemperatureFrequency(SI, q(n), q(b)), truth: (n, b) => R.H.mul(n).div(R.K).div(R.log1p(R.H.mul(2).mul(n.pow(3)).div(R.C.pow(2).mul(b)))), tol: 1e-12, result: "temperature",
     focus: (r) => { const t = logIn(r, -3, 12); const n = nuOfX(logIn(r, -8, 3), t); return [n, R.bNu(R.exact(n), R.exact(t)).toNumber()]; } },
-  { name: "rayleighJeansBrightnessTemperatureWavelength", args: [lam, pos("radiance")], call: (l, b) => rayleighJeansBrightnessTemperatureWavelength(SI, q(l), q(b)), truth: (l, b) => l.pow(4).mul(b).div(R.C.mul(2).mul(R.K)), tol: LOG_PATH_TOL, result: "temperature" },
-  { name: "rayleighJeansBrightnessTemperatureFrequency", args: [nu, pos("radiance")], call: (n, b) => rayleighJeansBrightnessTemperatureFrequency(SI, q(n), q(b)), truth: (n, b) => R.C.pow(2).mul(b).div(n.pow(2).mul(2).mul(R.K)), tol: LOG_PATH_TOL, result: "temperature" },
+  { name: "rayleighJeansBrightnessTemperatureWavelength", args: [lam, pos("radiance")], call: (l, b) => rayleighJeansBrightnessTemperatureWavelength(SI, q(l), q(b)), truth: (l, b) => l.pow(4).mul(b).div(R.C.mul(2).mul(R.K)), tol: 1e-14, result: "temperature" },
+  { name: "rayleighJeansBrightnessTemperatureFrequency", args: [nu, pos("radiance")], call: (n, b) => rayleighJeansBrightnessTemperatureFrequency(SI, q(n), q(b)), truth: (n, b) => R.C.pow(2).mul(b).div(n.pow(2).mul(2).mul(R.K)), tol: 1e-14, result: "temperature" },
   // Band fractions: (15/π⁴)∫t³/(eᵗ−1), (1/2ζ(3))∫t²/(eᵗ−1) by the two standard series in 40 digits.
   planck2("blackbodyFractionBelowWavelength", lam, (l, t) => blackbodyFractionBelowWavelength(SI, q(l), q(t)), fracLam(3, true), lamOfX, "fraction"),
   planck2("blackbodyFractionAboveWavelength", lam, (l, t) => blackbodyFractionAboveWavelength(SI, q(l), q(t)), fracLam(3, false), lamOfX, "fraction"),

@@ -209,6 +209,16 @@ function longSide(p: number, x: number): number {
 /** Fraction with x2 < t < x1 (x1 ≥ x2 ≥ 0; x1l, x2l the low parts). */
 function between(p: number, x1: number, x1l: number, x2: number, x2l: number): number {
   if (x1 === x2 && x1l === x2l) return 0;
+  if (x1 < 1e-30) {
+    // deep Rayleigh–Jeans side: ∫₀^x t^p/(eᵗ−1) dt = x^p/p to 1e-30, so the
+    // fraction is (x1^p/p)(1 − r^p), r = x2/x1, with 1 − r from the exact
+    // difference of the double-double x's (no 0/0 of the quadrature at t → 0)
+    if (x1 === 0) return 0;
+    const r = x2 / x1;
+    const oneMinusR = (x1 - x2 + (x1l - x2l)) / x1;
+    const oneMinusRp = oneMinusR * (p === 3 ? 1 + r + r * r : 1 + r);
+    return (p === 3 ? NORM3 * (x1 * x1 * x1) / 3 : NORM2 * (x1 * x1) / 2) * oneMinusRp;
+  }
   if (x1 - x2 <= 1) return Math.max(0, (p === 3 ? NORM3 : NORM2) * narrowBand(p, x2, x2l, x1, x1l));
   if (x2 >= 2) {
     return p === 3 ? NORM3 * (upper3(x2) - upper3(x1)) : NORM2 * (upper2(x2) - upper2(x1));
