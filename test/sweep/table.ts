@@ -63,6 +63,11 @@ import {
   wienRelativeErrorWavelength,
 } from "../../src/radiation/index";
 import {
+  angularDiameter,
+  distanceFromAngularDiameter,
+  radiusFromAngularDiameter,
+  solidAngleOfDisk,
+  surfaceBrightness,
   abMagnitude,
   absoluteBolometricMagnitude,
   absoluteMagnitude,
@@ -246,6 +251,13 @@ export const photometryTable: SweepEntry[] = [
   { name: "parallaxFromDistanceExact", args: [pos("distance")], call: (d) => parallaxFromDistanceExact(SI, q(d)), truth: (d) => R.AU.div(d).atan(), tol: 1e-14, underflow: "throw", result: "parallax" },
   { name: "reddenFlux", args: [pos("flux"), real("extinction")], call: (f, a) => reddenFlux(q(f), q(a)), truth: (f, a) => f.mul(fromMag(a)), tol: 1e-12, underflow: "throw", result: "flux", focus: (r) => [logIn(r, -300, 300), (r() - 0.5) * 200] },
   { name: "dereddenFlux", args: [pos("flux"), real("extinction")], call: (f, a) => dereddenFlux(q(f), q(a)), truth: (f, a) => f.mul(fromMag(a.neg())), tol: 1e-12, underflow: "throw", result: "flux", focus: (r) => [logIn(r, -300, 300), (r() - 0.5) * 200] },
+  // Angular size (the geometries without a bounded domain; "sphere" needs d ≥ R and is checked in its own tests)
+  { name: "angularDiameter (disk)", args: [pos("radius"), pos("distance")], call: (r, d) => angularDiameter(SI, q(r), q(d), "disk"), truth: (r, d) => r.div(d).atan().mul(2), tol: 1e-14, underflow: "throw", result: "angular diameter" },
+  { name: "angularDiameter (small-angle)", args: [pos("radius"), pos("distance")], call: (r, d) => angularDiameter(SI, q(r), q(d), "small-angle"), truth: (r, d) => r.mul(2).div(d), tol: 1e-14, underflow: "throw", result: "angular diameter" },
+  { name: "radiusFromAngularDiameter (small-angle)", args: [pos("angular diameter"), pos("distance")], call: (t, d) => radiusFromAngularDiameter(SI, q(t), q(d), "small-angle"), truth: (t, d) => t.mul(d).div(2), tol: 1e-14, underflow: "throw", result: "radius" },
+  { name: "distanceFromAngularDiameter (small-angle)", args: [pos("angular diameter"), pos("radius")], call: (t, r) => distanceFromAngularDiameter(SI, q(t), q(r), "small-angle"), truth: (t, r) => r.mul(2).div(t), tol: 1e-14, underflow: "throw", result: "distance" },
+  { name: "solidAngleOfDisk (small-angle)", args: [pos("angular diameter")], call: (t) => solidAngleOfDisk(q(t), "small-angle"), truth: (t) => R.PI.mul(t.div(2).pow(2)), tol: 1e-14, underflow: "throw", result: "solid angle" },
+  { name: "surfaceBrightness (small-angle)", args: [pos("flux"), pos("angular diameter")], call: (f, t) => surfaceBrightness(SI, q(f), q(t), "small-angle"), truth: (f, t) => f.div(R.PI.mul(t.div(2).pow(2))), tol: 1e-14, underflow: "throw", result: "surface brightness" },
 ];
 
 export const sweepTable: SweepEntry[] = [...radiationTable, ...photometryTable];
