@@ -27,7 +27,6 @@
  * @module
  */
 import type { NotAirWavelength } from "../quantity/medium";
-import { C } from "../values/constants";
 import { show } from "../internal/checks";
 import { defineLaw } from "../law/define";
 import { lawInput } from "../law/input";
