@@ -13,6 +13,7 @@ const CASES: readonly [string, number[], string][] = [
   ["blackbodyPhotonFractionBelowFrequency", [1.2566e-319, 3.749414426529159e-268], "0 where the answer is 5.4e-125 (hν underflowed)"],
   ["blackbodyPhotonFractionBetweenWavelengths", [1.082844446130821e180, 1.2716846471139027e228, 9.826436018972832e139], "0/0 in the quadrature at t → 0"],
   ["bandRadianceWavelength", [1.6571793051806808e119, 1.9910979566593578e208, 3.3754812067264007e249], "0 where the answer is 2e-123 (fraction underflowed, σT⁴ overflowed)"],
+  ["bandRadianceWavelength", [1e-310, 1e-310, 1.0139116573554393e102], "RangeError (∞·0 in the log path) for a band of zero width"],
   ["planckRadianceWavelengthDerivativeT", [4.4971748693250074e-36, 1.000078003210709e285], "RangeError where ∂B/∂T = 2e127 (B overflows)"],
   ["planckRadianceFrequencyDerivativeT", [1.7416701380513201e50, 6.651515686849248e283], "RangeError where ∂B/∂T = 9e60"],
   ["brightnessTemperatureFrequency", [9.926955173998439e-86, 1.9686178717576424e-302], "3.7e-4 relative error (ln(1+y) taken as y for y = 7e-5)"],

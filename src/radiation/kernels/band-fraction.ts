@@ -275,6 +275,7 @@ function lnBetween(p: 2 | 3, l1: number, l2: number, T: number): number {
   const x2l = dd.lo;
   const f = between(p, x1, x1l, x2, x2l);
   if (f > 1e-300) return Math.log(f);
+  if (l1 === l2) return -Infinity; // a band of zero width
   const lnNorm = Math.log(p === 3 ? NORM3 : NORM2);
   if (x2 >= 2) {
     if (x1 - x2 <= 1) {
