@@ -27,7 +27,6 @@
  * @module
  */
 import type { NotAirWavelength } from "../quantity/medium";
-import { C } from "../values/constants";
 import { show } from "../internal/checks";
 import { defineLaw } from "../law/define";
 import { lawInput } from "../law/input";
@@ -112,7 +111,7 @@ const photonBelowFrequency = defineLaw({
   name: PHOTON_FRACTION,
   inputs: [frequency, temperature],
   result: kinds.dimensionless,
-  kernel: photonFractionBelowFrequencyUnchecked,
+  kernel: (f, t) => fractionBelowFrequencyUnchecked(2, f, t),
 });
 const bandRadiance = defineLaw({
   name: "the band radiance",
@@ -126,15 +125,6 @@ const bandPhotonRadiance = defineLaw({
   result: kinds.photonRadiance,
   kernel: bandPhotonRadianceWavelengthUnchecked,
 });
-
-/** Photon fraction below ν, as the photon fraction above λ = c/ν (SI core, no checks). */
-function photonFractionBelowFrequencyUnchecked(frequencyHz: number, temperatureK: number): number {
-  const lambda = C / frequencyHz;
-  // c/ν overflows only for ν < c/MAX ≈ 1.7e-300 Hz, where x = hν/kT underflows for every
-  // finite T and the fraction (≈ x²/(4ζ(3))) is 0 to double precision.
-  if (lambda === Infinity) return 0;
-  return fractionAboveWavelengthUnchecked(2, lambda, temperatureK);
-}
 
 /**
  * The RangeError for band edges given in the wrong order (λ₂ < λ₁ in the

@@ -370,7 +370,7 @@ const lambertianExitanceInput = lawInput("exitance", kinds.dimensionless, { chec
  * quantity (total, spectral per λ/ν/σ̃, photon) and removes its sr⁻¹; this
  * is the explicit step where the "lost π" of radiance vs flux is put back.
  *
- * @throws RangeError when the radiance is not finite and ≥ 0 (`radiance must be a finite number >= 0; got -1`)
+ * @throws RangeError when the radiance is not finite and ≥ 0 (`radiance must be a finite number >= 0; got -1`), or when π·radiance overflows
  * @example
  * ```ts
  * import { SI, lambertianExitance, planckRadianceWavelength, units, type SpectralFluxPerWavelength } from "starlume";
@@ -379,7 +379,9 @@ const lambertianExitanceInput = lawInput("exitance", kinds.dimensionless, { chec
  * ```
  */
 export function lambertianExitance<Q extends PerSteradian>(radiance: Q): Product<Q, SolidAngle> {
-  return (Math.PI * lambertianRadianceInput.si(radiance)) as Product<Q, SolidAngle>;
+  const m = Math.PI * lambertianRadianceInput.si(radiance);
+  if (m === Infinity) throw new RangeError(`the exitance π·radiance overflows the double range for radiance=${String(radiance)}`);
+  return m as Product<Q, SolidAngle>;
 }
 
 /**

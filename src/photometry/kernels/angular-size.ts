@@ -23,7 +23,7 @@
  * @module
  */
 import { requireInRange, requirePositive } from "../../internal/checks";
-import { requirePositiveResult } from "./common";
+import { requirePositiveResult, scaledQuotient } from "./common";
 
 /**
  * Exact angular diameter of a sphere: θ = 2 asin(R/d), d measured to the centre.
@@ -174,7 +174,7 @@ export function angularDiameterSmallAngleSI(radiusM: number, distanceM: number):
 
 /** θ = 2R/d without input or result checks (see {@link angularDiameterSmallAngleSI}). @internal */
 export function angularDiameterSmallAngleUnchecked(radiusM: number, distanceM: number): number {
-  return (2 * radiusM) / distanceM;
+  return scaledQuotient(2, radiusM, 1, 1, distanceM, 1, 1);
 }
 
 /**
@@ -198,7 +198,7 @@ export function radiusFromAngularDiameterSmallAngleSI(angularDiameterRad: number
 
 /** R = θd/2 without input or result checks (see {@link radiusFromAngularDiameterSmallAngleSI}). @internal */
 export function radiusFromAngularDiameterSmallAngleUnchecked(angularDiameterRad: number, distanceM: number): number {
-  return (angularDiameterRad / 2) * distanceM;
+  return scaledQuotient(angularDiameterRad, distanceM, 1, 1, 2, 1, 1);
 }
 
 /**
@@ -222,7 +222,7 @@ export function distanceFromAngularDiameterSmallAngleSI(angularDiameterRad: numb
 
 /** d = 2R/θ without input or result checks (see {@link distanceFromAngularDiameterSmallAngleSI}). @internal */
 export function distanceFromAngularDiameterSmallAngleUnchecked(angularDiameterRad: number, radiusM: number): number {
-  return (2 * radiusM) / angularDiameterRad;
+  return scaledQuotient(2, radiusM, 1, 1, angularDiameterRad, 1, 1);
 }
 
 /**
@@ -323,7 +323,6 @@ export function surfaceBrightnessSmallAngleSI(fluxWm2: number, angularDiameterRa
 
 /** F / (π(θ/2)²) without input or result checks (see {@link surfaceBrightnessSmallAngleSI}). @internal */
 export function surfaceBrightnessSmallAngleUnchecked(fluxWm2: number, angularDiameterRad: number): number {
-  const h = angularDiameterRad / 2;
-  // F / π / h / h avoids underflow of h² for tiny angles.
-  return fluxWm2 / Math.PI / h / h;
+  // 4F/(πθ²) with no spurious under/overflow of θ² or of the partial quotients
+  return scaledQuotient(4, fluxWm2, 1, 1, Math.PI, angularDiameterRad, angularDiameterRad);
 }

@@ -48,3 +48,6 @@ export function requireFiniteResult(what: string, value: number, unit: string): 
 
 /** 4π, computed once. */
 export const FOUR_PI = 4 * Math.PI;
+
+
+export { log10Ratio, scaledQuotient, scaledSqrtQuotient, timesPow10 } from "../../radiation/kernels/scaled";

@@ -35,7 +35,7 @@
  * @module
  */
 import { requireFinite, requirePositive } from "../../internal/checks";
-import { requireFiniteResult } from "./common";
+import { requireFiniteResult, timesPow10 } from "./common";
 
 /** Lower end of the R_V range spanned by the CCM89 sample (≈ 2.6, from memory). */
 export const CCM89_RV_FIT_MIN = 2.6;
@@ -259,7 +259,7 @@ export function colourExcessFromAV(aVMag: number, rV: number): number {
 export function reddenFlux(fluxIntrinsic: number, extinctionMag: number): number {
   requirePositive("flux", fluxIntrinsic, "(flux unit)");
   requireFinite("extinction", extinctionMag, "mag");
-  return requireFiniteResult("reddened flux", fluxIntrinsic * 10 ** (extinctionMag / -2.5), "(flux unit)");
+  return requireFiniteResult("reddened flux", timesPow10(fluxIntrinsic, extinctionMag / -2.5), "(flux unit)");
 }
 
 /**
@@ -278,7 +278,7 @@ export function reddenFlux(fluxIntrinsic: number, extinctionMag: number): number
 export function dereddenFlux(fluxObserved: number, extinctionMag: number): number {
   requirePositive("flux", fluxObserved, "(flux unit)");
   requireFinite("extinction", extinctionMag, "mag");
-  return requireFiniteResult("dereddened flux", fluxObserved * 10 ** (extinctionMag / 2.5), "(flux unit)");
+  return requireFiniteResult("dereddened flux", timesPow10(fluxObserved, extinctionMag / 2.5), "(flux unit)");
 }
 
 /**
@@ -344,12 +344,12 @@ export function colorExcessFromAVUnchecked(aVMag: number, rV: number): number {
 
 /** F × 10^(A/−2.5) without input or result checks (see {@link reddenFlux}). @internal */
 export function reddenFluxUnchecked(fluxIntrinsic: number, extinctionMag: number): number {
-  return fluxIntrinsic * 10 ** (extinctionMag / -2.5);
+  return timesPow10(fluxIntrinsic, extinctionMag / -2.5);
 }
 
 /** F × 10^(A/2.5) without input or result checks (see {@link dereddenFlux}); +Infinity on overflow. @internal */
 export function dereddenFluxUnchecked(fluxObserved: number, extinctionMag: number): number {
-  return fluxObserved * 10 ** (extinctionMag / 2.5);
+  return timesPow10(fluxObserved, extinctionMag / 2.5);
 }
 
 /** m + A without input or result checks (see {@link reddenMagnitude}). @internal */

@@ -14,7 +14,7 @@
  * @module
  */
 import { requirePositive } from "../../internal/checks";
-import { FOUR_PI, requirePositiveResult } from "./common";
+import { FOUR_PI, requirePositiveResult, scaledQuotient, scaledSqrtQuotient } from "./common";
 
 /**
  * Bolometric (or band) flux received at a distance from an isotropic emitter:
@@ -41,7 +41,7 @@ export function fluxFromLuminositySI(luminosityW: number, distanceM: number): nu
 
 /** F = L / (4π d²) without input or result checks (see {@link fluxFromLuminositySI}); 0 on underflow. @internal */
 export function fluxFromLuminosityUnchecked(luminosityW: number, distanceM: number): number {
-  return luminosityW / FOUR_PI / distanceM / distanceM;
+  return scaledQuotient(luminosityW, 1, 1, 1, FOUR_PI, distanceM, distanceM);
 }
 
 /**
@@ -66,7 +66,7 @@ export function luminosityFromFluxSI(fluxWm2: number, distanceM: number): number
 
 /** L = 4π d² F without input or result checks (see {@link luminosityFromFluxSI}); +Infinity on overflow. @internal */
 export function luminosityFromFluxUnchecked(fluxWm2: number, distanceM: number): number {
-  return FOUR_PI * fluxWm2 * distanceM * distanceM;
+  return scaledQuotient(FOUR_PI, fluxWm2, distanceM, distanceM, 1, 1, 1);
 }
 
 /**
@@ -94,6 +94,5 @@ export function distanceFromLuminosityFluxSI(luminosityW: number, fluxWm2: numbe
 
 /** d = √(L / (4π F)) without input or result checks (see {@link distanceFromLuminosityFluxSI}). @internal */
 export function distanceFromLuminosityFluxUnchecked(luminosityW: number, fluxWm2: number): number {
-  const q = luminosityW / (FOUR_PI * fluxWm2);
-  return q > 0 && q !== Infinity ? Math.sqrt(q) : Math.sqrt(luminosityW / FOUR_PI) / Math.sqrt(fluxWm2);
+  return scaledSqrtQuotient(luminosityW, FOUR_PI, fluxWm2);
 }

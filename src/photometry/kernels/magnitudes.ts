@@ -18,7 +18,7 @@
  */
 import { AB_ZERO_POINT, C, F0, L0, PARSEC } from "../../values/constants";
 import { requireFinite, requirePositive } from "../../internal/checks";
-import { requireFiniteResult, requirePositiveResult } from "./common";
+import { log10Ratio, requireFiniteResult, requirePositiveResult, scaledQuotient, timesPow10 } from "./common";
 
 /** 10 pc in m, the reference distance of absolute magnitudes (derived from the IAU 2015 B2 parsec). */
 export const TEN_PARSECS_M = 10 * PARSEC;
@@ -94,7 +94,7 @@ export function fluxRatioFromMagnitudeDifference(magnitudeDifference: number): n
 export function distanceModulusSI(distanceM: number, extinctionMag = 0): number {
   requirePositive("distance", distanceM, "m");
   requireFinite("extinction", extinctionMag, "mag");
-  return 5 * Math.log10(distanceM / TEN_PARSECS_M) + extinctionMag;
+  return 5 * log10Ratio(distanceM, TEN_PARSECS_M) + extinctionMag;
 }
 
 /**
@@ -114,7 +114,7 @@ export function distanceModulusSI(distanceM: number, extinctionMag = 0): number 
 export function distanceFromDistanceModulusSI(distanceModulusMag: number, extinctionMag = 0): number {
   requireFinite("distance modulus", distanceModulusMag, "mag");
   requireFinite("extinction", extinctionMag, "mag");
-  return requirePositiveResult("distance", TEN_PARSECS_M * 10 ** ((distanceModulusMag - extinctionMag) / 5), "m");
+  return requirePositiveResult("distance", timesPow10(TEN_PARSECS_M, (distanceModulusMag - extinctionMag) / 5), "m");
 }
 
 /**
@@ -172,7 +172,7 @@ export function apparentMagnitudeSI(absoluteMag: number, distanceM: number, exti
  */
 export function absoluteBolometricMagnitudeSI(luminosityW: number): number {
   requirePositive("luminosity", luminosityW, "W");
-  return pogsonMag(luminosityW / L0);
+  return -2.5 * log10Ratio(luminosityW, L0) + 0;
 }
 
 /**
@@ -190,7 +190,7 @@ export function absoluteBolometricMagnitudeSI(luminosityW: number): number {
  */
 export function luminosityFromAbsoluteBolometricMagnitudeSI(absoluteBolometricMag: number): number {
   requireFinite("absolute bolometric magnitude", absoluteBolometricMag, "mag");
-  return requirePositiveResult("luminosity", L0 * pogsonRatio(absoluteBolometricMag, "luminosity"), "W");
+  return requirePositiveResult("luminosity", luminosityFromAbsoluteBolometricMagnitudeUnchecked(absoluteBolometricMag), "W");
 }
 
 /**
@@ -208,7 +208,7 @@ export function luminosityFromAbsoluteBolometricMagnitudeSI(absoluteBolometricMa
  */
 export function apparentBolometricMagnitudeSI(bolometricFluxWm2: number): number {
   requirePositive("bolometric flux", bolometricFluxWm2, "W m^-2");
-  return pogsonMag(bolometricFluxWm2 / F0);
+  return -2.5 * log10Ratio(bolometricFluxWm2, F0) + 0;
 }
 
 /**
@@ -226,7 +226,7 @@ export function apparentBolometricMagnitudeSI(bolometricFluxWm2: number): number
  */
 export function bolometricFluxFromApparentBolometricMagnitudeSI(apparentBolometricMag: number): number {
   requireFinite("apparent bolometric magnitude", apparentBolometricMag, "mag");
-  return requirePositiveResult("bolometric flux", F0 * pogsonRatio(apparentBolometricMag, "bolometric flux"), "W m^-2");
+  return requirePositiveResult("bolometric flux", bolometricFluxFromApparentMagnitudeUnchecked(apparentBolometricMag), "W m^-2");
 }
 
 /**
@@ -244,7 +244,7 @@ export function bolometricFluxFromApparentBolometricMagnitudeSI(apparentBolometr
  */
 export function abMagnitudeSI(fNuWm2Hz: number): number {
   requirePositive("spectral flux density", fNuWm2Hz, "W m^-2 Hz^-1");
-  return pogsonMag(fNuWm2Hz / AB_ZERO_POINT);
+  return -2.5 * log10Ratio(fNuWm2Hz, AB_ZERO_POINT) + 0;
 }
 
 /**
@@ -262,7 +262,7 @@ export function abMagnitudeSI(fNuWm2Hz: number): number {
  */
 export function spectralFluxDensityFromAbMagnitudeSI(abMag: number): number {
   requireFinite("AB magnitude", abMag, "mag");
-  return requirePositiveResult("spectral flux density", AB_ZERO_POINT * pogsonRatio(abMag, "spectral flux density"), "W m^-2 Hz^-1");
+  return requirePositiveResult("spectral flux density", spectralFluxDensityFromAbMagnitudeUnchecked(abMag), "W m^-2 Hz^-1");
 }
 
 /**
@@ -282,7 +282,7 @@ export function spectralFluxDensityFromAbMagnitudeSI(abMag: number): number {
 export function fLambdaFromFNuSI(fNuWm2Hz: number, wavelengthM: number): number {
   requirePositive("spectral flux density", fNuWm2Hz, "W m^-2 Hz^-1");
   requirePositive("wavelength", wavelengthM, "m");
-  return requirePositiveResult("f_lambda", (fNuWm2Hz * (C / wavelengthM)) / wavelengthM, "W m^-3");
+  return requirePositiveResult("f_lambda", fLambdaFromFNuUnchecked(fNuWm2Hz, wavelengthM), "W m^-3");
 }
 
 /**
@@ -302,7 +302,7 @@ export function fLambdaFromFNuSI(fNuWm2Hz: number, wavelengthM: number): number 
 export function fNuFromFLambdaSI(fLambdaWm3: number, wavelengthM: number): number {
   requirePositive("spectral flux density", fLambdaWm3, "W m^-3");
   requirePositive("wavelength", wavelengthM, "m");
-  return requirePositiveResult("f_nu", ((fLambdaWm3 * wavelengthM) / C) * wavelengthM, "W m^-2 Hz^-1");
+  return requirePositiveResult("f_nu", fNuFromFLambdaUnchecked(fLambdaWm3, wavelengthM), "W m^-2 Hz^-1");
 }
 
 // ---- unchecked cores (for the typed laws, which check their inputs in the caller's unit) ----
@@ -324,17 +324,17 @@ export function fluxRatioFromMagnitudeDifferenceUnchecked(magnitudeDifference: n
  */
 export function magnitudeDifferenceOfFluxesUnchecked(flux1: number, flux2: number): number {
   const r = flux1 / flux2;
-  return r > 0 && r !== Infinity ? pogsonMag(r) : -2.5 * (Math.log10(flux1) - Math.log10(flux2));
+  return -2.5 * log10Ratio(flux1, flux2) + 0;
 }
 
 /** m − M = 5 log₁₀(d / 10 pc) + A without input checks (see {@link distanceModulusSI}). @internal */
 export function distanceModulusUnchecked(distanceM: number, extinctionMag: number): number {
-  return 5 * Math.log10(distanceM / TEN_PARSECS_M) + extinctionMag;
+  return 5 * log10Ratio(distanceM, TEN_PARSECS_M) + extinctionMag;
 }
 
 /** d = 10 pc × 10^((μ − A)/5) without input or result checks (see {@link distanceFromDistanceModulusSI}). @internal */
 export function distanceFromDistanceModulusUnchecked(distanceModulusMag: number, extinctionMag: number): number {
-  return TEN_PARSECS_M * 10 ** ((distanceModulusMag - extinctionMag) / 5);
+  return timesPow10(TEN_PARSECS_M, (distanceModulusMag - extinctionMag) / 5);
 }
 
 /** M = m − 5 log₁₀(d / 10 pc) − A without input or result checks (see {@link absoluteMagnitudeSI}). @internal */
@@ -349,40 +349,40 @@ export function apparentMagnitudeUnchecked(absoluteMag: number, distanceM: numbe
 
 /** M_bol = −2.5 log₁₀(L / L₀) without input checks (see {@link absoluteBolometricMagnitudeSI}). @internal */
 export function absoluteBolometricMagnitudeUnchecked(luminosityW: number): number {
-  return pogsonMag(luminosityW / L0);
+  return -2.5 * log10Ratio(luminosityW, L0) + 0;
 }
 
 /** L = L₀ 10^(M_bol/−2.5) without input or result checks (see {@link luminosityFromAbsoluteBolometricMagnitudeSI}). @internal */
 export function luminosityFromAbsoluteBolometricMagnitudeUnchecked(absoluteBolometricMag: number): number {
-  return L0 * 10 ** (absoluteBolometricMag / -2.5);
+  return timesPow10(L0, absoluteBolometricMag / -2.5);
 }
 
 /** m_bol = −2.5 log₁₀(f / f₀) without input checks (see {@link apparentBolometricMagnitudeSI}). @internal */
 export function apparentBolometricMagnitudeUnchecked(bolometricFluxWm2: number): number {
-  return pogsonMag(bolometricFluxWm2 / F0);
+  return -2.5 * log10Ratio(bolometricFluxWm2, F0) + 0;
 }
 
 /** f = f₀ 10^(m_bol/−2.5) without input or result checks (see {@link bolometricFluxFromApparentBolometricMagnitudeSI}). @internal */
 export function bolometricFluxFromApparentMagnitudeUnchecked(apparentBolometricMag: number): number {
-  return F0 * 10 ** (apparentBolometricMag / -2.5);
+  return timesPow10(F0, apparentBolometricMag / -2.5);
 }
 
 /** m_AB = −2.5 log₁₀(f_ν / 3631 Jy) without input checks (see {@link abMagnitudeSI}). @internal */
 export function abMagnitudeUnchecked(fNuWm2Hz: number): number {
-  return pogsonMag(fNuWm2Hz / AB_ZERO_POINT);
+  return -2.5 * log10Ratio(fNuWm2Hz, AB_ZERO_POINT) + 0;
 }
 
 /** f_ν = 3631 Jy × 10^(m_AB/−2.5) without input or result checks (see {@link spectralFluxDensityFromAbMagnitudeSI}). @internal */
 export function spectralFluxDensityFromAbMagnitudeUnchecked(abMag: number): number {
-  return AB_ZERO_POINT * 10 ** (abMag / -2.5);
+  return timesPow10(AB_ZERO_POINT, abMag / -2.5);
 }
 
 /** f_λ = f_ν c / λ² without input or result checks (see {@link fLambdaFromFNuSI}). @internal */
 export function fLambdaFromFNuUnchecked(fNuWm2Hz: number, wavelengthM: number): number {
-  return (fNuWm2Hz * (C / wavelengthM)) / wavelengthM;
+  return scaledQuotient(fNuWm2Hz, C, 1, 1, wavelengthM, wavelengthM, 1);
 }
 
 /** f_ν = f_λ λ² / c without input or result checks (see {@link fNuFromFLambdaSI}). @internal */
 export function fNuFromFLambdaUnchecked(fLambdaWm3: number, wavelengthM: number): number {
-  return ((fLambdaWm3 * wavelengthM) / C) * wavelengthM;
+  return scaledQuotient(fLambdaWm3, wavelengthM, wavelengthM, 1, C, 1, 1);
 }

@@ -27,6 +27,7 @@
  * small-x one follows from t/(eᵗ−1) = Σ B_k tᵏ/k! integrated term by term.
  */
 import { requirePositive } from "../../internal/checks";
+import { C2, SIGMA } from "../../values/constants";
 import { dd, rationalToDD } from "./exact";
 import { FORM_LAMBDA_ENERGY, FORM_NU_ENERGY, computeX } from "./planck-core";
 import { SIGMA_PHOTON, ZETA3, stefanBoltzmannExitanceSI, stefanBoltzmannExitanceUnchecked } from "./stefan-boltzmann";
@@ -35,6 +36,10 @@ import { SIGMA_PHOTON, ZETA3, stefanBoltzmannExitanceSI, stefanBoltzmannExitance
 const NORM3 = 15 / Math.PI ** 4;
 /** 1/(2ζ(3)): normalization of ∫₀^∞ t²/(eᵗ−1) dt = Γ(3)ζ(3). */
 const NORM2 = 1 / (2 * ZETA3);
+/** ln(σ/π), for band radiances in logarithms. */
+const LN_SIGMA_OVER_PI = Math.log(SIGMA / Math.PI);
+/** hc/k (c₂) as a plain double, for ln x from the logs of λ and T. */
+const C2_OVER_HC_K = C2;
 
 // ---- exact Bernoulli numbers over factorials, β_k = B_k/k! (B_1 = −1/2) ----
 type Rat = readonly [bigint, bigint];
@@ -189,6 +194,7 @@ function narrowBand(p: number, a: number, al: number, b: number, bl: number): nu
 
 /** Fraction of emission at t > x (short-wave side); xl = low part of x. */
 function shortSide(p: number, x: number, xl: number): number {
+  if (x > 1e6) return 0; // e^−x underflows for any x this large (x = ∞ included: the low-part correction would be ∞·0)
   if (x >= 2) {
     if (p === 3) return NORM3 * upper3(x) * (1 - (xl * x * x * x) / (((x + 3) * x + 6) * x + 6));
     return NORM2 * upper2(x) * (1 - (xl * x * x) / ((x + 2) * x + 2));
@@ -203,6 +209,16 @@ function longSide(p: number, x: number): number {
 /** Fraction with x2 < t < x1 (x1 ≥ x2 ≥ 0; x1l, x2l the low parts). */
 function between(p: number, x1: number, x1l: number, x2: number, x2l: number): number {
   if (x1 === x2 && x1l === x2l) return 0;
+  if (x1 < 1e-30) {
+    // deep Rayleigh–Jeans side: ∫₀^x t^p/(eᵗ−1) dt = x^p/p to 1e-30, so the
+    // fraction is (x1^p/p)(1 − r^p), r = x2/x1, with 1 − r from the exact
+    // difference of the double-double x's (no 0/0 of the quadrature at t → 0)
+    if (x1 === 0) return 0;
+    const r = x2 / x1;
+    const oneMinusR = (x1 - x2 + (x1l - x2l)) / x1;
+    const oneMinusRp = oneMinusR * (p === 3 ? 1 + r + r * r : 1 + r);
+    return (p === 3 ? NORM3 * (x1 * x1 * x1) / 3 : NORM2 * (x1 * x1) / 2) * oneMinusRp;
+  }
   if (x1 - x2 <= 1) return Math.max(0, (p === 3 ? NORM3 : NORM2) * narrowBand(p, x2, x2l, x1, x1l));
   if (x2 >= 2) {
     return p === 3 ? NORM3 * (upper3(x2) - upper3(x1)) : NORM2 * (upper2(x2) - upper2(x1));
@@ -211,6 +227,87 @@ function between(p: number, x1: number, x1l: number, x2: number, x2l: number): n
     return p === 3 ? NORM3 * (lower3(x1) - lower3(x2)) : NORM2 * (lower2(x1) - lower2(x2));
   }
   return 1 - shortSide(p, x1, 0) - longSide(p, x2);
+}
+
+// ---- logarithms of the band integrals, for results whose factors leave the double range ----
+
+/**
+ * ln ∫_x^∞ t^p/(eᵗ−1) dt for x ≥ 2 (x = xh + xl): −x + ln Σ_n e^{−(n−1)x}·poly_n(x),
+ * the same series as {@link upper3} / {@link upper2} with e^{−x} taken out,
+ * so it neither underflows nor loses digits for any finite x.
+ */
+function lnUpper(p: number, x: number, xl: number): number {
+  if (x === Infinity) return -x;
+  if (x > 1e6) return -x + p * Math.log(x); // poly(x) = x^p(1 + O(1/x)) and e^−x ≪ 1e-16: exact to double precision (−∞ for x = ∞)
+  const q = x > 745 ? 0 : Math.exp(-x);
+  let en = 1;
+  let s = 0;
+  for (let n = 1; n <= 60; n++) {
+    const inv = 1 / n;
+    const poly = p === 3 ? inv * (x * x * x + inv * (3 * x * x + inv * (6 * x + inv * 6))) : inv * (x * x + inv * (2 * x + inv * 2));
+    const term = en * poly;
+    s += term;
+    if (term < 1e-17 * s) break;
+    en *= q;
+  }
+  const lead = p === 3 ? (((x + 3) * x + 6) * x + 6) : ((x + 2) * x + 2);
+  // Low part of x: d/dx ln(upper) ≈ −x^p/poly(x) (first term), times xl.
+  return -x + Math.log(s) - (xl * (p === 3 ? x * x * x : x * x)) / lead;
+}
+
+/**
+ * ln of the fraction between x2 < t < x1 (x1 ≥ x2 ≥ 0) — the log-space twin
+ * of {@link between}, for band radiances whose fraction underflows while σT⁴
+ * is huge (or the reverse):
+ * - the plain fraction when it is a normal double > 1e-300;
+ * - both ends in the Wien tail (x2 ≥ 2): ln upper(x2) + log1p(−upper(x1)/upper(x2));
+ * - both ends deep in the Rayleigh–Jeans tail (x1 < 1e-30, where
+ *   ∫₀^x t^p/(eᵗ−1) dt = x^p/p to 1e-30): ln(x1^p/p) + ln(1 − (λ1/λ2)^p),
+ *   the last factor from the wavelengths ((λ2−λ1)/λ2 is exact for close edges);
+ * - otherwise the plain fraction (it cannot underflow there).
+ */
+function lnBetween(p: 2 | 3, l1: number, l2: number, T: number): number {
+  computeX(FORM_LAMBDA_ENERGY, l1, T);
+  const x1 = dd.hi;
+  const x1l = dd.lo;
+  computeX(FORM_LAMBDA_ENERGY, l2, T);
+  const x2 = dd.hi;
+  const x2l = dd.lo;
+  const f = between(p, x1, x1l, x2, x2l);
+  if (f > 1e-300) return Math.log(f);
+  if (l1 === l2) return -Infinity; // a band of zero width
+  const lnNorm = Math.log(p === 3 ? NORM3 : NORM2);
+  if (x2 >= 2) {
+    if (x1 - x2 <= 1) {
+      // narrow band in the Wien tail: Gauss–Legendre on the scaled integrand, e^{−x2} in logs
+      return lnNorm + lnNarrowBand(p, x2, x2l, x1, x1l);
+    }
+    const u2 = lnUpper(p, x2, x2l);
+    if (u2 === -Infinity) return u2;
+    const u1 = lnUpper(p, x1, x1l);
+    return lnNorm + u2 + Math.log1p(-Math.exp(u1 - u2));
+  }
+  if (x1 < 1e-30) {
+    const r = l1 / l2;
+    const oneMinus = ((l2 - l1) / l2) * (p === 3 ? 1 + r + r * r : 1 + r);
+    // ln x1 from the logs when x1 itself left the normal range
+    const lnX1 = x1 >= 1e-300 ? Math.log(x1) : Math.log(C2_OVER_HC_K) - Math.log(l1) - Math.log(T);
+    return lnNorm + p * lnX1 - Math.log(p) + Math.log(oneMinus);
+  }
+  return Math.log(f);
+}
+
+/** ln of {@link narrowBand} (a = x2 ≥ 2), keeping e^{−a} in the logarithm. */
+function lnNarrowBand(p: number, a: number, al: number, b: number, bl: number): number {
+  const half = 0.5 * (b - a + (bl - al));
+  let s = 0;
+  for (let i = 0; i < GL_N; i++) {
+    const off = half * (1 + (GL_X[i] as number));
+    const t = a + off;
+    const tp = p === 3 ? t * t * t : t * t;
+    s += (GL_W[i] as number) * ((tp * Math.exp(-off)) / -Math.expm1(-t));
+  }
+  return Math.log(s * half) - a - al;
 }
 
 function xLambda(lambda: number, T: number): number {
@@ -255,17 +352,23 @@ export function fractionBelowFrequencyUnchecked(p: 2 | 3, frequencyHz: number, t
 /** {@link bandRadianceWavelengthSI} without input checks; +Infinity signals overflow, NaN λ₂ < λ₁. @internal */
 export function bandRadianceWavelengthUnchecked(wavelength1M: number, wavelength2M: number, temperatureK: number): number {
   const f = fractionBetweenWavelengthsUnchecked(3, wavelength1M, wavelength2M, temperatureK);
-  return f === 0 ? 0 : (stefanBoltzmannExitanceUnchecked(temperatureK) / Math.PI) * f;
+  if (f !== f) return f;
+  const m = stefanBoltzmannExitanceUnchecked(temperatureK) / Math.PI;
+  const v = m * f;
+  if (f > 1e-300 && m >= 1e-300 && m !== Infinity && v >= 1e-300 && v !== Infinity) return v;
+  // σT⁴ or the fraction outside the double range, or a subnormal product: in logarithms
+  return Math.exp(LN_SIGMA_OVER_PI + 4 * Math.log(temperatureK) + lnBetween(3, wavelength1M, wavelength2M, temperatureK));
 }
 
 /** {@link bandPhotonRadianceWavelengthSI} without input checks; NaN when λ₂ < λ₁. @internal */
 export function bandPhotonRadianceWavelengthUnchecked(wavelength1M: number, wavelength2M: number, temperatureK: number): number {
   const f = fractionBetweenWavelengthsUnchecked(2, wavelength1M, wavelength2M, temperatureK);
-  if (f === 0 || f !== f) return f;
+  if (f !== f) return f;
   const t3 = temperatureK * temperatureK * temperatureK;
-  const v = ((SIGMA_PHOTON * t3) / Math.PI) * f;
-  if (v !== Infinity && t3 !== Infinity) return v;
-  return Math.exp(Math.log(SIGMA_PHOTON / Math.PI) + 3 * Math.log(temperatureK) + Math.log(f));
+  const m = (SIGMA_PHOTON * t3) / Math.PI;
+  const v = m * f;
+  if (f > 1e-300 && m >= 1e-300 && m !== Infinity && v >= 1e-300 && v !== Infinity) return v;
+  return Math.exp(Math.log(SIGMA_PHOTON / Math.PI) + 3 * Math.log(temperatureK) + lnBetween(2, wavelength1M, wavelength2M, temperatureK));
 }
 
 /** The checks of the between-wavelengths kernels (RangeError naming the argument, in SI units). */

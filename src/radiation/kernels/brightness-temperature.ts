@@ -13,6 +13,7 @@ import { C, C1L, K_B } from "../../values/constants";
 import { requirePositive } from "../../internal/checks";
 import { C2_HI, H_OVER_K_HI } from "./exact";
 import { TWO_H_OVER_C2 } from "./planck-core";
+import { scaledPower } from "./scaled";
 
 const LN_C1L = Math.log(C1L);
 const LN_TWO_H_OVER_C2 = Math.log(TWO_H_OVER_C2);
@@ -57,14 +58,10 @@ export function brightnessTemperatureWavelengthUnchecked(wavelengthM: number, ra
   const l = wavelengthM;
   const lnL = Math.log(l);
   const lnY = LN_C1L - 5 * lnL - Math.log(radiance);
-  let y = NaN;
-  let num = NaN;
-  if (l >= 1e-50 && l <= 1e50) {
-    const l2 = l * l;
-    y = C1L / (l2 * l2 * l) / radiance;
-    num = C2_HI / l;
-  }
-  return invert(num, LN_C2 - lnL, y, lnY);
+  // y = 2hc²/(λ⁵B) without spurious under/overflow of λ⁵ (a subnormal y would
+  // carry few bits; ln(1+y) ≠ y for y ≳ 1e-17, so y must be exact whenever normal)
+  const y = scaledPower(C1L, l, -5, radiance);
+  return invert(C2_HI / l, LN_C2 - lnL, y, lnY);
 }
 
 /** T_b from (ν, B_ν) without input checks; +Infinity signals overflow. @internal */
@@ -72,31 +69,20 @@ export function brightnessTemperatureFrequencyUnchecked(frequencyHz: number, rad
   const nu = frequencyHz;
   const lnNu = Math.log(nu);
   const lnY = LN_TWO_H_OVER_C2 + 3 * lnNu - Math.log(radiance);
-  let y = NaN;
-  let num = NaN;
-  if (nu >= 1e-80 && nu <= 1e80) {
-    y = (TWO_H_OVER_C2 * (nu * nu * nu)) / radiance;
-    num = H_OVER_K_HI * nu;
-  }
-  return invert(num, LN_H_OVER_K + lnNu, y, lnY);
+  const y = scaledPower(TWO_H_OVER_C2, nu, 3, radiance);
+  return invert(H_OVER_K_HI * nu, LN_H_OVER_K + lnNu, y, lnY);
 }
 
 /** T_RJ from (λ, B_λ) without input checks; +Infinity signals overflow. @internal */
 export function rayleighJeansBrightnessTemperatureWavelengthUnchecked(wavelengthM: number, radiance: number): number {
-  const l2 = wavelengthM * wavelengthM;
-  const v = (l2 * l2 * radiance) / (2 * C * K_B);
-  if (isNormal(v) && isNormal(l2) && l2 * l2 !== Infinity) return v;
-  const lnT = 4 * Math.log(wavelengthM) + Math.log(radiance) - Math.log(2 * C * K_B);
-  return lnT > LN_MAX ? Infinity : Math.exp(lnT);
+  // λ⁴B/(2ck) with no spurious under/overflow of λ⁴ or λ⁴B; +Infinity only on true overflow
+  return scaledPower(radiance, wavelengthM, 4, 2 * C * K_B);
 }
 
 /** T_RJ from (ν, B_ν) without input checks; +Infinity signals overflow. @internal */
 export function rayleighJeansBrightnessTemperatureFrequencyUnchecked(frequencyHz: number, radiance: number): number {
-  const n2 = frequencyHz * frequencyHz;
-  const v = (C * C * radiance) / (2 * K_B) / n2;
-  if (isNormal(v) && isNormal(n2)) return v;
-  const lnT = 2 * Math.log(C) + Math.log(radiance) - Math.log(2 * K_B) - 2 * Math.log(frequencyHz);
-  return lnT > LN_MAX ? Infinity : Math.exp(lnT);
+  // c²B/(2kν²), no spurious under/overflow of ν² or c²B
+  return scaledPower(radiance, frequencyHz, -2, (2 * K_B) / (C * C));
 }
 
 /**

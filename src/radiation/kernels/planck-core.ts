@@ -349,11 +349,37 @@ export function lnSpectralCore(shape: number, form: number, u: number, T: number
   return lnP + lnShape(shape, lnX, xOf(form, u, T));
 }
 
-/** Plain-double x = hc/(λkT) (for factors whose sensitivity to x is ≤ 1). */
+/** True when v is a normal double (no precision lost to underflow, not Infinity). */
+function isNormal(v: number): boolean {
+  return v >= 2.2250738585072014e-308 && v !== Infinity;
+}
+
+/**
+ * Plain-double x = hc/(λkT), hν/(kT) or hcσ̃/(kT) (for factors whose
+ * sensitivity to x is ≤ 1). The two operations are ordered so that no
+ * intermediate leaves the normal range when another order keeps it inside
+ * (a subnormal intermediate would carry only a few bits into a normal x);
+ * when none does, x itself is beyond the normal range and comes from its
+ * logarithm (0, a subnormal or Infinity, as the true value rounds).
+ */
 export function xOf(form: number, u: number, T: number): number {
-  if (form <= FORM_LAMBDA_PHOTON) return C2_HI / u / T;
-  if (form <= FORM_NU_PHOTON) return (H_OVER_K_HI * u) / T;
-  return (C2_HI * u) / T;
+  const k = form <= FORM_NU_PHOTON && form >= FORM_NU_ENERGY ? H_OVER_K_HI : C2_HI;
+  if (form <= FORM_LAMBDA_PHOTON) {
+    // k / (u·T)
+    const a = k / u;
+    if (isNormal(a)) return a / T;
+    const b = k / T;
+    if (isNormal(b)) return b / u;
+    return Math.exp(Math.log(k) - Math.log(u) - Math.log(T));
+  }
+  // k·u / T
+  const a = k * u;
+  if (isNormal(a)) return a / T;
+  const b = u / T;
+  if (isNormal(b)) return k * b;
+  const c = k / T;
+  if (isNormal(c)) return c * u;
+  return Math.exp(Math.log(k) + Math.log(u) - Math.log(T));
 }
 
 /**

@@ -22,7 +22,10 @@
 import { C1L } from "../../values/constants";
 import { requirePositive } from "../../internal/checks";
 import { batchOut, type RadiationBatchResult } from "./batch";
-import { C2_HI } from "./exact";
+import { C2_HI, H_OVER_K_HI } from "./exact";
+
+const LN_C2 = Math.log(C2_HI);
+const LN_H_OVER_K = Math.log(H_OVER_K_HI);
 import {
   FORM_LAMBDA_ENERGY,
   FORM_LAMBDA_PHOTON,
@@ -194,21 +197,41 @@ export function planckLambdaUnchecked(lambda: number, T: number): number {
 
 /** ∂B_λ/∂T without input checks (see {@link planckRadianceWavelengthDerivativeTSI}). @internal */
 export function planckLambdaDerivativeTUnchecked(lambda: number, T: number): number {
-  const b = planckLambdaEnergyCore(lambda, T);
-  if (b === 0 || b === Infinity) return b;
-  const x = xOf(FORM_LAMBDA_ENERGY, lambda, T);
-  // x/(1 − e^−x): → 1 (RJ) for x → 0, → x (Wien) for large x.
-  const f = x === 0 ? 1 : x / -Math.expm1(-x);
-  return (b / T) * f;
+  return derivativeT(FORM_LAMBDA_ENERGY, lambda, T, planckLambdaEnergyCore(lambda, T));
 }
 
 /** ∂B_ν/∂T without input checks (see {@link planckRadianceFrequencyDerivativeTSI}); +Infinity signals overflow. @internal */
 export function planckNuDerivativeTUnchecked(nu: number, T: number): number {
-  const b = planckNuEnergyCore(nu, T);
-  if (b === 0 || b === Infinity) return b;
-  const x = xOf(FORM_NU_ENERGY, nu, T);
-  const f = x === 0 ? 1 : x / -Math.expm1(-x);
-  return (b / T) * f;
+  return derivativeT(FORM_NU_ENERGY, nu, T, planckNuEnergyCore(nu, T));
+}
+
+/**
+ * ∂B/∂T = (B/T)·x/(1 − e^−x) from B = b. Plain when B, B/T and the result are
+ * normal doubles; otherwise in logarithms, ln B − ln T + ln(x/(1 − e^−x)),
+ * so the derivative stays finite and accurate where B itself overflows or
+ * underflows (x/T can be huge at very low T, tiny at very high T), with
+ * ln(x/(1 − e^−x)) → ln x (x > 700) and → x/2 (x < 1e-8) at the two ends.
+ */
+function derivativeT(form: number, u: number, T: number, b: number): number {
+  if (b >= 1e-290 && b !== Infinity) {
+    const bt = b / T;
+    if (bt >= 1e-290 && bt !== Infinity) {
+      const x = xOf(form, u, T);
+      // x/(1 − e^−x): → 1 (RJ) for x → 0, → x (Wien) for large x.
+      const f = x === 0 ? 1 : x / -Math.expm1(-x);
+      const d = bt * f;
+      if (d !== Infinity) return d;
+    }
+  }
+  const lnX = form === FORM_NU_ENERGY ? LN_H_OVER_K + Math.log(u) - Math.log(T) : LN_C2 - Math.log(u) - Math.log(T);
+  let lnF: number;
+  if (lnX > 6.6) lnF = lnX; // x > 735: 1 − e^−x = 1
+  else if (lnX < -18.4) lnF = 0.5 * Math.exp(lnX); // x < 1e-8: ln(x/(1 − e^−x)) = x/2 + O(x²)
+  else {
+    const x = Math.exp(lnX);
+    lnF = Math.log(x / -Math.expm1(-x));
+  }
+  return Math.exp(lnSpectralCore(SHAPE_PLANCK, form, u, T) - Math.log(T) + lnF);
 }
 
 /**
@@ -252,7 +275,8 @@ export function planckRadianceWavelengthDerivativeTSI(wavelengthM: number, tempe
  * ```
  */
 export function planckRadianceFrequencyDerivativeTSI(frequencyHz: number, temperatureK: number): number {
-  checked(FORM_NU_ENERGY, "frequency", "Hz", frequencyHz, temperatureK, "spectral radiance B_ν");
+  requirePositive("frequency", frequencyHz, "Hz");
+  requirePositive("temperature", temperatureK, "K");
   const d = planckNuDerivativeTUnchecked(frequencyHz, temperatureK);
   if (d === Infinity) {
     throw overflowError("∂B_ν/∂T", `frequency=${frequencyHz} Hz, temperature=${temperatureK} K`);

@@ -17,6 +17,7 @@
  */
 import { C, H, K_B, SIGMA } from "../../values/constants";
 import { requirePositive } from "../../internal/checks";
+import { scaledPower2 } from "./scaled";
 
 /** ζ(3) by Apéry's alternating series, summed smallest term first. */
 function apery(): number {
@@ -97,10 +98,8 @@ export function photonExitanceUnchecked(temperatureK: number): number {
 
 /** 4πR²σ_γT³ without input checks; +Infinity signals overflow. @internal */
 export function photonEmissionRateUnchecked(radiusM: number, temperatureK: number): number {
-  const r2 = radiusM * radiusM;
-  const v = FOUR_PI * SIGMA_PHOTON * r2 * (temperatureK * temperatureK * temperatureK);
-  if (normal(r2) && normal(v)) return v;
-  return Math.exp(Math.log(FOUR_PI * SIGMA_PHOTON) + 2 * Math.log(radiusM) + 3 * Math.log(temperatureK));
+  // 4πσ_γ·R²·T³ with no spurious under/overflow of R², T³ or their product
+  return scaledPower2(FOUR_PI * SIGMA_PHOTON, radiusM, 2, temperatureK, 3);
 }
 
 /**
