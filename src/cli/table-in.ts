@@ -1,6 +1,7 @@
 /**
  * Reading a table for a command: open the file (or stdin), pick CSV or JSON
- * Lines (by `--input-format` or the file extension), parse the header with
+ * Lines (by `--input-format`, the file extension, or for stdin the content:
+ * a first `{` means JSON Lines), parse the header with
  * the `name [unit]` convention, and yield the data rows one at a time with
  * their line numbers. Malformed rows are yielded too (as `bad` items with
  * the reason), so that a command can keep every input row in its output.
@@ -15,8 +16,8 @@ import { readCsv } from "./io/csv-read";
 import { parseColumnHeader, parseHeader, type ColumnSpec } from "./io/header";
 import { readJsonl } from "./io/jsonl-read";
 
-/** Input table formats. */
-export type InputFormat = "csv" | "jsonl";
+/** Input table formats; `"auto"` decides from the content (stdin without `--input-format`). */
+export type InputFormat = "csv" | "jsonl" | "auto";
 
 /** A table cell as read: CSV gives text, JSON Lines numbers, text or null. */
 export type InCell = string | number | null;
@@ -42,7 +43,8 @@ export function inputFormatFor(path: string, explicit: string | undefined): Inpu
   }
   const ext = extname(path).toLowerCase();
   if (ext === ".jsonl" || ext === ".ndjson") return "jsonl";
-  if (ext === ".csv" || ext === ".txt" || path === "-") return "csv";
+  if (ext === ".csv" || ext === ".txt") return "csv";
+  if (path === "-") return "auto";
   throw new UsageError(`cannot tell the format of '${path}' from its extension; use --input-format csv or --input-format jsonl`);
 }
 
@@ -71,9 +73,58 @@ export async function openSource(path: string, io: CliIO): Promise<AsyncIterable
  *   breaks the `name [unit]` rules (the message names the column)
  */
 export async function openTable(path: string, format: InputFormat, io: CliIO): Promise<OpenTable> {
-  const source = await openSource(path, io);
+  let source = await openSource(path, io);
   const label = path === "-" ? "stdin" : path;
-  return format === "csv" ? openCsv(source, label) : openJsonl(source, label);
+  let chosen = format;
+  if (chosen === "auto") {
+    const peeked = await peekSource(source);
+    source = peeked.source;
+    chosen = detectFormat(peeked.head, label);
+  }
+  const warn = (message: string): void => {
+    io.stderr.write(`${message}\n`);
+  };
+  return chosen === "csv" ? openCsv(source, label) : openJsonl(source, label, warn);
+}
+
+/**
+ * The format of a table from its first characters: `{` starts JSON Lines;
+ * XML, FITS and a JSON array are named in a UsageError (not read here);
+ * anything else is read as CSV.
+ */
+export function detectFormat(head: string, label: string): "csv" | "jsonl" {
+  const t = head.replace(/^\ufeff/, "").trimStart();
+  if (t.startsWith("{")) return "jsonl";
+  if (t.startsWith("<")) throw new UsageError(`${label}: looks like XML (a VOTable?); starlume reads CSV and JSON Lines tables`);
+  if (t.startsWith("SIMPLE  =")) throw new UsageError(`${label}: looks like a FITS file; starlume reads CSV and JSON Lines tables`);
+  if (t.startsWith("[")) throw new UsageError(`${label}: looks like a JSON array; JSON Lines needs one object per line`);
+  return "csv";
+}
+
+/** Read chunks until some non-blank text is seen (at most 64 KiB), and give them back in front of the rest. */
+async function peekSource(src: AsyncIterable<string | Uint8Array>): Promise<{ head: string; source: AsyncIterable<string | Uint8Array> }> {
+  const it = src[Symbol.asyncIterator]();
+  const held: (string | Uint8Array)[] = [];
+  const decoder = new TextDecoder();
+  let head = "";
+  for (;;) {
+    if (head.trim().replace(/^\ufeff/, "") !== "" || head.length > 1 << 16) break;
+    const r = await it.next();
+    if (r.done === true) break;
+    held.push(r.value);
+    head += typeof r.value === "string" ? r.value : decoder.decode(r.value, { stream: true });
+  }
+  const source = {
+    async *[Symbol.asyncIterator](): AsyncGenerator<string | Uint8Array> {
+      yield* held;
+      for (;;) {
+        const r = await it.next();
+        if (r.done === true) return;
+        yield r.value;
+      }
+    },
+  };
+  return { head: head.slice(0, 256), source };
 }
 
 async function openCsv(source: AsyncIterable<string | Uint8Array>, label: string): Promise<OpenTable> {
@@ -105,7 +156,7 @@ async function openCsv(source: AsyncIterable<string | Uint8Array>, label: string
   return { columns, items: rows(), source: label };
 }
 
-async function openJsonl(source: AsyncIterable<string | Uint8Array>, label: string): Promise<OpenTable> {
+async function openJsonl(source: AsyncIterable<string | Uint8Array>, label: string, warn: (message: string) => void = () => {}): Promise<OpenTable> {
   const it = readJsonl(source);
   // The first readable object fixes the columns (its keys, in order); bad lines before it are kept.
   const early: TableItem[] = [];
@@ -130,18 +181,19 @@ async function openJsonl(source: AsyncIterable<string | Uint8Array>, label: stri
   }
   const index = new Map<string, number>();
   keys.forEach((k, i) => index.set(k, i));
+  // Keys absent from the first object: the row is kept, the key's values
+  // are not read, and a summary goes to stderr at the end (never silently).
+  const extra = new Map<string, { firstLine: number; rows: number }>();
+  const firstLine = first.line;
   const toRow = (line: number, value: Record<string, unknown>): TableItem => {
     const cells: InCell[] = new Array<InCell>(keys.length).fill(null);
     for (const [k, v] of Object.entries(value)) {
       const i = index.get(k);
       if (i === undefined) {
-        let name = k;
-        try {
-          name = parseColumnHeader(k).name;
-        } catch {
-          /* keep the raw key */
-        }
-        return { kind: "bad", line, message: `line ${line}: key '${name}' is not a column (the columns are the keys of the first object, line ${first.line})` };
+        const seen = extra.get(k);
+        if (seen === undefined) extra.set(k, { firstLine: line, rows: 1 });
+        else seen.rows++;
+        continue;
       }
       if (v === null || typeof v === "number" || typeof v === "string") cells[i] = v;
       else return { kind: "bad", line, message: `line ${line}: value of '${k}' must be a number, a string or null; got ${Array.isArray(v) ? "an array" : typeof v}` };
@@ -154,12 +206,25 @@ async function openJsonl(source: AsyncIterable<string | Uint8Array>, label: stri
     yield firstRow;
     for (;;) {
       const r = await it.next();
-      if (r.done === true) return;
+      if (r.done === true) break;
       if (r.value.kind === "error") yield { kind: "bad", line: r.value.line, message: r.value.message };
       else yield toRow(r.value.line, r.value.value);
     }
+    if (extra.size > 0) {
+      const listed = [...extra].slice(0, 10).map(([k, e]) => `'${columnName(k)}' (${e.rows} row${e.rows === 1 ? "" : "s"}, first on line ${e.firstLine})`);
+      const more = extra.size > 10 ? ` and ${extra.size - 10} more` : "";
+      warn(`${label}: keys not in the first object (line ${firstLine}) were not read: ${listed.join(", ")}${more}; put every key in the first object to read it`);
+    }
   }
   return { columns, items: rows(), source: label };
+}
+
+function columnName(key: string): string {
+  try {
+    return parseColumnHeader(key).name;
+  } catch {
+    return key;
+  }
 }
 
 const DECIMAL = /^\s*[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+-]?[0-9]+)?\s*$/;
