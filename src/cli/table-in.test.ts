@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { CliIO } from "./context";
-import { detectFormat, inputFormatFor, openTable, type TableItem } from "./table-in";
+import { parseHeader } from "./io/header";
+import { detectFormat, headerNotes, inputFormatFor, openTable, type TableItem } from "./table-in";
 
 function fakeIO(stdin: string, chunk = 5): { io: CliIO; err: string[] } {
   const err: string[] = [];
@@ -57,5 +58,22 @@ describe("JSON Lines keys absent from the first object", () => {
     expect(rows.map((r) => r.kind)).toEqual(["row", "row", "row"]);
     expect(rows[1]?.kind === "row" ? rows[1].cells : []).toEqual(["b", 5000]);
     expect(err.join("")).toMatch(/keys not in the first object \(line 1\) were not read: 'colour' \(2 rows, first on line 2\), 'e_x' \(1 row, first on line 3\)/);
+  });
+});
+
+describe("notes on uncertainty columns", () => {
+  it("a conventional spelling read as an uncertainty is said so; a look-alike that is not read names why and the fix", () => {
+    const notes = headerNotes(parseHeader(["teff [K]", "e_teff [K]", "logg", "logg_err [dex]", "feh", "sigma_feh", "mass", "mass_err", "sigma(mass)", "e_radius"]));
+    expect(notes).toEqual([
+      "column 'e_teff' is read as the standard uncertainty of 'teff'",
+      "column 'logg_err' looks like the uncertainty of 'logg' but is not read as one: 'logg' has no unit and 'logg_err' has one; write 'sigma(logg)'",
+      "column 'sigma_feh' looks like the uncertainty of 'feh' but is not read as one: 'sigma_x' is not an uncertainty spelling; write 'sigma(feh)'",
+      "column 'mass_err' looks like the uncertainty of 'mass' but is not read as one: 'sigma(mass)' already is; remove one of them",
+    ]);
+  });
+  it("the notes reach stderr when a table is opened", async () => {
+    const { io, err } = fakeIO("star,teff [K],teff_err\na,5772,10\n");
+    await openTable("-", "auto", io);
+    expect(err.join("")).toContain("stdin: column 'teff_err' looks like the uncertainty of 'teff' but is not read as one: 'teff' is in [K] and 'teff_err' has no unit; write 'sigma(teff) [K]'");
   });
 });

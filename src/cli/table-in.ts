@@ -13,7 +13,7 @@ import { stat } from "node:fs/promises";
 import { extname, resolve } from "node:path";
 import { UsageError, type CliIO } from "./context";
 import { readCsv } from "./io/csv-read";
-import { parseColumnHeader, parseHeader, type ColumnSpec } from "./io/header";
+import { defaultUncertaintyPatterns, parseColumnHeader, parseHeader, type ColumnSpec } from "./io/header";
 import { readJsonl } from "./io/jsonl-read";
 
 /** Input table formats; `"auto"` decides from the content (stdin without `--input-format`). */
@@ -84,7 +84,57 @@ export async function openTable(path: string, format: InputFormat, io: CliIO): P
   const warn = (message: string): void => {
     io.stderr.write(`${message}\n`);
   };
-  return chosen === "csv" ? openCsv(source, label) : openJsonl(source, label, warn);
+  const table = await (chosen === "csv" ? openCsv(source, label) : openJsonl(source, label, warn));
+  for (const note of headerNotes(table.columns)) warn(`${label}: ${note}`);
+  return table;
+}
+
+/** Spellings that look like an uncertainty column but are never read as one (`{x}` is the value column). */
+const LOOKALIKE_PATTERNS = ["sigma_{x}", "{x}_sigma", "{x}_unc", "unc_{x}", "{x}_uncertainty", "{x}_e"];
+
+/**
+ * Notes on columns that are, or look like, uncertainty columns, so that
+ * nothing about them is silent: a column read as an uncertainty through a
+ * conventional spelling (`e_teff`), and a column that looks like an
+ * uncertainty but is not read as one, with the reason and the fix.
+ *
+ * @example
+ * ```ts
+ * headerNotes(parseHeader(["teff [K]", "teff_err"]));
+ * // ["column 'teff_err' looks like the uncertainty of 'teff' but is not read as one: 'teff' is in [K] and 'teff_err' has no unit; write 'sigma(teff) [K]'"]
+ * ```
+ */
+export function headerNotes(columns: readonly ColumnSpec[]): string[] {
+  const notes: string[] = [];
+  const byName = new Map(columns.map((c) => [c.name, c]));
+  for (const c of columns) {
+    if (c.uncertaintyOf !== null) {
+      if (c.uncertaintyPattern !== undefined) notes.push(`column '${c.name}' is read as the standard uncertainty of '${c.uncertaintyOf}'`);
+      continue;
+    }
+    for (const p of [...defaultUncertaintyPatterns, ...LOOKALIKE_PATTERNS]) {
+      const at = p.indexOf("{x}");
+      const before = p.slice(0, at);
+      const after = p.slice(at + 3);
+      if (c.name.length <= before.length + after.length || !c.name.startsWith(before) || !c.name.endsWith(after)) continue;
+      const x = c.name.slice(before.length, c.name.length - after.length);
+      const target = byName.get(x);
+      if (target === undefined || target.uncertaintyOf !== null) continue;
+      const fix = `write '${target.unit === null ? `sigma(${x})` : `sigma(${x}) [${target.unit}]`}'`;
+      const taken = columns.find((d) => d.uncertaintyOf === x);
+      const why =
+        taken !== undefined
+          ? `'${taken.name}' already is`
+          : (target.unit === null) !== (c.unit === null)
+            ? target.unit === null
+              ? `'${x}' has no unit and '${c.name}' has one`
+              : `'${x}' is in [${target.unit}] and '${c.name}' has no unit`
+            : `'${p.replace("{x}", "x")}' is not an uncertainty spelling`;
+      notes.push(`column '${c.name}' looks like the uncertainty of '${x}' but is not read as one: ${why}; ${taken !== undefined ? "remove one of them" : fix}`);
+      break;
+    }
+  }
+  return notes;
 }
 
 /**
