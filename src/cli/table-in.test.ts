@@ -77,3 +77,51 @@ describe("notes on uncertainty columns", () => {
     expect(err.join("")).toContain("stdin: column 'teff_err' looks like the uncertainty of 'teff' but is not read as one: 'teff' is in [K] and 'teff_err' has no unit; write 'sigma(teff) [K]'");
   });
 });
+
+describe("FITS input", () => {
+  it("solve gives the same table from a FITS file as from the same rows in CSV; FITS units go through the unit parser", { timeout: 60_000 }, async () => {
+    const { writeFitsTable } = await import("./io/fits");
+    const { runCli } = await import("./test-util");
+    const { mkdtempSync, writeFileSync } = await import("node:fs");
+    const { tmpdir } = await import("node:os");
+    const { join } = await import("node:path");
+    const dir = mkdtempSync(join(tmpdir(), "starlume-fits-in-"));
+    const rows = [
+      ["Sun", 5772, 1, 1, 0.01, 10, 0.1],
+      ["b", 4800, 50, 0.8, 0.05, 25, 1],
+    ] as const;
+    writeFileSync(
+      join(dir, "t.fits"),
+      writeFitsTable({
+        columns: [
+          { name: "name", type: "A", width: 8, unit: null },
+          { name: "teff", type: "D", width: 1, unit: "K" },
+          { name: "teff_err", type: "D", width: 1, unit: "K" },
+          { name: "radius", type: "D", width: 1, unit: "solRad" },
+          { name: "e_radius", type: "D", width: 1, unit: "solRad" },
+          { name: "distance", type: "D", width: 1, unit: "pc" },
+          { name: "distance_error", type: "D", width: 1, unit: "pc" },
+        ],
+        rows: rows.map((r) => [...r]),
+      }),
+    );
+    const csv = ["name,teff [K],sigma(teff) [K],radius [Rsol],sigma(radius) [Rsol],distance [pc],sigma(distance) [pc]", ...rows.map((r) => r.join(","))].join("\n");
+    writeFileSync(join(dir, "t.csv"), csv);
+    const a = await runCli(["solve", "t.csv", "--format", "json"], { cwd: dir });
+    const b = await runCli(["solve", "t.fits", "--format", "json"], { cwd: dir });
+    expect(b.code).toBe(a.code);
+    const strip = (text: string): unknown[] =>
+      // input columns echo their own header texts, and "line" is the CSV line (header = line 1) or the FITS row
+      (JSON.parse(text) as Record<string, unknown>[]).map((o) => Object.fromEntries(Object.entries(o).filter(([k]) => k !== "line" && (!/teff|radius|distance/.test(k) || !/\[/.test(k)))));
+    expect(strip(b.stdout)).toEqual(strip(a.stdout));
+    expect((JSON.parse(b.stdout) as { line: number }[]).map((o) => o.line)).toEqual([1, 2]);
+    expect(Object.keys((JSON.parse(b.stdout) as object[])[0] as object).length).toBeGreaterThan(5);
+    expect(b.stderr).toContain("column 'teff_err' is read as the standard uncertainty of 'teff'");
+    const bad = await runCli(["solve", "t.fits", "--input-format", "fits"], { cwd: dir, stdin: "" });
+    expect(bad.code).toBe(b.code);
+    writeFileSync(join(dir, "cut.fits"), new Uint8Array(100));
+    const cut = await runCli(["solve", "cut.fits"], { cwd: dir });
+    expect(cut.code).toBe(2);
+    expect(cut.stderr).toMatch(/cut\.fits: FITS byte 100/);
+  });
+});

@@ -9,15 +9,16 @@
  * @module
  */
 import { createReadStream } from "node:fs";
-import { stat } from "node:fs/promises";
+import { readFile, stat } from "node:fs/promises";
 import { extname, resolve } from "node:path";
 import { UsageError, type CliIO } from "./context";
 import { readCsv } from "./io/csv-read";
 import { defaultUncertaintyPatterns, parseColumnHeader, parseHeader, type ColumnSpec } from "./io/header";
 import { readJsonl } from "./io/jsonl-read";
+import { FitsError, readFitsTable } from "./io/fits";
 
 /** Input table formats; `"auto"` decides from the content (stdin without `--input-format`). */
-export type InputFormat = "csv" | "jsonl" | "auto";
+export type InputFormat = "csv" | "jsonl" | "fits" | "auto";
 
 /** A table cell as read: CSV gives text, JSON Lines numbers, text or null. */
 export type InCell = string | number | null;
@@ -38,12 +39,13 @@ export interface OpenTable {
 /** Choose the format from an explicit option or the file name. */
 export function inputFormatFor(path: string, explicit: string | undefined): InputFormat {
   if (explicit !== undefined) {
-    if (explicit !== "csv" && explicit !== "jsonl") throw new UsageError(`--input-format must be csv or jsonl; got '${explicit}'`);
+    if (explicit !== "csv" && explicit !== "jsonl" && explicit !== "fits") throw new UsageError(`--input-format must be csv, jsonl or fits; got '${explicit}'`);
     return explicit;
   }
   const ext = extname(path).toLowerCase();
   if (ext === ".jsonl" || ext === ".ndjson") return "jsonl";
   if (ext === ".csv" || ext === ".txt") return "csv";
+  if (ext === ".fits" || ext === ".fit" || ext === ".fts") return "fits";
   if (path === "-") return "auto";
   throw new UsageError(`cannot tell the format of '${path}' from its extension; use --input-format csv or --input-format jsonl`);
 }
@@ -73,8 +75,9 @@ export async function openSource(path: string, io: CliIO): Promise<AsyncIterable
  *   breaks the `name [unit]` rules (the message names the column)
  */
 export async function openTable(path: string, format: InputFormat, io: CliIO): Promise<OpenTable> {
-  let source = await openSource(path, io);
   const label = path === "-" ? "stdin" : path;
+  if (format === "fits") return openFits(path, label, io);
+  let source = await openSource(path, io);
   let chosen = format;
   if (chosen === "auto") {
     const peeked = await peekSource(source);
@@ -87,6 +90,43 @@ export async function openTable(path: string, format: InputFormat, io: CliIO): P
   const table = await (chosen === "csv" ? openCsv(source, label) : openJsonl(source, label, warn));
   for (const note of headerNotes(table.columns)) warn(`${label}: ${note}`);
   return table;
+}
+
+/**
+ * A FITS binary table (the first BINTABLE extension) as a table: columns
+ * `TTYPEn [TUNITn]`, rows numbered from 1. The file is read whole (not
+ * streamed); FITS on stdin is not read.
+ */
+async function openFits(path: string, label: string, io: CliIO): Promise<OpenTable> {
+  if (path === "-") throw new UsageError("stdin: FITS is read from a file, not from standard input");
+  let bytes: Uint8Array;
+  try {
+    bytes = await readFile(resolve(io.cwd ?? process.cwd(), path));
+  } catch (e) {
+    throw new UsageError(`cannot read input file '${path}' (${(e as NodeJS.ErrnoException).code ?? "error"})`);
+  }
+  let table;
+  try {
+    table = readFitsTable(bytes);
+  } catch (e) {
+    if (e instanceof FitsError) throw new UsageError(`${label}: ${e.message}`);
+    throw e;
+  }
+  let columns: ColumnSpec[];
+  try {
+    columns = parseHeader(table.columns.map((c) => (c.unit === null || c.unit.trim() === "" ? c.name : `${c.name} [${c.unit}]`)));
+  } catch (e) {
+    throw new UsageError(`${label}: ${(e as Error).message}`);
+  }
+  const rows = table.rows;
+  async function* items(): AsyncGenerator<TableItem> {
+    for (let r = 0; r < rows.length; r++) {
+      const cells = (rows[r] as readonly (number | string | boolean | null)[]).map((x): InCell => (typeof x === "boolean" ? (x ? "T" : "F") : x));
+      yield { kind: "row", line: r + 1, cells };
+    }
+  }
+  for (const note of headerNotes(columns)) io.stderr.write(`${label}: ${note}\n`);
+  return { columns, items: items(), source: label };
 }
 
 /** Spellings that look like an uncertainty column but are never read as one (`{x}` is the value column). */
