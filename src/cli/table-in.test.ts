@@ -105,7 +105,7 @@ describe("FITS input", () => {
         rows: rows.map((r) => [...r]),
       }),
     );
-    const csv = ["name,teff [K],sigma(teff) [K],radius [Rsol],sigma(radius) [Rsol],distance [pc],sigma(distance) [pc]", ...rows.map((r) => r.join(","))].join("\n");
+    const csv = ["name,teff [K],sigma(teff) [K],radius [Rsun],sigma(radius) [Rsun],distance [pc],sigma(distance) [pc]", ...rows.map((r) => r.join(","))].join("\n");
     writeFileSync(join(dir, "t.csv"), csv);
     const a = await runCli(["solve", "t.csv", "--format", "json"], { cwd: dir });
     const b = await runCli(["solve", "t.fits", "--format", "json"], { cwd: dir });

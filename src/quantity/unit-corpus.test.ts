@@ -108,7 +108,7 @@ c("M T-3", 1e-15 * erg / cm ** 2, ["daily", "1e-15 erg/s/cm2"], ["fits", "10-15 
 c("L2 M T-3", 1, ["sl", "W"], ["fits", "J/s"], ["vou", "J.s**-1"]);
 c("L2 M T-3", erg, ["sl", "erg s^-1"], ["fits", "erg/s"], ["fits", "erg s-1"], ["cds", "erg.s-1"], ["vou", "erg.s**-1"], ["ogip", "erg s**-1"], ["daily", "ergs/s"], ["daily", "erg/sec"]);
 c("L2 M T-3", 1e33 * erg, ["fits", "10+33 erg s-1"], ["cds", "10+33erg.s-1"], ["daily", "1e33 erg/s"]);
-c("L2 M T-3", Lsun, ["fits", "solLum"], ["vou", "solLum"], ["daily", "Lsun"], ["daily", "L_sun"], ["sl", "L☉"], ["sl", "Lsol"], ["cds", "Lsun"]);
+c("L2 M T-3", Lsun, ["fits", "solLum"], ["vou", "solLum"], ["daily", "Lsun"], ["daily", "L_sun"], ["sl", "L☉"], ["sl", "Lsun"], ["cds", "Lsun"]);
 // energy
 c("L2 M T-2", 1, ["sl", "J"], ["fits", "J"]);
 c("L2 M T-2", erg, ["sl", "erg"], ["daily", "ergs"], ["fits", "10-7 J"], ["fits", "10**-7 J"], ["fits", "10^-7 J"], ["cds", "10-7J"], ["vou", "1e-7J"], ["vou", "1e-7.J"]);
@@ -129,11 +129,11 @@ c("L", pc * 1e3, ["sl", "kpc"]);
 c("L", pc * 1e6, ["sl", "Mpc"]);
 c("L", pc * 1e9, ["sl", "Gpc"]);
 c("L", 9460730472580800, ["sl", "ly"], ["fits", "lyr"]);
-c("L", Rsun, ["sl", "R☉"], ["sl", "Rsol"], ["fits", "solRad"], ["vou", "solRad"], ["daily", "Rsun"], ["daily", "R_sun"]);
+c("L", Rsun, ["sl", "R☉"], ["sl", "Rsun"], ["fits", "solRad"], ["vou", "solRad"], ["daily", "Rsun"], ["daily", "R_sun"]);
 // mass
 c("M", 1, ["sl", "kg"]);
 c("M", 1e-3, ["sl", "g"]);
-c("M", Msun, ["sl", "M☉"], ["sl", "Msol"], ["fits", "solMass"], ["daily", "Msun"], ["daily", "M_sun"]);
+c("M", Msun, ["sl", "M☉"], ["sl", "Msun"], ["fits", "solMass"], ["daily", "Msun"], ["daily", "M_sun"]);
 c("M T-1", Msun / yr, ["fits", "solMass/yr"], ["daily", "Msun/yr"], ["fits", "solMass yr-1"], ["cds", "solMass.yr-1"], ["vou", "solMass.yr**-1"], ["ogip", "solMass yr**-1"], ["sl", "M☉ yr^-1"], ["fits", "solMass/a"]);
 // time
 c("T", 1, ["sl", "s"], ["daily", "sec"]);

@@ -44,12 +44,12 @@ export const standardSymbols: ReadonlyMap<string, Unit> = new Map<string, Unit>(
   // FITS 4.0 Table 5 writes AU, VOUnits 1.0 writes au (IAU 2012): both read
   ["AU", u.au], ["au", u.au],
   ["Angstrom", u.angstrom], ["angstrom", u.angstrom],
-  ["solMass", u.Msol], ["solRad", u.Rsol], ["solLum", u.Lsol],
+  ["solMass", u.Msun], ["solRad", u.Rsun], ["solLum", u.Lsun],
   // light year: FITS writes lyr (from memory)
   ["lyr", u.ly],
   ["mag", magnitude],
   // CDS writes the Sun's units Msun, Rsun, Lsun (from memory of the CDS list)
-  ["Msun", u.Msol], ["Rsun", u.Rsol], ["Lsun", u.Lsol],
+  ["Msun", u.Msun], ["Rsun", u.Rsun], ["Lsun", u.Lsun],
 ]);
 
 /**
@@ -57,10 +57,10 @@ export const standardSymbols: ReadonlyMap<string, Unit> = new Map<string, Unit>(
  * papers), read in the default (`"any"`) syntax only.
  */
 export const dailySpellings: ReadonlyMap<string, Unit> = new Map<string, Unit>([
-  ["Lsun", u.Lsol], ["Rsun", u.Rsol], ["Msun", u.Msol],
-  ["L_sun", u.Lsol], ["R_sun", u.Rsol], ["M_sun", u.Msol],
-  ["Lsolar", u.Lsol], ["Rsolar", u.Rsol], ["Msolar", u.Msol],
-  ["L_☉", u.Lsol], ["R_☉", u.Rsol], ["M_☉", u.Msol],
+  ["Lsun", u.Lsun], ["Rsun", u.Rsun], ["Msun", u.Msun],
+  ["L_sun", u.Lsun], ["R_sun", u.Rsun], ["M_sun", u.Msun],
+  ["Lsolar", u.Lsun], ["Rsolar", u.Rsun], ["Msolar", u.Msun],
+  ["L_☉", u.Lsun], ["R_☉", u.Rsun], ["M_☉", u.Msun],
   ["Angstroms", u.angstrom], ["angstroms", u.angstrom], ["AA", u.angstrom], ["Ang", u.angstrom],
   ["micron", u.um], ["microns", u.um],
   ["ergs", u.erg], ["kelvin", u.K], ["Kelvin", u.K],
