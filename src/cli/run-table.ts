@@ -18,7 +18,7 @@ import { inputFormatFor, openTable, type InCell, type TableItem } from "./table-
 
 /** Options shared by the table commands. */
 export const TABLE_OPTIONS: readonly OptionSpec[] = [
-  { name: "input-format", kind: "value", valueName: "FMT", choices: ["csv", "jsonl"], help: "input format", defaultText: "from the file extension" },
+  { name: "input-format", kind: "value", valueName: "FMT", choices: ["csv", "jsonl", "fits"], help: "input format", defaultText: "from the file extension (stdin: from the content)" },
   { name: "format", short: "f", kind: "value", valueName: "FMT", choices: OUTPUT_FORMATS, help: "output format", defaultText: "table on a terminal, else csv" },
   { name: "output", short: "o", kind: "value", valueName: "FILE", help: "write the table to FILE instead of stdout" },
   { name: "id", kind: "value", valueName: "COLUMN", help: "column naming each star", defaultText: "name, star, id, designation or object" },

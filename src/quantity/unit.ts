@@ -210,7 +210,17 @@ export function prefixed<D extends Dimension>(prefix: string, unit: Unit<D>): Un
 }
 
 function group(symbol: string): string {
-  return /[\s/]/.test(symbol) ? `(${symbol})` : symbol;
+  return /[\s/^]/.test(symbol) ? `(${symbol})` : symbol;
+}
+
+/** `symbol^n` written so that the parser reads it back: `cm^2` to the -1 is `cm^-2`, not `cm^2^-1`. */
+function powerSymbol(symbol: string, n: number): string {
+  const m = /^([^\s()/^]+)\^(-?\d+)$/.exec(symbol);
+  if (m !== null) {
+    const e = Number(m[2]) * n;
+    return e === 1 ? (m[1] as string) : `${m[1]}^${e}`;
+  }
+  return `${group(symbol)}^${n}`;
 }
 
 /**
@@ -238,7 +248,7 @@ export function multiplyUnits<A extends Dimension, B extends Dimension>(a: Unit<
  */
 export function divideUnits<A extends Dimension, B extends Dimension>(a: Unit<A>, b: Unit<B>): Unit<DimQuotient<A, B>> {
   const d = divideDimensions(a.dimension, b.dimension);
-  const inverse = b.symbol.includes(" ") ? `(${b.symbol})^-1` : `${b.symbol}^-1`;
+  const inverse = powerSymbol(b.symbol, -1);
   return defineUnit(`${a.symbol} ${inverse}`, `${a.name} per ${b.name}`, d, a.mantissa / b.mantissa, a.exp10 - b.exp10);
 }
 
@@ -253,7 +263,7 @@ export function divideUnits<A extends Dimension, B extends Dimension>(a: Unit<A>
  */
 export function powerUnit<A extends Dimension, N extends PowerExponent>(a: Unit<A>, n: N): Unit<DimPower<A, N>> {
   const d = powerDimension(a.dimension, n) as unknown as DimPower<A, N> & Dimension;
-  return defineUnit(`${group(a.symbol)}^${n}`, `${a.name}^${n}`, d, a.mantissa ** n, a.exp10 * n);
+  return defineUnit(powerSymbol(a.symbol, n), `${a.name}^${n}`, d, a.mantissa ** n, a.exp10 * n);
 }
 
 /** Text form of a unit's dimension, e.g. for error messages. */

@@ -172,6 +172,35 @@ export const units = Object.freeze({
   erg_per_s_cm2_A: defineUnit("erg s^-1 cm^-2 Å^-1", "erg per second per square centimetre per ångström", k.spectralFluxPerWavelength.dimension, 1, 7),
   /** Watt per square metre per hertz (W m⁻² Hz⁻¹) = 1e26 Jy, SI spectral flux density per frequency. */
   W_per_m2_Hz: defineUnit("W m^-2 Hz^-1", "watt per square metre per hertz", k.spectralFluxPerFrequency.dimension, 1),
+  // spectral flux density per wavelength, other wavelength units
+  /** Watt per square metre per nanometre (W m⁻² nm⁻¹) = 1e9 W m⁻³, spectral flux density per wavelength. */
+  W_per_m2_nm: defineUnit("W m^-2 nm^-1", "watt per square metre per nanometre", k.spectralFluxPerWavelength.dimension, 1, 9),
+  /** Watt per square metre per micrometre (W m⁻² µm⁻¹) = 1e6 W m⁻³, spectral flux density per wavelength. */
+  W_per_m2_um: defineUnit("W m^-2 µm^-1", "watt per square metre per micrometre", k.spectralFluxPerWavelength.dimension, 1, 6),
+  /** Erg per second per square centimetre per hertz (erg s⁻¹ cm⁻² Hz⁻¹) = 1e-3 W m⁻² Hz⁻¹ = 1e23 Jy, CGS spectral flux density per frequency. */
+  erg_per_s_cm2_Hz: defineUnit("erg s^-1 cm^-2 Hz^-1", "erg per second per square centimetre per hertz", k.spectralFluxPerFrequency.dimension, 1, -3),
+  // spectral radiance per wavelength (B_λ)
+  /** Watt per square metre per steradian per metre (W m⁻² sr⁻¹ m⁻¹ = W m⁻³ sr⁻¹), the coherent SI unit of spectral radiance per wavelength. */
+  W_per_m2_sr_m: defineUnit("W m^-2 sr^-1 m^-1", "watt per square metre per steradian per metre", k.spectralRadiancePerWavelength.dimension, 1),
+  /** Watt per square metre per steradian per micrometre (W m⁻² sr⁻¹ µm⁻¹) = 1e6 W m⁻³ sr⁻¹. */
+  W_per_m2_sr_um: defineUnit("W m^-2 sr^-1 µm^-1", "watt per square metre per steradian per micrometre", k.spectralRadiancePerWavelength.dimension, 1, 6),
+  /** Watt per square metre per steradian per ångström (W m⁻² sr⁻¹ Å⁻¹) = 1e10 W m⁻³ sr⁻¹. */
+  W_per_m2_sr_A: defineUnit("W m^-2 sr^-1 Å^-1", "watt per square metre per steradian per ångström", k.spectralRadiancePerWavelength.dimension, 1, 10),
+  /** Erg per second per square centimetre per steradian per centimetre (erg s⁻¹ cm⁻² sr⁻¹ cm⁻¹) = 0.1 W m⁻³ sr⁻¹, the coherent CGS unit of spectral radiance per wavelength. */
+  erg_per_s_cm2_sr_cm: defineUnit("erg s^-1 cm^-2 sr^-1 cm^-1", "erg per second per square centimetre per steradian per centimetre", k.spectralRadiancePerWavelength.dimension, 1, -1),
+  /** Erg per second per square centimetre per steradian per ångström (erg s⁻¹ cm⁻² sr⁻¹ Å⁻¹) = 1e7 W m⁻³ sr⁻¹ = 1e8 erg s⁻¹ cm⁻³ sr⁻¹. */
+  erg_per_s_cm2_sr_A: defineUnit("erg s^-1 cm^-2 sr^-1 Å^-1", "erg per second per square centimetre per steradian per ångström", k.spectralRadiancePerWavelength.dimension, 1, 7),
+  /** Erg per second per square centimetre per steradian per nanometre (erg s⁻¹ cm⁻² sr⁻¹ nm⁻¹) = 1e6 W m⁻³ sr⁻¹. */
+  erg_per_s_cm2_sr_nm: defineUnit("erg s^-1 cm^-2 sr^-1 nm^-1", "erg per second per square centimetre per steradian per nanometre", k.spectralRadiancePerWavelength.dimension, 1, 6),
+  // spectral radiance per frequency (B_ν)
+  /** Watt per square metre per steradian per hertz (W m⁻² sr⁻¹ Hz⁻¹), the coherent SI unit of spectral radiance per frequency. */
+  W_per_m2_sr_Hz: defineUnit("W m^-2 sr^-1 Hz^-1", "watt per square metre per steradian per hertz", k.spectralRadiancePerFrequency.dimension, 1),
+  /** Erg per second per square centimetre per steradian per hertz (erg s⁻¹ cm⁻² sr⁻¹ Hz⁻¹) = 1e-3 W m⁻² sr⁻¹ Hz⁻¹, the coherent CGS unit. */
+  erg_per_s_cm2_sr_Hz: defineUnit("erg s^-1 cm^-2 sr^-1 Hz^-1", "erg per second per square centimetre per steradian per hertz", k.spectralRadiancePerFrequency.dimension, 1, -3),
+  /** Jansky per steradian (Jy sr⁻¹) = 1e-26 W m⁻² sr⁻¹ Hz⁻¹. */
+  Jy_per_sr: defineUnit("Jy sr^-1", "jansky per steradian", k.spectralRadiancePerFrequency.dimension, 1, -26),
+  /** Megajansky per steradian (MJy sr⁻¹) = 1e-20 W m⁻² sr⁻¹ Hz⁻¹, the unit of far-infrared sky maps. */
+  MJy_per_sr: defineUnit("MJy sr^-1", "megajansky per steradian", k.spectralRadiancePerFrequency.dimension, 1, -20),
 } as const);
 
 /**

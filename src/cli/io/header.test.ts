@@ -92,3 +92,24 @@ describe("parseHeader (table-level rules)", () => {
     expect(parseHeader([])).toEqual([]);
   });
 });
+
+describe("conventional uncertainty spellings", () => {
+  it("x_error, x_err, e_x and err_x name the uncertainty of an existing column x", () => {
+    const cols = parseHeader(["star", "teff [K]", "e_teff [K]", "parallax [mas]", "parallax_error [mas]", "logg", "logg_err", "feh", "err_feh"]);
+    expect(cols.map((c) => c.uncertaintyOf)).toEqual([null, null, "teff", null, "parallax", null, "logg", null, "feh"]);
+    expect(cols[2]?.uncertaintyPattern).toBe("e_{x}");
+    expect(cols[2]?.uncertaintySide).toBe("both");
+  });
+  it("without a matching value column, or with a unit mismatch, the column stays plain", () => {
+    const cols = parseHeader(["e_mass [Msun]", "teff [K]", "teff_err"]);
+    expect(cols.map((c) => c.uncertaintyOf)).toEqual([null, null, null]);
+  });
+  it("sigma(x) wins over a conventional spelling, which stays plain", () => {
+    const cols = parseHeader(["teff [K]", "sigma(teff) [K]", "e_teff [K]"]);
+    expect(cols.map((c) => c.uncertaintyOf)).toEqual([null, "teff", null]);
+  });
+  it("the templates are configurable; [] recognises sigma(x) only", () => {
+    expect(parseHeader(["teff [K]", "e_teff [K]"], { uncertaintyPatterns: [] })[1]?.uncertaintyOf).toBeNull();
+    expect(parseHeader(["teff [K]", "teff_unc [K]"], { uncertaintyPatterns: ["{x}_unc"] })[1]?.uncertaintyOf).toBe("teff");
+  });
+});

@@ -17,7 +17,8 @@
  * - A cell without brackets is a text column or a pure (dimensionless) number.
  *   Empty brackets `[]` are an error: omit them for pure numbers.
  * - The standard (1σ) uncertainty of column `x` is spelled `sigma(x)` (or
- *   `σ(x)`). Asymmetric uncertainties are `sigma-(x)` (towards smaller values)
+ *   `σ(x)`), or, when a column `x` exists, `x_error`, `x_err`, `e_x` or
+ *   `err_x` (configurable: {@link HeaderOptions}). Asymmetric uncertainties are `sigma-(x)` (towards smaller values)
  *   and `sigma+(x)` (towards larger values); both are given as positive
  *   magnitudes. An uncertainty column must name a value column of the same
  *   table, and carries a unit exactly when that column does.
@@ -40,10 +41,45 @@ export interface ColumnSpec {
   readonly uncertaintyOf: string | null;
   /** `"both"` for `sigma(x)`, `"lower"` for `sigma-(x)`, `"upper"` for `sigma+(x)`; `null` for value columns. */
   readonly uncertaintySide: UncertaintySide | null;
+  /**
+   * The template that made this an uncertainty column when it is not spelled
+   * `sigma(x)` (e.g. `"e_{x}"` for `e_teff`), so that a command can say how it
+   * read the column; absent otherwise.
+   */
+  readonly uncertaintyPattern?: string;
 }
 
 /** Matches `sigma(x)`, `sigma-(x)`, `sigma+(x)` and the same with `σ`. */
 const UNCERTAINTY = /^(?:sigma|σ)([+-]?)\((.*)\)$/u;
+
+/**
+ * The other spellings of a symmetric (1σ) uncertainty column that
+ * {@link parseHeader} recognises by default, as templates in which `{x}`
+ * stands for the value column's name: `x_error`, `x_err`, `e_x`, `err_x`
+ * (common practice in published catalogues). `sigma(x)` and `σ(x)` are
+ * always recognised.
+ */
+export const defaultUncertaintyPatterns: readonly string[] = ["{x}_error", "{x}_err", "e_{x}", "err_{x}"];
+
+/** Options of {@link parseHeader}. */
+export interface HeaderOptions {
+  /**
+   * Templates of uncertainty-column names besides `sigma(x)` (`{x}` is the
+   * value column's name); default {@link defaultUncertaintyPatterns}; `[]`
+   * recognises `sigma(x)` only.
+   */
+  readonly uncertaintyPatterns?: readonly string[];
+}
+
+/** The value-column name a template matches in `name`, or undefined (`"e_{x}"` on `"e_teff"` gives `"teff"`). */
+function matchPattern(pattern: string, name: string): string | undefined {
+  const at = pattern.indexOf("{x}");
+  if (at < 0) return undefined;
+  const before = pattern.slice(0, at);
+  const after = pattern.slice(at + 3);
+  if (name.length <= before.length + after.length || !name.startsWith(before) || !name.endsWith(after)) return undefined;
+  return name.slice(before.length, name.length - after.length);
+}
 
 /**
  * Parse one header cell `name [unit]` (see the module description for the convention).
@@ -111,8 +147,27 @@ export function parseColumnHeader(cell: string, column = 1): ColumnSpec {
  * // cols[2].uncertaintyOf === "parallax"
  * ```
  */
-export function parseHeader(cells: readonly string[]): ColumnSpec[] {
+export function parseHeader(cells: readonly string[], options: HeaderOptions = {}): ColumnSpec[] {
   const specs = cells.map((cell, i) => parseColumnHeader(cell, i + 1));
+  const patterns = options.uncertaintyPatterns ?? defaultUncertaintyPatterns;
+  const names = new Set(specs.map((s) => s.name));
+  // Conventional spellings (e_teff, teff_err …): an uncertainty only when the
+  // value column exists, is not itself such a column, and the units agree in
+  // presence; otherwise the column stays a plain column (and a command can
+  // report it as looking like an unused uncertainty).
+  for (let i = 0; i < specs.length; i++) {
+    const s = specs[i] as ColumnSpec;
+    if (s.uncertaintyOf !== null) continue;
+    for (const p of patterns) {
+      const x = matchPattern(p, s.name);
+      if (x === undefined || !names.has(x) || x === s.name) continue;
+      const target = specs.find((t) => t.name === x);
+      if (target === undefined || target.uncertaintyOf !== null || (target.unit === null) !== (s.unit === null)) continue;
+      if (specs.some((t) => t.uncertaintyOf === x)) continue; // sigma(x) or an earlier spelling wins
+      specs[i] = { ...s, uncertaintyOf: x, uncertaintySide: "both", uncertaintyPattern: p };
+      break;
+    }
+  }
   const index = new Map<string, number>();
   specs.forEach((s, i) => {
     const prev = index.get(s.name);
