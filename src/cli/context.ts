@@ -5,7 +5,9 @@
  *
  * @module
  */
+import type { ColumnSpec } from "./io/header";
 import type { ProgressStream } from "./io/progress";
+import type { TableBinding } from "./run-table";
 import type { TextSink } from "./io/write";
 
 /** An output stream: what `process.stdout` / `process.stderr` and the test doubles provide. */
@@ -27,6 +29,16 @@ export interface CliIO {
   readonly stdin?: AsyncIterable<string | Uint8Array>;
   /** Directory that relative paths are resolved against (default `process.cwd()`). */
   readonly cwd?: string;
+  /**
+   * Set only inside a worker thread of `--jobs N` (jobs.ts): the table
+   * command binds to these columns and hands its row handling to `serve`
+   * instead of reading a table.
+   */
+  readonly tableWorker?: {
+    readonly columns: readonly ColumnSpec[];
+    readonly source: string;
+    serve(binding: TableBinding): void;
+  };
 }
 
 /** Exit codes of the tool (documented in `--help` and docs/guides/command-line.md). */
@@ -39,6 +51,8 @@ export const EXIT = {
   USAGE: 2,
   /** A bug: an unexpected exception (reported on stderr with its stack). */
   INTERNAL: 3,
+  /** The output could not be written (disk full, no permission, I/O error): one line on stderr, no stack. */
+  OUTPUT_FAILED: 4,
 } as const;
 
 /** A mistake in how the tool was called; reported on stderr with exit code 2. */
@@ -47,6 +61,15 @@ export class UsageError extends Error {
     super(message);
     this.name = "UsageError";
   }
+}
+
+/**
+ * The system error code of an I/O failure (`ENOSPC`, `EPIPE`, `EACCES`, …),
+ * or undefined for any other exception.
+ */
+export function ioErrorCode(e: unknown): string | undefined {
+  const code = (e as { code?: unknown } | null)?.code;
+  return e instanceof Error && typeof code === "string" && /^E[A-Z0-9]+$/.test(code) ? code : undefined;
 }
 
 /** Write one line to a stream (without waiting: messages are small). */
