@@ -72,7 +72,16 @@ export function ioErrorCode(e: unknown): string | undefined {
   return e instanceof Error && typeof code === "string" && /^E[A-Z0-9]+$/.test(code) ? code : undefined;
 }
 
-/** Write one line to a stream (without waiting: messages are small). */
+/** Bidirectional control characters (embeddings, overrides, isolates, marks; Unicode UAX #9). */
+const BIDI_CONTROLS = /[\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/g;
+
+/** Text for display (messages, report titles): bidirectional control characters removed, so a file name cannot reorder what is shown. */
+export function displayText(text: string): string {
+  return text.replace(BIDI_CONTROLS, "");
+}
+
+/** Write one line to a stream (without waiting: messages are small), stripped of bidirectional controls. */
 export function say(stream: OutStream, text: string): void {
-  stream.write(text.endsWith("\n") ? text : `${text}\n`);
+  const clean = displayText(text);
+  stream.write(clean.endsWith("\n") ? clean : `${clean}\n`);
 }

@@ -10,6 +10,7 @@ import { CGS, SI, type UnitSystem } from "../../quantity/system";
 import type { SystemName } from "../../quantity/quantity";
 import {
   createStarBatchSolver,
+  PARALLAX_BIAS_THRESHOLD,
   solveStar,
   StarBatchReason,
   type Measurement,
@@ -180,6 +181,20 @@ function worstPull(sol: StarSolution<SystemName>): string {
   return sol.consistency.dof > 0 ? best : "";
 }
 
+/**
+ * The reason text of a parallax whose inversion is biased (σ_ϖ/ϖ above the
+ * library's {@link PARALLAX_BIAS_THRESHOLD}, 0.1), naming the user's
+ * column; "" when there is no parallax or it is precise enough.
+ */
+export function parallaxBias(observations: StarObservations<SystemName>, column: string): string {
+  const p = (observations as Partial<Record<StarObservationName, Measurement<number>>>).parallax;
+  if (p === undefined) return "";
+  const rel = p.sigma / p.value;
+  return rel > PARALLAX_BIAS_THRESHOLD
+    ? `parallax bias: sigma(${column})/${column} = ${rel.toPrecision(2)} > ${PARALLAX_BIAS_THRESHOLD}, so the distance from inverting it is biased (Lutz-Kelker)`
+    : "";
+}
+
 /** The consistency columns of an exactly determined star (as the scalar solver reports them: χ² 0, dof 0, p 1, tension 0). */
 const EXACT_CONSISTENCY = { chi2: 0, dof: 0, pValue: 1, sigma: 0 } as const;
 
@@ -217,6 +232,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
   for (const k of OUTPUT_KEYS) out.push(...withSigma(k, units[k].text));
   out.push({ name: "chi2", unit: null }, { name: "dof", unit: null }, { name: "p_value", unit: null }, { name: "tension_sigma", unit: null }, { name: "worst_pull", unit: null }, { name: "reason", unit: null });
   const nOut = out.length;
+  const parallaxColumn = bound.find((b) => b.q.key === "parallax")?.spec.name ?? "parallax";
   const kept: CellValue[][] = [];
   const points: { name: string; temperatureK: number; sigmaT: number; luminosity: number; sigmaL: number }[] = [];
   const blank = (line: number, idText: string, reason: string): CellValue[] => {
@@ -233,15 +249,16 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
   };
   const observationKey = new Map(INPUTS.map((q) => [q.key, q.observation]));
   /** The output row of a solved star, from each quantity's value and σ in `sys`. */
-  const solvedRow = (line: number, idText: string, used: string, est: readonly (readonly [number, number])[], c: { chi2: number; dof: number; pValue: number; sigma: number }, worst: string): CellValue[] => {
+  const solvedRow = (line: number, idText: string, used: string, est: readonly (readonly [number, number])[], c: { chi2: number; dof: number; pValue: number; sigma: number }, worst: string, observations: StarObservations<SystemName>): CellValue[] => {
     const row: CellValue[] = [line];
     if (id !== -1) row.push(idText);
-    row.push("ok", used);
+    const bias = parallaxBias(observations, parallaxColumn);
+    row.push(bias === "" ? "ok" : "flagged", used);
     OUTPUT_KEYS.forEach((k, j) => {
       const e = est[j] as readonly [number, number];
       row.push(valueIn(sys, e[0], units[k].unit), valueIn(sys, e[1], units[k].unit));
     });
-    row.push(c.chi2, c.dof, c.pValue, c.sigma, worst, "");
+    row.push(c.chi2, c.dof, c.pValue, c.sigma, worst, bias);
     keep(row);
     if (points.length < REPORT_POINTS) {
       const t = est[0] as readonly [number, number];
@@ -267,7 +284,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
     try {
       const sol = solveStar(sys, observations);
       const est = [sol.temperature, sol.luminosity, sol.radius, sol.distance, sol.angularDiameter, sol.bolometricFlux].map((e) => [e.value, e.sigma] as const);
-      return { cells: solvedRow(line, idText, used.join("+"), est, sol.consistency, worstPull(sol)) };
+      return { cells: solvedRow(line, idText, used.join("+"), est, sol.consistency, worstPull(sol), observations) };
     } catch (e) {
       return rejectedRow(line, idText, e);
     }
@@ -366,7 +383,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
         const b = batched[i];
         results[i] =
           b !== undefined
-            ? { cells: solvedRow(item.line, q.idText, q.used.join("+"), b.est, EXACT_CONSISTENCY, "") }
+            ? { cells: solvedRow(item.line, q.idText, q.used.join("+"), b.est, EXACT_CONSISTENCY, "", q.observations) }
             : scalarRow(item.line, q.idText, q.observations, q.used);
       });
       return results as RowResult[];
