@@ -55,3 +55,14 @@ describe("display text", () => {
     expect(readFileSync(join(dir, "bidi", "index.html"), "utf8")).not.toMatch(/[\u202a-\u202e\u2066-\u2069]/);
   }, 60_000);
 });
+
+describe("fit output into solve", () => {
+  it("refuses to solve derived columns together with the fitted T and θ (double counting), exit 2", async () => {
+    const fit = await runCli(["fit", "examples/demo-survey/photometry.csv", "--bands", "demo", "--format", "csv", "--quiet"]);
+    const r = await runCli(["solve", "-", "--format", "csv"], { stdin: fit.stdout });
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain("output of 'starlume fit'");
+    expect(r.stderr).toContain("'luminosity'");
+    expect(r.stderr).toContain("count the same photometry twice");
+  }, 60_000);
+});

@@ -195,6 +195,28 @@ export function parallaxBias(observations: StarObservations<SystemName>, column:
     : "";
 }
 
+/** Inputs that a `starlume fit` output derives from its fitted T and θ (and the distance). */
+const DERIVED_BY_FIT = ["luminosity", "radius", "fbol"] as const;
+
+/**
+ * Refuse a table written by `starlume fit` (recognised by its n_bands and
+ * flags columns) when its derived columns would be solved together with the
+ * fitted T and θ they were computed from: that counts the same photometry
+ * twice (σ(T) shrinks and χ² → 0 without any new information).
+ *
+ * @throws UsageError naming the derived columns and what to keep
+ */
+export function refuseDerivedInputs(columns: readonly ColumnSpec[], bound: readonly { readonly q: { readonly key: string }; readonly spec: ColumnSpec }[], source: string): void {
+  const names = new Set(columns.map((c) => c.name.toLowerCase()));
+  if (!(names.has("n_bands") && names.has("flags"))) return;
+  const derived = bound.filter((b) => (DERIVED_BY_FIT as readonly string[]).includes(b.q.key)).map((b) => `'${b.spec.name}'`);
+  const fitted = bound.filter((b) => b.q.key === "teff" || b.q.key === "theta");
+  if (derived.length === 0 || fitted.length === 0) return;
+  throw new UsageError(
+    `${source} is the output of 'starlume fit': its column${derived.length === 1 ? "" : "s"} ${derived.join(", ")} ${derived.length === 1 ? "was" : "were"} derived from the fitted teff and theta, so solving ${derived.length === 1 ? "it" : "them"} together with ${fitted.map((b) => `'${b.spec.name}'`).join(" and ")} would count the same photometry twice (the fit's T-theta covariance is not in the table). Remove the derived columns (keep teff, theta and the distance or parallax with their sigma columns) and solve again.`,
+  );
+}
+
 /** The consistency columns of an exactly determined star (as the scalar solver reports them: χ² 0, dof 0, p 1, tension 0). */
 const EXACT_CONSISTENCY = { chi2: 0, dof: 0, pValue: 1, sigma: 0 } as const;
 
@@ -206,6 +228,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
   const sys = systemOption(args);
   const units = outputUnits(args, sys.name);
   const bound = bindInputs(columns, args);
+  refuseDerivedInputs(columns, bound, source);
   if (bound.length === 0) {
     throw new UsageError(
       `${source}: no solver input columns found; name them ${INPUTS.map((q) => `'${q.example}'`).join(", ")} (or map yours with --column KEY=NAME)`,
