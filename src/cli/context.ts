@@ -5,9 +5,7 @@
  *
  * @module
  */
-import type { ColumnSpec } from "./io/header";
 import type { ProgressStream } from "./io/progress";
-import type { TableBinding } from "./run-table";
 import type { TextSink } from "./io/write";
 
 /** An output stream: what `process.stdout` / `process.stderr` and the test doubles provide. */
@@ -29,16 +27,6 @@ export interface CliIO {
   readonly stdin?: AsyncIterable<string | Uint8Array>;
   /** Directory that relative paths are resolved against (default `process.cwd()`). */
   readonly cwd?: string;
-  /**
-   * Set only inside a worker thread of `--jobs N` (jobs.ts): the table
-   * command binds to these columns and hands its row handling to `serve`
-   * instead of reading a table.
-   */
-  readonly tableWorker?: {
-    readonly columns: readonly ColumnSpec[];
-    readonly source: string;
-    serve(binding: TableBinding): void;
-  };
 }
 
 /** Exit codes of the tool (documented in `--help` and docs/guides/command-line.md). */

@@ -20,7 +20,21 @@ import { dirname, join } from "node:path";
 import { pathToFileURL } from "node:url";
 import { Worker } from "node:worker_threads";
 import type { ColumnSpec } from "./io/header";
-import type { ReadableRow, RowResult } from "./run-table";
+import type { InCell } from "./table-in";
+import type { CellValue } from "./io/write";
+
+/** Result of processing one row. */
+export interface RowResult {
+  readonly cells: readonly CellValue[];
+  /** Why the row was rejected (it is still written), or undefined. */
+  readonly rejected?: string;
+}
+
+/** A readable input row and its 1-based line number. */
+export interface ReadableRow {
+  readonly cells: readonly InCell[];
+  readonly line: number;
+}
 
 /** Chunks sent ahead to each worker before the main thread waits for the oldest. */
 export const IN_FLIGHT_PER_JOB = 2;

@@ -12,7 +12,8 @@ import { optInteger, optString, type ParsedArgs, type OptionSpec } from "./args"
 import { EXIT, UsageError, say, type CliIO } from "./context";
 import type { ColumnSpec } from "./io/header";
 import { Progress } from "./io/progress";
-import { defaultJobs, IN_FLIGHT_PER_JOB, MAX_JOBS, WorkerPool } from "./jobs";
+import { defaultJobs, IN_FLIGHT_PER_JOB, MAX_JOBS, WorkerPool, type ReadableRow, type RowResult } from "./jobs";
+import { tableWorker } from "./worker-state";
 import type { CellValue } from "./io/write";
 import { defaultFormat, openOutput, openTableWriter, OUTPUT_FORMATS, type OutColumn } from "./table-out";
 import { inputFormatFor, openTable, type InCell, type TableItem } from "./table-in";
@@ -31,12 +32,7 @@ export const TABLE_OPTIONS: readonly OptionSpec[] = [
   { name: "line-offset", kind: "value", valueName: "M", help: "add M to every line number (for chunks of a larger file)", defaultText: "0" },
 ];
 
-/** Result of processing one row. */
-export interface RowResult {
-  readonly cells: readonly CellValue[];
-  /** Why the row was rejected (it is still written), or undefined. */
-  readonly rejected?: string;
-}
+export type { ReadableRow, RowResult } from "./jobs";
 
 /** A command's handling of one table, built once its header is known. */
 export interface TableBinding {
@@ -55,12 +51,6 @@ export interface TableBinding {
   badRow(line: number, message: string): readonly CellValue[];
   /** Called once at the end (e.g. to write a report). */
   finish?(summary: RunSummary): Promise<void>;
-}
-
-/** A readable input row and its 1-based line number. */
-export interface ReadableRow {
-  readonly cells: readonly InCell[];
-  readonly line: number;
 }
 
 /** Rows per chunk when a binding processes rows in batches (output is flushed after each chunk). */
@@ -132,9 +122,10 @@ export async function runTableCommand(
   const jobs = optInteger(args, "jobs", defaultJobs(), 1, MAX_JOBS);
   const shard = shardOption(args);
   const lineOffset = optInteger(args, "line-offset", 0, 0);
-  if (io.tableWorker !== undefined) {
+  const worker = tableWorker();
+  if (worker !== undefined) {
     // Inside a worker of --jobs N: bind to the main thread's columns and serve chunks of rows.
-    io.tableWorker.serve(await bind(io.tableWorker.columns, io.tableWorker.source));
+    worker.serve(await bind(worker.columns, worker.source));
     return EXIT.OK;
   }
   const table = await openTable(path, format, io);

@@ -12,6 +12,8 @@ import { parseArgs } from "./args";
 import type { CliIO, OutStream } from "./context";
 import { isTableWorkerData, type FromWorker, type ToWorker } from "./jobs";
 import { COMMANDS } from "./main";
+import type { TableBinding } from "./run-table";
+import { setTableWorker } from "./worker-state";
 
 const silent: OutStream = {
   write: () => true,
@@ -30,14 +32,13 @@ export async function serveTableWorker(): Promise<void> {
   if (port === null || !isTableWorkerData(data)) throw new Error("serveTableWorker: not started as a table worker");
   const cmd = COMMANDS.find((c) => c.name === data.command);
   if (cmd === undefined) throw new Error(`serveTableWorker: unknown command '${data.command}'`);
-  const io: CliIO = {
-    stdout: silent,
-    stderr: silent,
-    cwd: data.cwd,
-    tableWorker: {
-      columns: data.columns,
-      source: data.source,
-      serve(binding) {
+  const io: CliIO = { stdout: silent, stderr: silent, cwd: data.cwd };
+  setTableWorker({
+    columns: data.columns,
+    source: data.source,
+    serve(b) {
+      const binding = b as TableBinding;
+      {
         port.on("message", (m: ToWorker) => {
           let reply: FromWorker;
           try {
@@ -48,8 +49,8 @@ export async function serveTableWorker(): Promise<void> {
           }
           port.postMessage(reply);
         });
-      },
+      }
     },
-  };
+  });
   await cmd.run(parseArgs(data.argv, cmd.options, cmd.name), io);
 }
