@@ -39,7 +39,7 @@ const typedLinesSI: SynthesisLine<"SI">[] = [];
 const typedLinesCGS: SynthesisLine<"CGS">[] = [];
 const gridCGS = new Float64Array(N_GRID);
 const continuumCGS = new Float64Array(N_GRID);
-const centers = new Float64Array(N_LINES);
+const centres = new Float64Array(N_LINES);
 const bs = new Float64Array(N_LINES);
 const gammas = new Float64Array(N_LINES);
 const wb = new Float64Array(2); // Faddeeva result (re, im) for the hand loop
@@ -66,11 +66,11 @@ function setup(): void {
     const b = 2e-12 + 4e-12 * rnd();
     const t0 = Math.exp(Math.LN10 * (-3 + 4 * rnd()));
     const a = Math.exp(Math.LN10 * (-3 + 2 * rnd()));
-    centers[k] = c;
+    centres[k] = c;
     bs[k] = b;
     gammas[k] = a * b;
     tau0s[k] = t0;
-    lines.push({ centerM: c, dopplerWidthM: b, lorentzHwhmM: a * b, tau0: t0 });
+    lines.push({ centreM: c, dopplerWidthM: b, lorentzHwhmM: a * b, tau0: t0 });
     typedLinesSI.push({
       center: vacuumWavelength(SI, assume<Length<"SI">>(c)),
       dopplerWidth: assume<Length<"SI">>(b),
@@ -104,7 +104,7 @@ export const cases: BenchCase[] = [
       for (let k = 0; k < N_LINES; k++) {
         const t0 = tau0s[k] as number;
         if (!(t0 > TAU_CUT)) continue;
-        const c = centers[k] as number;
+        const c = centres[k] as number;
         const b = bs[k] as number;
         const a = (gammas[k] as number) / b;
         faddeeva(0, a, wb);
@@ -151,7 +151,7 @@ export const cases: BenchCase[] = [
       for (let k = 0; k < N_LINES; k++) {
         const t0 = tau0s[k] as number;
         if (!(t0 > TAU_CUT)) continue;
-        const c = centers[k] as number;
+        const c = centres[k] as number;
         const b = bs[k] as number;
         const a = (gammas[k] as number) / b;
         faddeeva(0, a, wb);
@@ -203,7 +203,7 @@ export const cases: BenchCase[] = [
       for (let k = 0; k < N_LINES; k++) {
         const t0 = tau0s[k] as number;
         if (!(t0 > TAU_CUT)) continue;
-        const c = centers[k] as number;
+        const c = centres[k] as number;
         const b = bs[k] as number;
         const a = (gammas[k] as number) / b;
         faddeeva(0, a, wb);

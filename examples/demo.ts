@@ -14,11 +14,11 @@ const stars = [
 console.log("star            T_eff [K]   R [R☉]   L [L☉]     B_λ(550 nm) [erg s^-1 cm^-2 Å^-1 sr^-1]");
 for (const s of stars) {
   const T = SI.of(s.teff, units.K);
-  const R = SI.of(s.radiusRsol, units.Rsol);
+  const R = SI.of(s.radiusRsol, units.Rsun);
   const L = scale(mul(mul(R, R), mul(constants.sigma.si, pow(T, 4))), 4 * Math.PI);
   const b = planckRadianceWavelength(CGS, CGS.of(550, units.nm), T);
   const perAngstrom = CGS.valueIn(lambertianExitance(b), units.erg_per_s_cm2_A) / Math.PI;
   console.log(
-    `${s.name.padEnd(15)} ${String(s.teff).padStart(9)}   ${s.radiusRsol.toFixed(2).padStart(6)}   ${SI.valueIn(L, units.Lsol).toExponential(3).padStart(9)}   ${perAngstrom.toExponential(4)}`,
+    `${s.name.padEnd(15)} ${String(s.teff).padStart(9)}   ${s.radiusRsol.toFixed(2).padStart(6)}   ${SI.valueIn(L, units.Lsun).toExponential(3).padStart(9)}   ${perAngstrom.toExponential(4)}`,
   );
 }

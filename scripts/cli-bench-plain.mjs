@@ -95,7 +95,7 @@ const iF = col("fbol [erg s^-1 cm^-2]");
 const iSF = col("sigma(fbol) [erg s^-1 cm^-2]");
 
 const out = [
-  "line,name,status,inputs,teff [K],sigma(teff) [K],luminosity [Lsol],sigma(luminosity) [Lsol],radius [Rsol],sigma(radius) [Rsol]," +
+  "line,name,status,inputs,teff [K],sigma(teff) [K],luminosity [Lsun],sigma(luminosity) [Lsun],radius [Rsun],sigma(radius) [Rsun]," +
     "distance [pc],sigma(distance) [pc],theta [mas],sigma(theta) [mas],fbol [W m^-2],sigma(fbol) [W m^-2],chi2,dof,p_value,tension_sigma,worst_pull,reason",
 ];
 

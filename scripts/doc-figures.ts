@@ -9,7 +9,7 @@ import {
   rayleighJeansRelativeErrorWavelength,
   svgChart,
   units,
-  wienPeakWavelength,
+  peakWavelength,
   wienRelativeErrorWavelength,
 } from "../src/index";
 
@@ -33,7 +33,7 @@ export function planckFamily(): string {
     y: { label: "B_{λ} [W m^{−2} sr^{−1} µm^{−1}]", scale: "log", min: 1e-2, max: 1e12 },
     series,
     markers: temps.map((t) => ({
-      x: SI.valueIn(wienPeakWavelength(SI, SI.of(t, units.K)), units.um),
+      x: SI.valueIn(peakWavelength(SI, SI.of(t, units.K)), units.um),
       label: `peak, ${t} K`,
     })),
   });

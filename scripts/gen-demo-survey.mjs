@@ -170,7 +170,7 @@ const STARS = [
 const fmt = (x, n) => String(sig(x, n));
 
 const truthRows = [
-  "name,description,teff [K],radius [Rsol],distance [pc],parallax [mas],angular_diameter [mas],luminosity [Lsol]",
+  "name,description,teff [K],radius [Rsun],distance [pc],parallax [mas],angular_diameter [mas],luminosity [Lsun]",
 ];
 const photHeader = ["name"];
 for (const b of bands) {

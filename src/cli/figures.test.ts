@@ -132,7 +132,7 @@ describe("temperature–luminosity diagram", () => {
         { name: "cool", temperatureK: 3000, sigmaT: 30, luminosity: 0.01, sigmaL: 0.001 },
         { name: "hot", temperatureK: 20000, sigmaT: 2000, luminosity: 1000, sigmaL: 100 },
       ],
-      "Lsol",
+      "Lsun",
       [{ temperatureK: 21000, luminosity: 1100 }],
     );
     expect(xmlProblems(svg)).toEqual([]);

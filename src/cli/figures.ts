@@ -323,9 +323,9 @@ export function hrFigure(points: readonly HrPoint[], luminosityUnit: string, tru
   });
 }
 
-/** Luminosity unit text for axis labels: `Lsol` → `L_{☉}`. */
+/** Luminosity unit text for axis labels: `Lsun` → `L_{☉}`. */
 export function luminosityLabel(unit: string): string {
-  return unit === "Lsol" ? "L_{☉}" : unit;
+  return unit === "Lsun" ? "L_{☉}" : unit;
 }
 
 /** A spectrum with its lines marked. */

@@ -181,7 +181,7 @@ describe("spectrum fit with absorption lines masked", () => {
     // Pure Gaussian lines (γ = 0) are truncated by the kernel at τ < 1e-8 within ~1 nm, so beyond a
     // ±2 nm mask the spectrum is the continuum to < 1e-8 relative.
     const flux = new Float64Array(n);
-    synthesizeSpectrumSI(lam, cont, centres.map((c) => ({ centerM: c, dopplerWidthM: 0.2e-9, lorentzHwhmM: 0, tau0: 3 })), flux);
+    synthesizeSpectrumSI(lam, cont, centres.map((c) => ({ centreM: c, dopplerWidthM: 0.2e-9, lorentzHwhmM: 0, tau0: 3 })), flux);
     const sigma = cont.map((v) => 0.01 * v);
     const spectrum = {
       wavelengths: assumeArray<LengthArray<"SI">>(lam),
@@ -201,7 +201,7 @@ describe("spectrum fit with absorption lines masked", () => {
   it("noisy Voigt lines with damping wings, masked ±3 nm: T within 3σ and χ²/dof ≈ 1", () => {
     const normal = gaussian(mulberry32(2024));
     const flux = new Float64Array(n);
-    synthesizeSpectrumSI(lam, cont, centres.map((c) => ({ centerM: c, dopplerWidthM: 0.15e-9, lorentzHwhmM: 0.002e-9, tau0: 5 })), flux);
+    synthesizeSpectrumSI(lam, cont, centres.map((c) => ({ centreM: c, dopplerWidthM: 0.15e-9, lorentzHwhmM: 0.002e-9, tau0: 5 })), flux);
     const sigma = cont.map((v) => 0.01 * v);
     const noisy = flux.map((v, i) => v + sigma[i]! * normal());
     const r = fitBlackbodySpectrum(SI, {
@@ -246,7 +246,7 @@ describe("hand-off to radius and luminosity", () => {
     const star = stellarParametersFromFit(SI, fit, { distance: SI.of(50, units.pc), sigma: SI.of(0.5, units.pc) });
     expect(rel(star.radius, (theta * d) / 2)).toBeLessThan(1e-6);
     expect(rel(star.luminosity, Math.PI * theta ** 2 * d ** 2 * SIGMA * T ** 4)).toBeLessThan(1e-5);
-    const lc = fit.json.logCovariance;
+    const lc = fit.json.lnCovariance;
     const vT = lc[0]![0]!;
     const vTh = lc[1]![1]!;
     const c = lc[0]![1]!;
@@ -264,7 +264,7 @@ describe("hand-off to radius and luminosity", () => {
     expect(rel(viaP.sigmaLuminosity, star.sigmaLuminosity)).toBeLessThan(1e-9);
     // CGS: the same star in erg s⁻¹ and cm
     const cgs = stellarParametersFromFit(CGS, fit, { distance: CGS.of(50, units.pc), sigma: CGS.of(0.5, units.pc) });
-    expect(rel(CGS.valueIn(cgs.luminosity, units.Lsol), SI.valueIn(star.luminosity, units.Lsol))).toBeLessThan(1e-12);
+    expect(rel(CGS.valueIn(cgs.luminosity, units.Lsun), SI.valueIn(star.luminosity, units.Lsun))).toBeLessThan(1e-12);
     expect(() => stellarParametersFromFit(SI, fit, { distance: SI.of(-1, units.pc), sigma: SI.of(1, units.pc) })).toThrow(/distance must be a finite number > 0 m/);
   });
 

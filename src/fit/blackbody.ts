@@ -648,7 +648,7 @@ export interface StellarParameters<S extends SystemName> {
  * const bands = [0.44, 0.55, 0.8].map((c) => gaussianBand(SI, SI.of(c, units.um), SI.of(0.2 * c, units.um)));
  * const fit = fitBlackbody(SI, bands.map((band, i) => ({ band, abMagnitude: [9.1, 8.8, 8.7][i] ?? 0, sigma: 0.02 })));
  * const star = stellarParametersFromFit(SI, fit, { parallax: SI.of(10, units.mas), sigma: SI.of(0.05, units.mas) });
- * SI.valueIn(star.radius, units.Rsol); // ≈ 1.06 (fit.temperature ≈ 7100 K)
+ * SI.valueIn(star.radius, units.Rsun); // ≈ 1.06 (fit.temperature ≈ 7100 K)
  * ```
  */
 export function stellarParametersFromFit<S extends SystemName>(

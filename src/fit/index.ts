@@ -35,4 +35,4 @@ export type {
   StellarFromFitSI,
   StellarParameters,
 } from "./blackbody";
-export type { DerivedQuantitySI, StarConsistency, StarInputKind, StarQuantity } from "../photometry/kernels/solver";
+export type { DerivedQuantitySI, StarConsistencySI, StarInputKindSI, StarQuantitySI } from "../photometry/kernels/solver";

@@ -109,9 +109,9 @@ export interface LawDeclaration<A extends readonly LawInput[], R extends Dimensi
  *   result: kinds.power,
  *   kernel: (r, t) => 4 * Math.PI * r * r * SIGMA * (t * t) * (t * t),
  * });
- * const l = luminosity(SI, SI.of(1, units.Rsol), SI.of(5772, units.K));
- * SI.valueIn(l, units.Lsol); // ≈ 1.0
- * const lc = luminosity(CGS, CGS.of(1, units.Rsol), SI.of(5772, units.K)); // erg s^-1
+ * const l = luminosity(SI, SI.of(1, units.Rsun), SI.of(5772, units.K));
+ * SI.valueIn(l, units.Lsun); // ≈ 1.0
+ * const lc = luminosity(CGS, CGS.of(1, units.Rsun), SI.of(5772, units.K)); // erg s^-1
  * ```
  */
 /* @__NO_SIDE_EFFECTS__ */

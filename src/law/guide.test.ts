@@ -147,7 +147,7 @@ describe("docs/guides/writing-a-law.md", () => {
     const { SI, CGS, units } = await import("../index");
     const f = m.starLuminosity as (...a: unknown[]) => number;
     // 4π R☉² σ T☉⁴ with the IAU 2015 B3 nominal R☉ = 6.957e8 m, T☉ = 5772 K: 3.828e26 W to 4 digits
-    const l = f(SI, { radius: SI.of(1, units.Rsol), temperature: SI.of(5772, units.K) });
+    const l = f(SI, { radius: SI.of(1, units.Rsun), temperature: SI.of(5772, units.K) });
     expect(l.toPrecision(4)).toBe("3.828e+26");
     expect(() => f(CGS, { radius: -1, temperature: 5772 })).toThrow(new RangeError("radius must be a finite number > 0 cm; got -1"));
     expect(() => f(SI, { radius: 1e300, temperature: 1e30 })).toThrow(

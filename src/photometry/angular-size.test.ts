@@ -16,7 +16,7 @@ import {
   angularDiameter,
   distanceFromAngularDiameter,
   radiusFromAngularDiameter,
-  solidAngleOfDisk,
+  solidAngleFromAngularDiameter,
   surfaceBrightness,
   type AngularGeometry,
 } from "./angular-size";
@@ -27,18 +27,18 @@ const geometries: AngularGeometry[] = ["sphere", "disk", "small-angle"];
 
 describe("typed angular size", () => {
   it("in SI equals the kernels bit for bit, per geometry", () => {
-    const r = SI.of(1, units.Rsol), d = SI.of(1, units.au);
+    const r = SI.of(1, units.Rsun), d = SI.of(1, units.au);
     expect(angularDiameter(SI, r, d)).toBe(angularDiameterSphereSI(R_SUN, AU));
     expect(angularDiameter(SI, r, d, "disk")).toBe(angularDiameterDiskSI(R_SUN, AU));
     expect(angularDiameter(SI, r, d, "small-angle")).toBe(angularDiameterSmallAngleSI(R_SUN, AU));
-    expect(solidAngleOfDisk(SI.of(1, units.deg))).toBe(solidAngleConeSI(Math.PI / 180));
+    expect(solidAngleFromAngularDiameter(SI.of(1, units.deg))).toBe(solidAngleConeSI(Math.PI / 180));
     expect(surfaceBrightness(SI, SI.of(1361, units.W_per_m2), SI.of(0.5, units.deg))).toBe(surfaceBrightnessSI(1361, Math.PI / 360));
   });
 
   it("angles are system-free: CGS lengths give the same angle (≤ 1 ulp from converting R and d); lengths back in CGS are SI × 100", () => {
     for (const g of geometries) {
-      const a = angularDiameter(SI, SI.of(1, units.Rsol), SI.of(1, units.au), g);
-      const b = angularDiameter(CGS, CGS.of(1, units.Rsol), CGS.of(1, units.au), g);
+      const a = angularDiameter(SI, SI.of(1, units.Rsun), SI.of(1, units.au), g);
+      const b = angularDiameter(CGS, CGS.of(1, units.Rsun), CGS.of(1, units.au), g);
       expect(rel(b, a)).toBeLessThan(4.5e-16);
       const rs = radiusFromAngularDiameter(SI, a, SI.of(1, units.au), g);
       expect(radiusFromAngularDiameter(CGS, a, times10(SI.of(1, units.au), 2) as Length<"CGS">, g)).toBe(times10(rs, 2));
@@ -46,7 +46,7 @@ describe("typed angular size", () => {
   });
 
   it("the Sun from 1 au: θ = 2 asin(R☉ᴺ/au) = 1918.4623721723203″ (mpmath, 40 digits; IAU 2015 B3 R☉ᴺ, IAU 2012 au)", () => {
-    const theta = angularDiameter(SI, SI.of(1, units.Rsol), SI.of(1, units.au));
+    const theta = angularDiameter(SI, SI.of(1, units.Rsun), SI.of(1, units.au));
     // mpmath: 2 asin(6.957e8 / 149597870700) = 0.0093009680472299524999 rad; asin ≤ 1 ulp, division 0.5 ulp
     expect(rel(theta, 0.0093009680472299525)).toBeLessThan(4.5e-16);
     // through the arcsec unit: one more rounding
@@ -76,7 +76,7 @@ describe("typed angular size", () => {
   it("surface brightness is a radiance: a Lambertian sphere at T☉ᴺ seen from 1 au gives σT⁴/π × (1 + cos(θ/2))/2", () => {
     // received flux from a uniform sphere: σT⁴ (R/d)² exactly; Ω = 2π(1 − cos(θ/2)) with sin(θ/2) = R/d
     const f = (SIGMA * T_SUN ** 4 * (R_SUN / AU) ** 2) as Flux<"SI">;
-    const theta = angularDiameter(SI, SI.of(1, units.Rsol), SI.of(1, units.au));
+    const theta = angularDiameter(SI, SI.of(1, units.Rsun), SI.of(1, units.au));
     const sb: Radiance<"SI"> = surfaceBrightness(SI, f, theta);
     const b = (SIGMA * T_SUN ** 4) / Math.PI;
     // identity F/Ω = B (1 + cos(θ/2))/2; a dozen roundings: 1e-14
@@ -90,11 +90,11 @@ describe("typed angular size", () => {
   });
 
   it("solid angle of a 1° disk is π/4 square degrees to first order (exact cone: −(θ/2)²/12 · relative)", () => {
-    const omega = SI.valueIn(solidAngleOfDisk(SI.of(1, units.deg)), units.sqdeg);
+    const omega = SI.valueIn(solidAngleFromAngularDiameter(SI.of(1, units.deg)), units.sqdeg);
     const x = Math.PI / 360;
     // 4π sin²(θ/4) / (π(θ/2)²) = 1 − (θ/2)²/12 + …
     expect(rel(omega, (Math.PI / 4) * (1 - (x * x) / 12))).toBeLessThan(1e-9);
-    expect(rel(SI.valueIn(solidAngleOfDisk(SI.of(1, units.deg), "small-angle"), units.sqdeg), Math.PI / 4)).toBeLessThan(1e-15);
+    expect(rel(SI.valueIn(solidAngleFromAngularDiameter(SI.of(1, units.deg), "small-angle"), units.sqdeg), Math.PI / 4)).toBeLessThan(1e-15);
   });
 
   it("errors name the parameter and the caller's unit; an observer inside the sphere is rejected", () => {
@@ -109,8 +109,8 @@ describe("typed angular size", () => {
   });
 
   it("range messages give the bounds in rad; a result beyond the double range only in CGS names the caller's unit", () => {
-    expect(() => solidAngleOfDisk(7 as Angle)).toThrow(/^angular diameter must be in \[5e-324, 6\.283185307179586\] rad; got 7$/);
-    expect(() => distanceFromAngularDiameter(SI, 0 as Angle, SI.of(1, units.Rsol))).toThrow(/^angular diameter must be a finite number > 0 rad; got 0$/);
+    expect(() => solidAngleFromAngularDiameter(7 as Angle)).toThrow(/^angular diameter must be in \[5e-324, 6\.283185307179586\] rad; got 7$/);
+    expect(() => distanceFromAngularDiameter(SI, 0 as Angle, SI.of(1, units.Rsun))).toThrow(/^angular diameter must be a finite number > 0 rad; got 0$/);
     // d < R is checked after each input's own check: an invalid radius is named as such
     expect(() => angularDiameter(CGS, NaN as Length<"CGS">, 1 as Length<"CGS">)).toThrow(/^radius must be a finite number > 0 cm; got NaN$/);
     // d = 2R/θ with R = 1e296 m, θ = 1e-10 rad: 2e306 m fits in SI, 2e308 cm does not

@@ -95,7 +95,7 @@ function badGeometry(geometry: string, allowed: readonly string[]): never {
  * @example
  * ```ts
  * import { SI, angularDiameter, units } from "starlume";
- * const theta = angularDiameter(SI, SI.of(1, units.Rsol), SI.of(1, units.au));
+ * const theta = angularDiameter(SI, SI.of(1, units.Rsun), SI.of(1, units.au));
  * SI.valueIn(theta, units.arcsec); // ≈ 1918.46
  * ```
  */
@@ -138,7 +138,7 @@ function insideSphere(sys: UnitSystem<SystemName>, radius: number, distance: num
  * import { SI, radiusFromAngularDiameter, units } from "starlume";
  * // Betelgeuse: ≈ 42 mas at ≈ 168 pc (illustrative round numbers)
  * const r = radiusFromAngularDiameter(SI, SI.of(42, units.mas), SI.of(168, units.pc));
- * SI.valueIn(r, units.Rsol); // ≈ 759
+ * SI.valueIn(r, units.Rsun); // ≈ 759
  * ```
  */
 export function radiusFromAngularDiameter<S extends SystemName>(
@@ -166,7 +166,7 @@ export function radiusFromAngularDiameter<S extends SystemName>(
  * @example
  * ```ts
  * import { CGS, distanceFromAngularDiameter, units } from "starlume";
- * const d = distanceFromAngularDiameter(CGS, CGS.of(1918.46, units.arcsec), CGS.of(1, units.Rsol)); // ≈ 1.496e13 cm
+ * const d = distanceFromAngularDiameter(CGS, CGS.of(1918.46, units.arcsec), CGS.of(1, units.Rsun)); // ≈ 1.496e13 cm
  * ```
  */
 export function distanceFromAngularDiameter<S extends SystemName>(
@@ -191,11 +191,11 @@ export function distanceFromAngularDiameter<S extends SystemName>(
  * @throws RangeError naming `angular diameter`
  * @example
  * ```ts
- * import { SI, solidAngleOfDisk, units } from "starlume";
- * SI.valueIn(solidAngleOfDisk(SI.of(1, units.deg)), units.sqdeg); // ≈ 0.7854 (π/4)
+ * import { SI, solidAngleFromAngularDiameter, units } from "starlume";
+ * SI.valueIn(solidAngleFromAngularDiameter(SI.of(1, units.deg)), units.sqdeg); // ≈ 0.7854 (π/4)
  * ```
  */
-export function solidAngleOfDisk(angularDiameter: Angle, geometry: SolidAngleGeometry = "exact"): SolidAngle {
+export function solidAngleFromAngularDiameter(angularDiameter: Angle, geometry: SolidAngleGeometry = "exact"): SolidAngle {
   // the same number in every system: SI phrases the messages
   if (geometry === "exact") return solidAngleCone(SI, angularDiameter);
   if (geometry === "small-angle") return solidAngleSmall(SI, angularDiameter);

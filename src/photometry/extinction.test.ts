@@ -5,11 +5,11 @@ import { CGS, SI } from "../quantity/system";
 import { units } from "../quantity/units";
 import { ccm89ExtinctionMagSI, ccm89RatioSI } from "./kernels/extinction";
 import {
-  aVFromColorExcess,
+  aVFromColourExcess,
   CCM89_RV_RANGE,
   ccm89Extinction,
   ccm89Ratio,
-  colorExcessFromAV,
+  colourExcessFromAV,
   dereddenFlux,
   dereddenMagnitude,
   reddenFlux,
@@ -43,9 +43,9 @@ describe("typed extinction", () => {
   });
 
   it("E(B−V) ↔ A_V with R_V (default 3.1)", () => {
-    expect(aVFromColorExcess(0.1)).toBeCloseTo(0.31, 15);
-    expect(colorExcessFromAV(0.31)).toBeCloseTo(0.1, 15);
-    expect(aVFromColorExcess(0.1, 5)).toBe(0.5);
+    expect(aVFromColourExcess(0.1)).toBeCloseTo(0.31, 15);
+    expect(colourExcessFromAV(0.31)).toBeCloseTo(0.1, 15);
+    expect(aVFromColourExcess(0.1, 5)).toBe(0.5);
   });
 
   it("reddening keeps the quantity's type and system, and dims by exactly A magnitudes (Pogson; property)", () => {
@@ -83,7 +83,7 @@ describe("typed extinction", () => {
     // 1e300 × 10^(25/2.5) = 1e310 is beyond the double range in any unit
     expect(() => dereddenFlux(SI.of(1e300, units.W_per_m2), 25)).toThrow(/^dereddened flux overflows the double range for flux=1e\+300, extinction=25 mag$/);
     expect(() => reddenMagnitude(10, Infinity)).toThrow(/^extinction must be a finite number mag; got Infinity$/);
-    expect(() => aVFromColorExcess(NaN)).toThrow(/^E\(B-V\) must be a finite number mag; got NaN$/);
-    expect(() => colorExcessFromAV(1, -3.1)).toThrow(/^R_V must be a finite number > 0; got -3\.1$/);
+    expect(() => aVFromColourExcess(NaN)).toThrow(/^E\(B-V\) must be a finite number mag; got NaN$/);
+    expect(() => colourExcessFromAV(1, -3.1)).toThrow(/^R_V must be a finite number > 0; got -3\.1$/);
   });
 });

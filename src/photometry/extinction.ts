@@ -157,11 +157,11 @@ export function ccm89Extinction<S extends SystemName>(
  * @throws RangeError naming `E(B-V)` or `R_V`
  * @example
  * ```ts
- * import { aVFromColorExcess } from "starlume";
- * aVFromColorExcess(0.1); // 0.31
+ * import { aVFromColourExcess } from "starlume";
+ * aVFromColourExcess(0.1); // 0.31
  * ```
  */
-export function aVFromColorExcess(colorExcess: Pure, rV: Pure = RV_DIFFUSE_ISM): number {
+export function aVFromColourExcess(colorExcess: Pure, rV: Pure = RV_DIFFUSE_ISM): number {
   // pure numbers are the same in every system: SI phrases the messages
   return aVLaw(SI, colorExcess, rV);
 }
@@ -175,11 +175,11 @@ export function aVFromColorExcess(colorExcess: Pure, rV: Pure = RV_DIFFUSE_ISM):
  * @throws RangeError naming `A_V` or `R_V`
  * @example
  * ```ts
- * import { colorExcessFromAV } from "starlume";
- * colorExcessFromAV(0.31); // 0.1
+ * import { colourExcessFromAV } from "starlume";
+ * colourExcessFromAV(0.31); // 0.1
  * ```
  */
-export function colorExcessFromAV(aV: Pure, rV: Pure = RV_DIFFUSE_ISM): number {
+export function colourExcessFromAV(aV: Pure, rV: Pure = RV_DIFFUSE_ISM): number {
   return colorExcessLaw(SI, aV, rV);
 }
 

@@ -22,14 +22,14 @@ const cgs = (x: number, d: typeof L | typeof P | typeof F): number | undefined =
 describe("typed inverse-square law", () => {
   it("the Sun: L☉ᴺ at 1 au gives S☉ᴺ = 1361 W m^-2 within the rounding of L☉ᴺ (IAU 2015 B3), in SI and CGS", () => {
     // IAU 2015 B3 rounds L☉ᴺ = 4π au² S☉ᴺ to 3.828e26 W: ≤ 0.0005/3.828 = 1.31e-4 relative
-    const s = fluxFromLuminosity(SI, SI.of(1, units.Lsol), SI.of(1, units.au));
+    const s = fluxFromLuminosity(SI, SI.of(1, units.Lsun), SI.of(1, units.au));
     expect(rel(SI.valueIn(s, units.W_per_m2), S_SUN)).toBeLessThan(1.31e-4);
-    const sc = fluxFromLuminosity(CGS, CGS.of(1, units.Lsol), CGS.of(1, units.au));
+    const sc = fluxFromLuminosity(CGS, CGS.of(1, units.Lsun), CGS.of(1, units.au));
     expect(rel(CGS.valueIn(sc, units.erg_per_s_cm2), 1.361e6)).toBeLessThan(1.31e-4);
     const l = luminosityFromFlux(SI, SI.of(S_SUN, units.W_per_m2), SI.of(1, units.au));
-    expect(rel(SI.valueIn(l, units.Lsol), 1)).toBeLessThan(1.31e-4);
+    expect(rel(SI.valueIn(l, units.Lsun), 1)).toBeLessThan(1.31e-4);
     // d ∝ L^(1/2): half the rounding
-    const d = distanceFromLuminosityFlux(SI, SI.of(1, units.Lsol), SI.of(S_SUN, units.W_per_m2));
+    const d = distanceFromLuminosityFlux(SI, SI.of(1, units.Lsun), SI.of(S_SUN, units.W_per_m2));
     expect(rel(SI.valueIn(d, units.au), 1)).toBeLessThan(0.66e-4);
   });
 
@@ -61,11 +61,11 @@ describe("typed inverse-square law", () => {
   });
 
   it("errors name the parameter, its value and the caller's unit", () => {
-    expect(() => fluxFromLuminosity(CGS, CGS.of(1, units.Lsol), -1 as Length<"CGS">)).toThrow(/^distance must be a finite number > 0 cm; got -1$/);
-    expect(() => fluxFromLuminosity(SI, SI.of(1, units.Lsol), -1 as Length<"SI">)).toThrow(/^distance must be a finite number > 0 m; got -1$/);
+    expect(() => fluxFromLuminosity(CGS, CGS.of(1, units.Lsun), -1 as Length<"CGS">)).toThrow(/^distance must be a finite number > 0 cm; got -1$/);
+    expect(() => fluxFromLuminosity(SI, SI.of(1, units.Lsun), -1 as Length<"SI">)).toThrow(/^distance must be a finite number > 0 m; got -1$/);
     expect(() => fluxFromLuminosity(CGS, 0 as Power<"CGS">, CGS.of(1, units.au))).toThrow(/^luminosity must be a finite number > 0 cm\^2 g s\^-3; got 0$/);
     expect(() => luminosityFromFlux(SI, NaN as Flux<"SI">, SI.of(1, units.au))).toThrow(/^flux must be a finite number > 0 kg s\^-3; got NaN$/);
-    expect(() => distanceFromLuminosityFlux(CGS, CGS.of(1, units.Lsol), Infinity as Flux<"CGS">)).toThrow(/flux .* g s\^-3/);
+    expect(() => distanceFromLuminosityFlux(CGS, CGS.of(1, units.Lsun), Infinity as Flux<"CGS">)).toThrow(/flux .* g s\^-3/);
   });
 
   it("a result that overflows in the caller's system is a RangeError in that system's unit, never Infinity", () => {

@@ -52,7 +52,7 @@ const distanceLaw = defineLaw({ name: "distance", inputs: [luminosityIn, fluxIn]
  * @example
  * ```ts
  * import { SI, fluxFromLuminosity, units } from "starlume";
- * const s = fluxFromLuminosity(SI, SI.of(1, units.Lsol), SI.of(1, units.au)); // ≈ 1361 W m^-2
+ * const s = fluxFromLuminosity(SI, SI.of(1, units.Lsun), SI.of(1, units.au)); // ≈ 1361 W m^-2
  * ```
  */
 export function fluxFromLuminosity<S extends SystemName>(
@@ -98,7 +98,7 @@ export function luminosityFromFlux<S extends SystemName>(
  * @example
  * ```ts
  * import { SI, distanceFromLuminosityFlux, units } from "starlume";
- * const d = distanceFromLuminosityFlux(SI, SI.of(1, units.Lsol), SI.of(1361, units.W_per_m2));
+ * const d = distanceFromLuminosityFlux(SI, SI.of(1, units.Lsun), SI.of(1361, units.W_per_m2));
  * SI.valueIn(d, units.au); // ≈ 1.0000
  * ```
  */

@@ -281,7 +281,7 @@ export function apparentMagnitude<S extends SystemName>(
  * @example
  * ```ts
  * import { SI, absoluteBolometricMagnitude, units } from "starlume";
- * absoluteBolometricMagnitude(SI, SI.of(1, units.Lsol)); // ≈ 4.74
+ * absoluteBolometricMagnitude(SI, SI.of(1, units.Lsun)); // ≈ 4.74
  * ```
  */
 export function absoluteBolometricMagnitude<S extends SystemName>(sys: UnitSystem<S>, luminosity: Power<NoInfer<S>>): number {
@@ -331,11 +331,11 @@ export function apparentBolometricMagnitude<S extends SystemName>(sys: UnitSyste
  * @throws RangeError naming `apparent bolometric magnitude`, or when f overflows the double range in `sys` (below the smallest double it is 0)
  * @example
  * ```ts
- * import { SI, bolometricFluxFromApparentMagnitude, units } from "starlume";
- * SI.valueIn(bolometricFluxFromApparentMagnitude(SI, -26.832), units.W_per_m2); // ≈ 1361
+ * import { SI, bolometricFluxFromApparentBolometricMagnitude, units } from "starlume";
+ * SI.valueIn(bolometricFluxFromApparentBolometricMagnitude(SI, -26.832), units.W_per_m2); // ≈ 1361
  * ```
  */
-export function bolometricFluxFromApparentMagnitude<S extends SystemName>(sys: UnitSystem<S>, apparentBolometricMagnitude: Pure): Flux<S> {
+export function bolometricFluxFromApparentBolometricMagnitude<S extends SystemName>(sys: UnitSystem<S>, apparentBolometricMagnitude: Pure): Flux<S> {
   return bolometricFluxLaw(sys, apparentBolometricMagnitude);
 }
 

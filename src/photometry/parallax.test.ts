@@ -5,11 +5,11 @@ import type { Angle, Length } from "../quantity/aliases";
 import { CGS, SI } from "../quantity/system";
 import { times10 } from "../quantity/unit";
 import { units } from "../quantity/units";
-import { distanceFromParallaxExactSI, distanceFromParallaxSI, parallaxDistanceSI } from "./kernels/parallax";
+import { distanceFromParallaxExactSI, distanceFromParallaxSI, distanceEstimateFromParallaxSI } from "./kernels/parallax";
 import {
   distanceFromParallax,
   distanceFromParallaxExact,
-  parallaxDistance,
+  distanceEstimateFromParallax,
   parallaxFromDistance,
   parallaxFromDistanceExact,
   PARALLAX_BIAS_THRESHOLD,
@@ -73,20 +73,20 @@ describe("typed parallax", () => {
 
   it("flags inversion bias above σ_p/p = 0.1 by default (common practice; Lutz & Kelker 1973), or above the given threshold", () => {
     expect(PARALLAX_BIAS_THRESHOLD).toBe(0.1);
-    const biased = parallaxDistance(SI, SI.of(2, units.mas), SI.of(0.5, units.mas));
+    const biased = distanceEstimateFromParallax(SI, SI.of(2, units.mas), SI.of(0.5, units.mas));
     expect(biased.inversionBiased).toBe(true);
     expect(biased.fractionalParallaxError).toBeCloseTo(0.25, 15);
     expect(biased.threshold).toBe(0.1);
     expect(SI.valueIn(biased.distance, units.pc)).toBeCloseTo(500, 10);
-    const fine = parallaxDistance(CGS, CGS.of(20, units.mas), CGS.of(1, units.mas));
+    const fine = distanceEstimateFromParallax(CGS, CGS.of(20, units.mas), CGS.of(1, units.mas));
     expect(fine.inversionBiased).toBe(false);
     // σ_d = d σ_p/p = 50 pc × 0.05 = 2.5 pc, in cm
     expect(rel(CGS.valueIn(fine.sigmaDistance, units.pc), 2.5)).toBeLessThan(1e-15);
-    expect(parallaxDistance(SI, SI.of(20, units.mas), SI.of(1, units.mas), { threshold: 0.04 }).inversionBiased).toBe(true);
+    expect(distanceEstimateFromParallax(SI, SI.of(20, units.mas), SI.of(1, units.mas), { threshold: 0.04 }).inversionBiased).toBe(true);
     // zero uncertainty is allowed and gives σ_d = 0
-    expect(parallaxDistance(CGS, CGS.of(20, units.mas), CGS.of(0, units.mas)).sigmaDistance).toBe(0);
+    expect(distanceEstimateFromParallax(CGS, CGS.of(20, units.mas), CGS.of(0, units.mas)).sigmaDistance).toBe(0);
     // and in SI the fields equal the kernel's
-    const k = parallaxDistanceSI(SI.of(2, units.mas), SI.of(0.5, units.mas));
+    const k = distanceEstimateFromParallaxSI(SI.of(2, units.mas), SI.of(0.5, units.mas));
     expect(biased.distance).toBe(k.distanceM);
     expect(biased.sigmaDistance).toBe(k.sigmaDistanceM);
   });
@@ -95,8 +95,8 @@ describe("typed parallax", () => {
     expect(() => distanceFromParallax(SI, SI.of(-1, units.mas))).toThrow(/^parallax must be a finite number > 0 rad; got -4\.8/);
     expect(() => distanceFromParallaxExact(CGS, CGS.of(90, units.deg))).toThrow(/^parallax must be in \[5e-324, 1\.5707963267948963\] rad \(the exact geometry needs p < π\/2 rad\); got 1\.5707963267948966$/);
     expect(() => parallaxFromDistance(CGS, -5 as Length<"CGS">)).toThrow(/^distance must be a finite number > 0 cm; got -5$/);
-    expect(() => parallaxDistance(SI, SI.of(1, units.mas), SI.of(-1, units.mas))).toThrow(/^parallax uncertainty must be a finite number >= 0 rad/);
-    expect(() => parallaxDistance(SI, SI.of(1, units.mas), SI.of(0.1, units.mas), { threshold: 0 })).toThrow(/^threshold must be in/);
+    expect(() => distanceEstimateFromParallax(SI, SI.of(1, units.mas), SI.of(-1, units.mas))).toThrow(/^parallax uncertainty must be a finite number >= 0 rad/);
+    expect(() => distanceEstimateFromParallax(SI, SI.of(1, units.mas), SI.of(0.1, units.mas), { threshold: 0 })).toThrow(/^threshold must be in/);
     // a distance that does not fit in CGS (AU / 5e-324 rad overflows in metres already)
     expect(() => distanceFromParallax(CGS, 5e-324 as Angle)).toThrow(/^distance overflows the double range in cm for parallax=5e-324 rad$/);
   });

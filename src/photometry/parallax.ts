@@ -20,7 +20,7 @@
  * uncertainty σ_d = d σ_p/p stops meaning anything (Lutz & Kelker 1973,
  * PASP 85, 573, for the related bias in samples selected on parallax; the
  * 0.1 threshold is common practice in work with large astrometric surveys).
- * {@link parallaxDistance} raises `inversionBiased` above the threshold;
+ * {@link distanceEstimateFromParallax} raises `inversionBiased` above the threshold;
  * use a probabilistic estimate with an explicit distance prior there.
  *
  * @module
@@ -55,7 +55,7 @@ const parallaxLaw = defineLaw({ name: "parallax", inputs: [distanceIn], result: 
 const parallaxExactLaw = defineLaw({ name: "parallax", inputs: [distanceIn], result: kinds.angle, kernel: parallaxFromDistanceExactUnchecked });
 const sigmaDistanceOut = lawOutput("distance uncertainty", kinds.length);
 
-/** Default σ_p/p above which {@link parallaxDistance} flags the inverted distance as biased: 0.1 (common practice). */
+/** Default σ_p/p above which {@link distanceEstimateFromParallax} flags the inverted distance as biased: 0.1 (common practice). */
 export const PARALLAX_BIAS_THRESHOLD: number = PARALLAX_FRACTIONAL_ERROR_THRESHOLD;
 
 /**
@@ -128,14 +128,14 @@ export function parallaxFromDistanceExact<S extends SystemName>(sys: UnitSystem<
   return parallaxExactLaw(sys, distance);
 }
 
-/** Options of {@link parallaxDistance}. */
-export interface ParallaxDistanceOptions {
+/** Options of {@link distanceEstimateFromParallax}. */
+export interface ParallaxDistanceEstimateOptions {
   /** σ_p/p above which `inversionBiased` is set (finite, > 0). Default {@link PARALLAX_BIAS_THRESHOLD} = 0.1. */
   readonly threshold?: number;
 }
 
-/** Result of {@link parallaxDistance}, in the caller's system. */
-export interface ParallaxDistance<S extends SystemName> {
+/** Result of {@link distanceEstimateFromParallax}, in the caller's system. */
+export interface ParallaxDistanceEstimate<S extends SystemName> {
   /** d = 1 au / p. */
   readonly distance: Length<S>;
   /** First-order standard uncertainty σ_d = d σ_p / p (not meaningful when `inversionBiased`). */
@@ -160,18 +160,18 @@ export interface ParallaxDistance<S extends SystemName> {
  * @throws RangeError naming `parallax`, `parallax uncertainty` or `threshold`
  * @example
  * ```ts
- * import { SI, parallaxDistance, units } from "starlume";
- * const r = parallaxDistance(SI, SI.of(2, units.mas), SI.of(0.5, units.mas));
+ * import { SI, distanceEstimateFromParallax, units } from "starlume";
+ * const r = distanceEstimateFromParallax(SI, SI.of(2, units.mas), SI.of(0.5, units.mas));
  * r.inversionBiased; // true (σ_p/p = 0.25 > 0.1)
  * SI.valueIn(r.distance, units.pc); // 500
  * ```
  */
-export function parallaxDistance<S extends SystemName>(
+export function distanceEstimateFromParallax<S extends SystemName>(
   sys: UnitSystem<S>,
   parallax: Angle,
   sigmaParallax: Angle,
-  options: ParallaxDistanceOptions = {},
-): ParallaxDistance<S> {
+  options: ParallaxDistanceEstimateOptions = {},
+): ParallaxDistanceEstimate<S> {
   const distance = distanceLaw(sys, parallax); // checks the parallax; refuses a distance beyond the double range
   const sp = sigmaParallaxIn.toSI(sys, sigmaParallax);
   const threshold = thresholdIn.toSI(sys, options.threshold ?? PARALLAX_BIAS_THRESHOLD);

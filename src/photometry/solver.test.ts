@@ -34,8 +34,8 @@ describe("typed stellar-parameter solver", () => {
   it("the Sun from IAU 2015 B3 nominal L☉, R☉ at 1 au: T = 5772 K, f = 1361 W m^-2, M_bol = 4.74, m_bol = −26.832 (B2)", () => {
     for (const sys of [SI, CGS] as UnitSystem<SystemName>[]) {
       const s = solveStar(sys, {
-        luminosity: { value: sys.of(1, units.Lsol) as Power<SystemName>, sigma: sys.of(1e-4, units.Lsol) as Power<SystemName> },
-        radius: { value: sys.of(1, units.Rsol) as Length<SystemName>, sigma: sys.of(1e-4, units.Rsol) as Length<SystemName> },
+        luminosity: { value: sys.of(1, units.Lsun) as Power<SystemName>, sigma: sys.of(1e-4, units.Lsun) as Power<SystemName> },
+        radius: { value: sys.of(1, units.Rsun) as Length<SystemName>, sigma: sys.of(1e-4, units.Rsun) as Length<SystemName> },
         distance: { value: sys.of(1, units.au) as Length<SystemName>, sigma: sys.of(1e-9, units.au) as Length<SystemName> },
       } as StarObservations<SystemName>);
       // B3 rounds L☉ᴺ to 4 digits (1.31e-4): T ∝ L^(1/4) → 3.3e-5; f ∝ L → 1.31e-4

@@ -51,9 +51,9 @@ import {
   starInputSufficiency,
   type MeasurementSI,
   type StarBatchOutputSI,
-  type StarInputKind,
+  type StarInputKindSI,
   type StarObservationsSI,
-  type StarQuantity,
+  type StarQuantitySI,
 } from "./kernels/solver";
 
 // ---- vocabulary ---------------------------------------------------------------
@@ -109,7 +109,7 @@ const OBSERVATION_NAMES: readonly StarObservationName[] = [
   "angularDiameter",
 ];
 
-const KIND_OF: Readonly<Record<StarObservationName, StarInputKind>> = {
+const KIND_OF: Readonly<Record<StarObservationName, StarInputKindSI>> = {
   temperature: "temperatureK",
   luminosity: "luminosityW",
   radius: "radiusM",
@@ -120,10 +120,10 @@ const KIND_OF: Readonly<Record<StarObservationName, StarInputKind>> = {
   angularDiameter: "angularDiameterRad",
 };
 
-const NAME_OF_KIND = Object.fromEntries(Object.entries(KIND_OF).map(([n, k]) => [k, n])) as Record<StarInputKind, StarObservationName>;
+const NAME_OF_KIND = Object.fromEntries(Object.entries(KIND_OF).map(([n, k]) => [k, n])) as Record<StarInputKindSI, StarObservationName>;
 
 /** What to add when a quantity is undetermined, in the caller's vocabulary. */
-const REQUEST: Readonly<Record<StarQuantity, string>> = {
+const REQUEST: Readonly<Record<StarQuantitySI, string>> = {
   temperatureK: "temperature",
   luminosityW: "luminosity",
   radiusM: "radius",
@@ -366,7 +366,7 @@ function validate(sys: UnitSystem<SystemName>, name: StarObservationName, m: Mea
  *   bolometricFlux: { value: SI.of(3.2e-9, units.W_per_m2), sigma: SI.of(0.05e-9, units.W_per_m2) },
  *   temperature: { value: SI.of(5800, units.K), sigma: SI.of(50, units.K) },
  * });
- * SI.valueIn(star.radius.value, units.Rsol); // ≈ 3.13 (L ≈ 10 L☉)
+ * SI.valueIn(star.radius.value, units.Rsun); // ≈ 3.13 (L ≈ 10 L☉)
  * JSON.stringify(star); // plain numbers with unit strings
  * ```
  */
@@ -380,7 +380,7 @@ export function solveStar<S extends SystemName>(sys: UnitSystem<S>, observations
     }
   }
   const names: StarObservationName[] = [];
-  const obsSI: Partial<Record<StarInputKind, MeasurementSI>> = {};
+  const obsSI: Partial<Record<StarInputKindSI, MeasurementSI>> = {};
   for (const name of OBSERVATION_NAMES) {
     const m = (observations as Partial<Record<StarObservationName, Measurement<number>>>)[name];
     if (m === undefined) continue;
@@ -408,7 +408,7 @@ export function solveStar<S extends SystemName>(sys: UnitSystem<S>, observations
     }
   }
   const pulls: Partial<Record<StarObservationName, number>> = {};
-  for (const [kind, v] of Object.entries(r.consistency.pulls) as [StarInputKind, number][]) pulls[NAME_OF_KIND[kind]] = plus0(v);
+  for (const [kind, v] of Object.entries(r.consistency.pulls) as [StarInputKindSI, number][]) pulls[NAME_OF_KIND[kind]] = plus0(v);
 
   const base = {
     system: sys.name,
@@ -634,7 +634,7 @@ const OUTPUT_KEYS: readonly (readonly [keyof StarBatchColumns<SystemName>, keyof
  * });
  * out.invalid; // [2] (its outputs NaN, out.reason[2] === StarBatchReason.NON_POSITIVE)
  * out.reasons; // ["parallax.value must be a finite number > 0 rad; got -4.848…e-9"]
- * SI.arrayIn(out.radius, units.Rsol); // [≈ 3.13, ≈ 5.82, NaN]
+ * SI.arrayIn(out.radius, units.Rsun); // [≈ 3.13, ≈ 5.82, NaN]
  * ```
  */
 export function createStarBatchSolver<S extends SystemName, const N extends StarObservationName>(

@@ -9,4 +9,4 @@ export { linearTicks, logTicks, niceStep, powerOfTenLabel } from "./ticks";
 export type { Ticks } from "./ticks";
 export { htmlReport } from "./report";
 export type { ReportFigure, ReportSpec, ReportTable } from "./report";
-export { escapeXml, htmlMarkup, markupPlain } from "./xml";
+export { escapeXml, htmlFromMarkup, plainTextFromMarkup } from "./xml";

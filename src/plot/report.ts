@@ -7,7 +7,7 @@
  * @module
  */
 
-import { escapeXml, htmlMarkup } from "./xml";
+import { escapeXml, htmlFromMarkup } from "./xml";
 
 /** A figure: SVG markup (as produced by `svgChart`) and its caption (`_{…}`/`^{…}` markup allowed). */
 export interface ReportFigure {
@@ -113,7 +113,7 @@ export function htmlReport(spec: ReportSpec): string {
     const w = /^<svg\b[^>]*?\swidth="(\d+(?:\.\d+)?)"/.exec(f.svg.trim())?.[1];
     o.push(w !== undefined ? `<figure style="max-width:${w}px">` : "<figure>");
     o.push(f.svg.trim());
-    o.push(`<figcaption>${htmlMarkup(f.caption)}</figcaption>`);
+    o.push(`<figcaption>${htmlFromMarkup(f.caption)}</figcaption>`);
     o.push("</figure>");
   });
   o.push("</main>");
@@ -145,8 +145,8 @@ function table(t: ReportTable): string {
     (_, k) => (t.alignNumbers ?? true) && t.rows.length > 0 && t.rows.every((r) => (r[k] ?? "") === "" || NUMERIC.test(r[k] ?? "")),
   );
   const o: string[] = ['<div class="table-wrap">', "<table>"];
-  if (t.caption !== undefined) o.push(`<caption>${htmlMarkup(t.caption)}</caption>`);
-  o.push(`<thead><tr>${t.header.map((h, k) => `<th scope="col"${numeric[k] === true ? ' class="num"' : ""}>${htmlMarkup(h)}</th>`).join("")}</tr></thead>`);
+  if (t.caption !== undefined) o.push(`<caption>${htmlFromMarkup(t.caption)}</caption>`);
+  o.push(`<thead><tr>${t.header.map((h, k) => `<th scope="col"${numeric[k] === true ? ' class="num"' : ""}>${htmlFromMarkup(h)}</th>`).join("")}</tr></thead>`);
   o.push("<tbody>");
   for (const r of t.rows) {
     o.push(`<tr>${r.map((c, k) => `<td${numeric[k] === true ? ' class="num"' : ""}>${escapeXml(c)}</td>`).join("")}</tr>`);

@@ -38,7 +38,7 @@
  * @module
  */
 
-import { escapeXml, markupPlain, px, svgMarkup } from "./xml";
+import { escapeXml, plainTextFromMarkup, px, svgFromMarkup } from "./xml";
 import { MIN_LINEAR_SPAN, linearTicks, logTicks, niceStep } from "./ticks";
 import type { Ticks } from "./ticks";
 
@@ -308,8 +308,8 @@ export function svgChart(spec: ChartSpec): string {
   o.push(
     `<svg xmlns="http://www.w3.org/2000/svg" width="${px(width)}" height="${px(height)}" viewBox="0 0 ${px(width)} ${px(height)}" role="img" font-family="Helvetica, Arial, sans-serif" font-size="12">`,
   );
-  o.push(`<title>${escapeXml(markupPlain(spec.title))}</title>`);
-  if (spec.description !== undefined) o.push(`<desc>${escapeXml(markupPlain(spec.description))}</desc>`);
+  o.push(`<title>${escapeXml(plainTextFromMarkup(spec.title))}</title>`);
+  if (spec.description !== undefined) o.push(`<desc>${escapeXml(plainTextFromMarkup(spec.description))}</desc>`);
   o.push(`<rect x="0" y="0" width="${px(width)}" height="${px(height)}" fill="#ffffff"/>`);
 
   // ---- grid and frame
@@ -382,7 +382,7 @@ export function svgChart(spec: ChartSpec): string {
   if (bandAxis) drawYAxis(o, main, bandScale, "right", spec.bandLabel ?? "band response");
 
   if (spec.title !== "") {
-    o.push(`<text x="${px(width / 2)}" y="24" text-anchor="middle" font-size="15" font-weight="bold">${svgMarkup(spec.title, 15)}</text>`);
+    o.push(`<text x="${px(width / 2)}" y="24" text-anchor="middle" font-size="15" font-weight="bold">${svgFromMarkup(spec.title, 15)}</text>`);
   }
 
   // ---- legend
@@ -676,7 +676,7 @@ function drawXAxis(o: string[], r: Rect, s: Scale, labels: boolean, title: strin
     });
   }
   if (title !== undefined && title !== "") {
-    o.push(`<text x="${px(r.x + r.w / 2)}" y="${px(base + 40)}" text-anchor="middle" font-size="13">${svgMarkup(title, 13)}</text>`);
+    o.push(`<text x="${px(r.x + r.w / 2)}" y="${px(base + 40)}" text-anchor="middle" font-size="13">${svgFromMarkup(title, 13)}</text>`);
   }
 }
 
@@ -697,7 +697,7 @@ function drawYAxis(o: string[], r: Rect, s: Scale, side: "left" | "right", title
   if (title !== undefined && title !== "") {
     // One rotated line per "\n"-separated part; a title that would not fit the panel's height is drawn smaller.
     const lines = title.split("\n");
-    const longest = Math.max(...lines.map((l) => [...markupPlain(l)].length));
+    const longest = Math.max(...lines.map((l) => [...plainTextFromMarkup(l)].length));
     const size = Math.max(9, Math.min(13, Math.floor(r.h / (0.56 * Math.max(1, longest)))));
     const step = size + 2;
     const y = r.y + r.h / 2;
@@ -705,7 +705,7 @@ function drawYAxis(o: string[], r: Rect, s: Scale, side: "left" | "right", title
       const offset = (k - (lines.length - 1) / 2) * step;
       const x = side === "left" ? r.x - 60 + offset : r.x + r.w + 46 + offset;
       o.push(
-        `<text x="${px(x)}" y="${px(y)}" transform="rotate(-90 ${px(x)} ${px(y)})" text-anchor="middle" font-size="${size}"${faint}>${svgMarkup(line, size)}</text>`,
+        `<text x="${px(x)}" y="${px(y)}" transform="rotate(-90 ${px(x)} ${px(y)})" text-anchor="middle" font-size="${size}"${faint}>${svgFromMarkup(line, size)}</text>`,
       );
     });
   }
@@ -786,7 +786,7 @@ function drawLine(o: string[], s: LineSeries, color: string, r: Rect, xs: Scale,
   const w = s.width !== undefined && s.width > 0 && Number.isFinite(s.width) ? s.width : 1.5;
   const dash = s.dashed === true ? ' stroke-dasharray="6 4"' : "";
   o.push(
-    `<path d="${d}" fill="none" stroke="${escapeXml(color)}" stroke-width="${px(w)}" stroke-linejoin="round"${dash}><title>${escapeXml(markupPlain(s.name))}</title></path>`,
+    `<path d="${d}" fill="none" stroke="${escapeXml(color)}" stroke-width="${px(w)}" stroke-linejoin="round"${dash}><title>${escapeXml(plainTextFromMarkup(s.name))}</title></path>`,
   );
 }
 
@@ -861,7 +861,7 @@ function drawScatter(o: string[], s: ScatterSeries, color: string, r: Rect, xs: 
     }
   }
   const c = escapeXml(color);
-  o.push(`<g fill="${c}" stroke="${c}"><title>${escapeXml(markupPlain(s.name))}</title>`);
+  o.push(`<g fill="${c}" stroke="${c}"><title>${escapeXml(plainTextFromMarkup(s.name))}</title>`);
   if (bars.length > 0) o.push(`<path d="${bars.join("")}" fill="none" stroke-width="1"/>`);
   o.push(...dots);
   o.push("</g>");
@@ -890,7 +890,7 @@ function drawBand(o: string[], b: BandCurve, color: string, r: Rect, xs: Scale, 
   }
   const c = escapeXml(color);
   o.push(
-    `<path d="${fill}" fill="${c}" fill-opacity="0.25" stroke="${c}" stroke-width="1.2"><title>${escapeXml(markupPlain(b.name))}</title></path>`,
+    `<path d="${fill}" fill="${c}" fill-opacity="0.25" stroke="${c}" stroke-width="1.2"><title>${escapeXml(plainTextFromMarkup(b.name))}</title></path>`,
   );
   if (inlineLabel) {
     // Centre of the part at or above half maximum, just above the curve's peak (y = 1).
@@ -905,7 +905,7 @@ function drawBand(o: string[], b: BandCurve, color: string, r: Rect, xs: Scale, 
     if (Number.isNaN(lo)) return;
     const x = r.x + ((lo + hi) / 2) * r.w;
     const y = r.y + (1 - norm(1, ys)) * r.h - 2;
-    o.push(`<text x="${px(x)}" y="${px(y)}" text-anchor="middle" font-size="10" fill="#333333">${svgMarkup(b.name, 10)}</text>`);
+    o.push(`<text x="${px(x)}" y="${px(y)}" text-anchor="middle" font-size="10" fill="#333333">${svgFromMarkup(b.name, 10)}</text>`);
   }
 }
 
@@ -914,14 +914,14 @@ function drawLegend(
   r: Rect,
   series: readonly Series[],
   bands: readonly BandCurve[],
-  bandColorOffset: number,
+  bandColourOffset: number,
   position: NonNullable<ChartSpec["legendPosition"]>,
   covered: readonly number[],
 ): void {
   const names = [...series.map((s) => s.name), ...bands.map((b) => b.name)];
   if (names.length === 0) return;
   const rowH = 16;
-  const longest = Math.max(...names.map((n) => [...markupPlain(n)].length));
+  const longest = Math.max(...names.map((n) => [...plainTextFromMarkup(n)].length));
   const w = Math.min(r.w - 8, 34 + longest * 6.5);
   const h = names.length * rowH + 8;
   const corners = {
@@ -955,7 +955,7 @@ function drawLegend(
   const entry = (swatch: string, name: string): void => {
     const y = y0 + 4 + row * rowH + rowH / 2;
     o.push(swatch.replaceAll("{Y}", px(y)));
-    o.push(`<text x="${px(x0 + 28)}" y="${px(y + 4)}">${svgMarkup(name, 11)}</text>`);
+    o.push(`<text x="${px(x0 + 28)}" y="${px(y + 4)}">${svgFromMarkup(name, 11)}</text>`);
     row++;
   };
   series.forEach((s, i) => {
@@ -977,7 +977,7 @@ function drawLegend(
     }
   });
   bands.forEach((b, i) => {
-    const c = escapeXml(b.color ?? PALETTE[(bandColorOffset + i) % PALETTE.length] ?? "#000");
+    const c = escapeXml(b.color ?? PALETTE[(bandColourOffset + i) % PALETTE.length] ?? "#000");
     const y = y0 + 4 + row * rowH + rowH / 2;
     entry(`<rect x="${px(x0 + 6)}" y="${px(y - 5)}" width="16" height="10" fill="${c}" fill-opacity="0.25" stroke="${c}"/>`, b.name);
   });

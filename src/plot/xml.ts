@@ -94,11 +94,11 @@ function markupRuns(text: string): Run[] {
  *
  * @example
  * ```ts
- * import { markupPlain } from "starlume";
- * markupPlain("T_{eff} [K]"); // "T_eff [K]"
+ * import { plainTextFromMarkup } from "starlume";
+ * plainTextFromMarkup("T_{eff} [K]"); // "T_eff [K]"
  * ```
  */
-export function markupPlain(text: string): string {
+export function plainTextFromMarkup(text: string): string {
   return markupRuns(text)
     .map((r) => (r.kind === "sub" ? `_${r.text}` : r.kind === "sup" ? `^${r.text}` : r.text))
     .join("");
@@ -114,10 +114,10 @@ export function markupPlain(text: string): string {
  * @internal
  * @example
  * ```text
- * svgMarkup("f_{λ}", 12); // 'f<tspan dy="3.6" font-size="9">λ</tspan>'
+ * svgFromMarkup("f_{λ}", 12); // 'f<tspan dy="3.6" font-size="9">λ</tspan>'
  * ```
  */
-export function svgMarkup(text: string, fontSize: number): string {
+export function svgFromMarkup(text: string, fontSize: number): string {
   const runs = markupRuns(text);
   const shift = { normal: 0, sub: 0.3 * fontSize, sup: -0.4 * fontSize };
   let at = 0;
@@ -138,11 +138,11 @@ export function svgMarkup(text: string, fontSize: number): string {
  *
  * @example
  * ```ts
- * import { htmlMarkup } from "starlume";
- * htmlMarkup("T_{eff} [K] <b>"); // "T<sub>eff</sub> [K] &lt;b&gt;"
+ * import { htmlFromMarkup } from "starlume";
+ * htmlFromMarkup("T_{eff} [K] <b>"); // "T<sub>eff</sub> [K] &lt;b&gt;"
  * ```
  */
-export function htmlMarkup(text: string): string {
+export function htmlFromMarkup(text: string): string {
   return markupRuns(text)
     .map((r) => (r.kind === "normal" ? escapeXml(r.text) : `<${r.kind}>${escapeXml(r.text)}</${r.kind}>`))
     .join("");

@@ -128,7 +128,7 @@ export function abs<Q extends AnyQuantity>(a: Q): Q {
  * @example
  * ```ts
  * import { SI, mul, units, type Area } from "starlume";
- * const r = SI.of(1, units.Rsol);
+ * const r = SI.of(1, units.Rsun);
  * const a: Area<"SI"> = mul(r, r);
  * ```
  */

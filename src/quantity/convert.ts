@@ -28,11 +28,11 @@ export function radians(angle: Angle): Dimensionless {
  *
  * @example
  * ```ts
- * import { fromRadians, SI, units } from "starlume";
- * SI.valueIn(fromRadians(Math.PI), units.deg); // 180
+ * import { angleFromRadians, SI, units } from "starlume";
+ * SI.valueIn(angleFromRadians(Math.PI), units.deg); // 180
  * ```
  */
-export function fromRadians(value: number): Angle {
+export function angleFromRadians(value: number): Angle {
   return value as Angle;
 }
 

@@ -41,7 +41,7 @@ describe("the compound-unit grammar", () => {
     expect(parseUnit("uas").symbol).toBe("µas");
     expect(parseUnit("min").factor).toBe(60); // exact symbol beats milli-inch
     expect(parseUnit("R☉").factor).toBe(6.957e8);
-    expect(parseUnit("Rsol").factor).toBe(6.957e8);
+    expect(parseUnit("Rsun").factor).toBe(6.957e8);
     expect(parseUnit("cm^-1").factor).toBe(100);
     // prefixed units are named with the prefix's name (SI Brochure)
     expect(parseUnit("mK").name).toBe("millikelvin");

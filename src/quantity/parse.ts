@@ -13,7 +13,7 @@
  * - Each `/` divides by the single factor after it: `W/m^2/sr` is W m⁻² sr⁻¹.
  * - Exponents are integers: `cm^-2`, `cm⁻²`, `s^+1`.
  * - Symbols are the built-in units' symbols and their aliases (`Å`, `A`,
- *   `angstrom`; `µm`, `um`; `mas`, `µas`, `uas`; `R☉`, `Rsol` …), with an SI
+ *   `angstrom`; `µm`, `um`; `mas`, `µas`, `uas`; `R☉`, `Rsun` …), with an SI
  *   prefix allowed on prefixable units (`GHz`, `mJy`, `keV`, `Gpc`, `Myr`).
  *   An exact symbol always wins over a prefixed reading (`min` is the minute,
  *   `mas` the milliarcsecond, `Pa`… is not a unit here).

@@ -54,14 +54,14 @@ describe("exact definitions (IAU 2012 B2, IAU 2015 B2, SI)", () => {
     expect(CGS.of(1, units.per_cm) as number).toBe(1);
   });
   test("solar units are the IAU 2015 B3 nominal values", () => {
-    expect(SI.of(1, units.Rsol) as number).toBe(6.957e8);
-    expect(CGS.of(1, units.Lsol) as number).toBe(3.828e33);
+    expect(SI.of(1, units.Rsun) as number).toBe(6.957e8);
+    expect(CGS.of(1, units.Lsun) as number).toBe(3.828e33);
   });
 });
 
 describe("system conversion", () => {
   test("SI → CGS for the solar luminosity, σ and B_λ units", () => {
-    expect(CGS.from(SI.of(1, units.Lsol), kinds.power) as number).toBe(3.828e33);
+    expect(CGS.from(SI.of(1, units.Lsun), kinds.power) as number).toBe(3.828e33);
     expect(rel(CGS.from(constants.sigma.si, kinds.fluxPerTemperature4), constants.sigma.cgs)).toBeLessThan(ULP);
     // 1 W m^-2 sr^-1 m^-1 = 10 erg s^-1 cm^-2 sr^-1 cm^-1 (10^7 erg / 10^4 cm² / 10^2 cm)
     expect(CGS.from(SI.of(1, units.W) as never, { dimension: kinds.spectralRadiancePerWavelength.dimension }) as number).toBe(10);
@@ -298,7 +298,7 @@ describe("converters (loop-speed forms)", () => {
   test("worked values: nm → Å, W → erg s⁻¹, m → cm", () => {
     expect(CGS.reader(units.angstrom)(CGS.converter(units.nm)(656.28))).toBe(6562.8);
     expect(CGS.converter(units.W)(1) as number).toBe(1e7);
-    expect(CGS.converterFrom(kinds.power)(SI.of(1, units.Lsol)) as number).toBe(3.828e33);
+    expect(CGS.converterFrom(kinds.power)(SI.of(1, units.Lsun)) as number).toBe(3.828e33);
     expect(SI.converterFrom(kinds.length)(CGS.of(1, units.m)) as number).toBe(1);
     expect(SI.converterFrom(kinds.wavenumber)(CGS.of(1, units.per_cm)) as number).toBe(100);
   });

@@ -152,7 +152,7 @@ export interface UnitSystem<S extends SystemName> {
    * @example
    * ```ts
    * import { CGS, SI, kinds, units } from "starlume";
-   * const lsun = SI.of(1, units.Lsol);
+   * const lsun = SI.of(1, units.Lsun);
    * const inErgPerS = CGS.from(lsun, kinds.power); // 3.828e33
    * ```
    */
@@ -170,7 +170,7 @@ export interface UnitSystem<S extends SystemName> {
    * ```ts
    * import { CGS, SI, kinds, units } from "starlume";
    * const toErgPerS = CGS.converterFrom(kinds.power);
-   * toErgPerS(SI.of(1, units.Lsol)); // 3.828e33 (erg s^-1)
+   * toErgPerS(SI.of(1, units.Lsun)); // 3.828e33 (erg s^-1)
    * ```
    */
   converterFrom<D extends Dimension>(kind: HasDimension<D>): SystemConverter<D, OtherSystem<S>, S>;

@@ -14,7 +14,7 @@ const deg = Math.PI / 180;
 /**
  * Every built-in unit, by an ASCII key. Symbols (for parsing and printing)
  * follow SI and IAU usage: `units.angstrom.symbol` is `"Å"`,
- * `units.Rsol.symbol` is `"R☉"`.
+ * `units.Rsun.symbol` is `"R☉"`.
  *
  * Solar, terrestrial and jovian radii are the IAU 2015 B3 nominal
  * *equatorial* values (R⊕ = 6.3781e6 m, RJ = 7.1492e7 m); the solar mass is
@@ -53,23 +53,23 @@ export const units = Object.freeze({
   Mpc: defineUnit("Mpc", "megaparsec", k.length.dimension, V.PARSEC, 6),
   /** Light-year (ly) = c × 1 Julian year = 9 460 730 472 580 800 m exactly (IAU). */
   ly: defineUnit("ly", "light-year", k.length.dimension, V.LIGHT_YEAR),
-  /** Nominal solar radius R☉ᴺ (symbol `R☉`; `Rsol` also parses) = 6.957e8 m (IAU 2015 B3). */
-  Rsol: defineUnit("R☉", "nominal solar radius", k.length.dimension, V.R_SUN),
-  /** Nominal equatorial Earth radius R⊕ᴺ (symbol `R⊕`; `Rterra` also parses) = 6.3781e6 m (IAU 2015 B3). */
-  Rterra: defineUnit("R⊕", "nominal equatorial Earth radius", k.length.dimension, V.R_EARTH_EQ),
-  /** Nominal equatorial Jupiter radius RJᴺ (symbol `RJ`; `Rjove` also parses) = 7.1492e7 m (IAU 2015 B3). */
-  Rjove: defineUnit("RJ", "nominal equatorial Jupiter radius", k.length.dimension, V.R_JUPITER_EQ),
+  /** Nominal solar radius R☉ᴺ (symbol `R☉`; `Rsun` also parses) = 6.957e8 m (IAU 2015 B3). */
+  Rsun: defineUnit("R☉", "nominal solar radius", k.length.dimension, V.R_SUN),
+  /** Nominal equatorial Earth radius R⊕ᴺ (symbol `R⊕`; `REarth` also parses) = 6.3781e6 m (IAU 2015 B3). */
+  REarth: defineUnit("R⊕", "nominal equatorial Earth radius", k.length.dimension, V.R_EARTH_EQ),
+  /** Nominal equatorial Jupiter radius RJᴺ (symbol `RJ`; `RJupiter` also parses) = 7.1492e7 m (IAU 2015 B3). */
+  RJupiter: defineUnit("RJ", "nominal equatorial Jupiter radius", k.length.dimension, V.R_JUPITER_EQ),
   // mass
   /** Kilogram (kg), the SI base unit of mass. */
   kg: defineUnit("kg", "kilogram", k.mass.dimension, 1),
   /** Gram (g) = 1e-3 kg, the CGS base unit of mass. SI prefixes are accepted in parsed text (`mg`, `kg`, …). */
   g: defineUnit("g", "gram", k.mass.dimension, 1, -3, true),
-  /** Solar mass (symbol `M☉`; `Msol` also parses) = (GM)☉ᴺ / G ≈ 1.988 41e30 kg (IAU 2015 B3 with CODATA 2018 G; relative uncertainty 2.2e-5 from G). */
-  Msol: defineUnit("M☉", "solar mass", k.mass.dimension, V.M_SUN),
-  /** Earth mass (symbol `M⊕`; `Mterra` also parses) = (GM)⊕ᴺ / G ≈ 5.972 17e24 kg (IAU 2015 B3 with CODATA 2018 G; relative uncertainty 2.2e-5 from G). */
-  Mterra: defineUnit("M⊕", "Earth mass", k.mass.dimension, V.GM_EARTH / V.G),
-  /** Jupiter mass (symbol `MJ`; `Mjove` also parses) = (GM)Jᴺ / G ≈ 1.898 12e27 kg (IAU 2015 B3 with CODATA 2018 G; relative uncertainty 2.2e-5 from G). */
-  Mjove: defineUnit("MJ", "Jupiter mass", k.mass.dimension, V.GM_JUPITER / V.G),
+  /** Solar mass (symbol `M☉`; `Msun` also parses) = (GM)☉ᴺ / G ≈ 1.988 41e30 kg (IAU 2015 B3 with CODATA 2018 G; relative uncertainty 2.2e-5 from G). */
+  Msun: defineUnit("M☉", "solar mass", k.mass.dimension, V.M_SUN),
+  /** Earth mass (symbol `M⊕`; `MEarth` also parses) = (GM)⊕ᴺ / G ≈ 5.972 17e24 kg (IAU 2015 B3 with CODATA 2018 G; relative uncertainty 2.2e-5 from G). */
+  MEarth: defineUnit("M⊕", "Earth mass", k.mass.dimension, V.GM_EARTH / V.G),
+  /** Jupiter mass (symbol `MJ`; `MJupiter` also parses) = (GM)Jᴺ / G ≈ 1.898 12e27 kg (IAU 2015 B3 with CODATA 2018 G; relative uncertainty 2.2e-5 from G). */
+  MJupiter: defineUnit("MJ", "Jupiter mass", k.mass.dimension, V.GM_JUPITER / V.G),
   // time
   /** Second (s), the base unit of time in both systems. SI prefixes are accepted in parsed text (`ms`, `µs`, …). */
   s: defineUnit("s", "second", k.time.dimension, 1, 0, true),
@@ -113,8 +113,8 @@ export const units = Object.freeze({
   W: defineUnit("W", "watt", k.power.dimension, 1, 0, true),
   /** Erg per second (erg s⁻¹) = 1e-7 W, the CGS unit of power. */
   erg_per_s: defineUnit("erg s^-1", "erg per second", k.power.dimension, 1, -7),
-  /** Nominal solar luminosity L☉ᴺ (symbol `L☉`; `Lsol` also parses) = 3.828e26 W (IAU 2015 B3). */
-  Lsol: defineUnit("L☉", "nominal solar luminosity", k.power.dimension, V.L_SUN),
+  /** Nominal solar luminosity L☉ᴺ (symbol `L☉`; `Lsun` also parses) = 3.828e26 W (IAU 2015 B3). */
+  Lsun: defineUnit("L☉", "nominal solar luminosity", k.power.dimension, V.L_SUN),
   // force
   /** Newton (N) = 1 kg m s⁻², the SI unit of force. SI prefixes are accepted in parsed text. */
   N: defineUnit("N", "newton", k.force.dimension, 1, 0, true),
@@ -184,13 +184,13 @@ export const unitAliases: Readonly<Record<string, keyof typeof units>> = {
   "\u212B": "angstrom", // Å ANGSTROM SIGN
   um: "um",
   "μm": "um", // Greek mu
-  Rsol: "Rsol",
-  Rterra: "Rterra",
-  Rjove: "Rjove",
-  Msol: "Msol",
-  Mterra: "Mterra",
-  Mjove: "Mjove",
-  Lsol: "Lsol",
+  Rsun: "Rsun",
+  REarth: "REarth",
+  RJupiter: "RJupiter",
+  Msun: "Msun",
+  MEarth: "MEarth",
+  MJupiter: "MJupiter",
+  Lsun: "Lsun",
   yr: "yr",
   "°": "deg",
   "′": "arcmin",

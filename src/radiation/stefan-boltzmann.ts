@@ -127,7 +127,7 @@ export function temperatureFromExitance<S extends SystemName>(sys: UnitSystem<S>
  * ```ts
  * import { SI, constants, luminosityFromRadiusTemperature, units } from "starlume";
  * const l = luminosityFromRadiusTemperature(SI, constants.Rsun.si, constants.Tsun.si);
- * SI.valueIn(l, units.Lsol); // ≈ 1.0000 (IAU 2015 B3)
+ * SI.valueIn(l, units.Lsun); // ≈ 1.0000 (IAU 2015 B3)
  * ```
  */
 export function luminosityFromRadiusTemperature<S extends SystemName>(
@@ -149,8 +149,8 @@ export function luminosityFromRadiusTemperature<S extends SystemName>(
  * @example
  * ```ts
  * import { CGS, radiusFromLuminosityTemperature, units } from "starlume";
- * const r = radiusFromLuminosityTemperature(CGS, CGS.of(1, units.Lsol), CGS.of(5772, units.K));
- * CGS.valueIn(r, units.Rsol); // ≈ 1.0000
+ * const r = radiusFromLuminosityTemperature(CGS, CGS.of(1, units.Lsun), CGS.of(5772, units.K));
+ * CGS.valueIn(r, units.Rsun); // ≈ 1.0000
  * ```
  */
 export function radiusFromLuminosityTemperature<S extends SystemName>(
@@ -172,7 +172,7 @@ export function radiusFromLuminosityTemperature<S extends SystemName>(
  * @example
  * ```ts
  * import { SI, temperatureFromLuminosityRadius, units } from "starlume";
- * temperatureFromLuminosityRadius(SI, SI.of(1, units.Lsol), SI.of(1, units.Rsol)); // ≈ 5772 K
+ * temperatureFromLuminosityRadius(SI, SI.of(1, units.Lsun), SI.of(1, units.Rsun)); // ≈ 5772 K
  * ```
  */
 export function temperatureFromLuminosityRadius<S extends SystemName>(
@@ -209,7 +209,7 @@ export function photonExitance<S extends SystemName>(sys: UnitSystem<S>, tempera
  * @example
  * ```ts
  * import { CGS, photonEmissionRate, units } from "starlume";
- * const rate = photonEmissionRate(CGS, CGS.of(1, units.Rsol), CGS.of(5772, units.K)); // photons s^-1
+ * const rate = photonEmissionRate(CGS, CGS.of(1, units.Rsun), CGS.of(5772, units.K)); // photons s^-1
  * ```
  */
 export function photonEmissionRate<S extends SystemName>(

@@ -133,11 +133,11 @@ const temperatureFromPhotonPeakWavenumberLaw = defineLaw({
  * @throws RangeError when T is not finite and > 0, or λ_max overflows (subnormal T)
  * @example
  * ```ts
- * import { SI, units, wienPeakWavelength } from "starlume";
- * SI.valueIn(wienPeakWavelength(SI, SI.of(5772, units.K)), units.nm); // ≈ 502.0
+ * import { SI, units, peakWavelength } from "starlume";
+ * SI.valueIn(peakWavelength(SI, SI.of(5772, units.K)), units.nm); // ≈ 502.0
  * ```
  */
-export function wienPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
+export function peakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
   return wienPeakWavelengthLaw(sys, temperature);
 }
 
@@ -150,11 +150,11 @@ export function wienPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, tem
  * @throws RangeError when T is not finite and > 0, or ν_max overflows
  * @example
  * ```ts
- * import { SI, units, wienPeakFrequency } from "starlume";
- * SI.valueIn(wienPeakFrequency(SI, SI.of(2.7255, units.K)), units.GHz); // ≈ 160.2 (CMB)
+ * import { SI, units, peakFrequency } from "starlume";
+ * SI.valueIn(peakFrequency(SI, SI.of(2.7255, units.K)), units.GHz); // ≈ 160.2 (CMB)
  * ```
  */
-export function wienPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
+export function peakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
   return wienPeakFrequencyLaw(sys, temperature);
 }
 
@@ -167,11 +167,11 @@ export function wienPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temp
  * @throws RangeError when T is not finite and > 0, or σ̃_max overflows
  * @example
  * ```ts
- * import { CGS, units, wienPeakWavenumber } from "starlume";
- * CGS.valueIn(wienPeakWavenumber(CGS, CGS.of(300, units.K)), units.per_cm); // ≈ 588.3
+ * import { CGS, units, peakWavenumber } from "starlume";
+ * CGS.valueIn(peakWavenumber(CGS, CGS.of(300, units.K)), units.per_cm); // ≈ 588.3
  * ```
  */
-export function wienPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
+export function peakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
   return wienPeakWavenumberLaw(sys, temperature);
 }
 
@@ -183,11 +183,11 @@ export function wienPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, tem
  * @throws RangeError when T is not finite and > 0, or the result overflows
  * @example
  * ```ts
- * import { SI, units, wienPhotonPeakWavelength } from "starlume";
- * SI.valueIn(wienPhotonPeakWavelength(SI, SI.of(5772, units.K)), units.nm); // ≈ 635.8
+ * import { SI, units, photonPeakWavelength } from "starlume";
+ * SI.valueIn(photonPeakWavelength(SI, SI.of(5772, units.K)), units.nm); // ≈ 635.8
  * ```
  */
-export function wienPhotonPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
+export function photonPeakWavelength<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Length<S> {
   return wienPhotonPeakWavelengthLaw(sys, temperature);
 }
 
@@ -199,11 +199,11 @@ export function wienPhotonPeakWavelength<S extends SystemName>(sys: UnitSystem<S
  * @throws RangeError when T is not finite and > 0, or the result overflows
  * @example
  * ```ts
- * import { SI, units, wienPhotonPeakFrequency } from "starlume";
- * const nu = wienPhotonPeakFrequency(SI, SI.of(5772, units.K)); // ≈ 1.92e14 Hz
+ * import { SI, units, photonPeakFrequency } from "starlume";
+ * const nu = photonPeakFrequency(SI, SI.of(5772, units.K)); // ≈ 1.92e14 Hz
  * ```
  */
-export function wienPhotonPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
+export function photonPeakFrequency<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Frequency {
   return wienPhotonPeakFrequencyLaw(sys, temperature);
 }
 
@@ -215,11 +215,11 @@ export function wienPhotonPeakFrequency<S extends SystemName>(sys: UnitSystem<S>
  * @throws RangeError when T is not finite and > 0, or the result overflows
  * @example
  * ```ts
- * import { CGS, units, wienPhotonPeakWavenumber } from "starlume";
- * const k = wienPhotonPeakWavenumber(CGS, CGS.of(5772, units.K)); // ≈ 6393 cm^-1
+ * import { CGS, units, photonPeakWavenumber } from "starlume";
+ * const k = photonPeakWavenumber(CGS, CGS.of(5772, units.K)); // ≈ 6393 cm^-1
  * ```
  */
-export function wienPhotonPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
+export function photonPeakWavenumber<S extends SystemName>(sys: UnitSystem<S>, temperature: Temperature): Wavenumber<S> {
   return wienPhotonPeakWavenumberLaw(sys, temperature);
 }
 

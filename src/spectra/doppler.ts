@@ -144,11 +144,11 @@ const vOfWavelengthsClassical = defineLaw({
  * @throws RangeError when |v| ≥ c or v is not finite
  * @example
  * ```ts
- * import { SI, redshiftFromVelocity, units } from "starlume";
- * redshiftFromVelocity(SI, SI.of(0.6 * 299792.458, units.km_per_s)); // 1
+ * import { SI, redshiftFromRadialVelocity, units } from "starlume";
+ * redshiftFromRadialVelocity(SI, SI.of(0.6 * 299792.458, units.km_per_s)); // 1
  * ```
  */
-export function redshiftFromVelocity<S extends SystemName>(
+export function redshiftFromRadialVelocity<S extends SystemName>(
   sys: UnitSystem<S>,
   radialVelocity: Velocity<NoInfer<S>>,
   model: DopplerModel = "relativistic",
@@ -166,11 +166,11 @@ export function redshiftFromVelocity<S extends SystemName>(
  * @param model - `"relativistic"` (default) or `"classical"`
  * @example
  * ```ts
- * import { CGS, units, velocityFromRedshift } from "starlume";
- * CGS.valueIn(velocityFromRedshift(CGS, 0.01), units.km_per_s); // ≈ 2982.9
+ * import { CGS, units, radialVelocityFromRedshift } from "starlume";
+ * CGS.valueIn(radialVelocityFromRedshift(CGS, 0.01), units.km_per_s); // ≈ 2982.9
  * ```
  */
-export function velocityFromRedshift<S extends SystemName>(
+export function radialVelocityFromRedshift<S extends SystemName>(
   sys: UnitSystem<S>,
   redshift: Pure,
   model: DopplerModel = "relativistic",
@@ -190,12 +190,12 @@ export function velocityFromRedshift<S extends SystemName>(
  * @param model - `"relativistic"` (default) or `"classical"`
  * @example
  * ```ts
- * import { SI, airWavelength, dopplerShift, units } from "starlume";
+ * import { SI, airWavelength, observedWavelengthFromRadialVelocity, units } from "starlume";
  * const ha = airWavelength(SI, SI.of(656.279, units.nm));
- * const seen = dopplerShift(SI, ha, SI.of(-25, units.km_per_s)); // AirWavelength<"SI">, ≈ 656.2243 nm
+ * const seen = observedWavelengthFromRadialVelocity(SI, ha, SI.of(-25, units.km_per_s)); // AirWavelength<"SI">, ≈ 656.2243 nm
  * ```
  */
-export function dopplerShift<S extends SystemName, W extends Length<S>>(
+export function observedWavelengthFromRadialVelocity<S extends SystemName, W extends Length<S>>(
   sys: UnitSystem<S>,
   restWavelength: W,
   radialVelocity: Velocity<NoInfer<S>>,
@@ -212,11 +212,11 @@ export function dopplerShift<S extends SystemName, W extends Length<S>>(
  *
  * @example
  * ```ts
- * import { SI, ions, redshiftWavelength, transitionVacuumWavelength } from "starlume";
- * const lyA = redshiftWavelength(SI, transitionVacuumWavelength(SI, ions.H, 1, 2), 3); // VacuumWavelength<"SI">, ≈ 486.27 nm
+ * import { SI, ions, observedWavelengthFromRedshift, transitionVacuumWavelength } from "starlume";
+ * const lyA = observedWavelengthFromRedshift(SI, transitionVacuumWavelength(SI, ions.H, 1, 2), 3); // VacuumWavelength<"SI">, ≈ 486.27 nm
  * ```
  */
-export function redshiftWavelength<S extends SystemName, W extends Length<S>>(
+export function observedWavelengthFromRedshift<S extends SystemName, W extends Length<S>>(
   sys: UnitSystem<S>,
   restWavelength: W,
   redshift: Pure,
@@ -271,16 +271,16 @@ export function radialVelocityFromWavelengths<S extends SystemName, W extends Le
  * type, medium brand included). The velocity is checked once (RangeError
  * for |v| ≥ c, before any row is written); a row that is not finite and
  * > 0 becomes NaN, its index is listed in `invalid` and `reasons` says why
- * (the message {@link dopplerShift} would throw).
+ * (the message {@link observedWavelengthFromRadialVelocity} would throw).
  *
  * @example
  * ```ts
- * import { SI, dopplerShiftArray, ions, seriesVacuumWavelengths, units } from "starlume";
+ * import { SI, observedWavelengthFromRadialVelocityBatch, ions, seriesVacuumWavelengths, units } from "starlume";
  * const balmer = seriesVacuumWavelengths(SI, ions.H, "balmer", 5);
- * const { values, invalid, reasons } = dopplerShiftArray(SI, balmer, SI.of(120, units.km_per_s)); // VacuumWavelengthArray<"SI">; invalid = [], reasons = []
+ * const { values, invalid, reasons } = observedWavelengthFromRadialVelocityBatch(SI, balmer, SI.of(120, units.km_per_s)); // VacuumWavelengthArray<"SI">; invalid = [], reasons = []
  * ```
  */
-export function dopplerShiftArray<S extends SystemName, A extends LengthArray<S>>(
+export function observedWavelengthFromRadialVelocityBatch<S extends SystemName, A extends LengthArray<S>>(
   sys: UnitSystem<S>,
   restWavelengths: A,
   radialVelocity: Velocity<NoInfer<S>>,

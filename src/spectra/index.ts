@@ -8,14 +8,14 @@
  */
 export {
   airRefractiveIndex,
-  airToVacuum,
-  airToVacuumArray,
+  vacuumFromAir,
+  vacuumFromAirBatch,
   airWavelength,
-  airWavelengths,
-  vacuumToAir,
-  vacuumToAirArray,
+  airWavelengthArray,
+  airFromVacuum,
+  airFromVacuumBatch,
   vacuumWavelength,
-  vacuumWavelengths,
+  vacuumWavelengthArray,
 } from "./medium";
 export type {
   AirWavelength,
@@ -64,24 +64,24 @@ export {
   frequencyFromVacuumWavelength,
   frequencyFromWavenumber,
   photonEnergyFromFrequency,
-  photonEnergyFromWavelength,
+  photonEnergyFromVacuumWavelength,
   photonEnergyFromWavenumber,
-  photonFrequencyFromEnergy,
-  photonWavelengthFromEnergy,
-  photonWavenumberFromEnergy,
+  frequencyFromPhotonEnergy,
+  vacuumWavelengthFromPhotonEnergy,
+  wavenumberFromPhotonEnergy,
   vacuumWavelengthFromFrequency,
   vacuumWavelengthFromWavenumber,
   wavenumberFromFrequency,
   wavenumberFromVacuumWavelength,
 } from "./photon";
 export {
-  dopplerShift,
-  dopplerShiftArray,
+  observedWavelengthFromRadialVelocity,
+  observedWavelengthFromRadialVelocityBatch,
   radialVelocityFromWavelengths,
-  redshiftFromVelocity,
+  redshiftFromRadialVelocity,
   redshiftFromWavelengths,
-  redshiftWavelength,
-  velocityFromRedshift,
+  observedWavelengthFromRedshift,
+  radialVelocityFromRedshift,
 } from "./doppler";
 export type { DopplerModel } from "./doppler";
 export {
@@ -97,7 +97,7 @@ export {
   lorentzianProfile,
   voigtFwhm,
   voigtProfile,
-  voigtProfileArray,
+  voigtProfileBatch,
 } from "./profiles";
 export {
   equivalentWidthFromTau0,

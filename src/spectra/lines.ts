@@ -9,7 +9,7 @@
  * as (n₂ − n₁)(n₂ + n₁)/(n₁² n₂²) (no cancellation); E = hcσ, ν = cσ,
  * λ = 1/σ. With `{ model: "dirac-centroid" }` the energy is the difference
  * of the Dirac shell centroids (levels.ts), then σ = E/(hc), ν = E/h,
- * λ = hc/E. Wavelengths are in vacuum: convert with `vacuumToAir`.
+ * λ = hc/E. Wavelengths are in vacuum: convert with `airFromVacuum`.
  *
  * Accuracy: ≤ 4e-15 relative to 50-digit mpmath (kernels/transitions.test.ts).
  * Against measured lines (NIST ASD, from memory; lines.test.ts): the Bohr
@@ -236,9 +236,9 @@ export function transitionFrequency<S extends SystemName>(
  *
  * @example
  * ```ts
- * import { SI, ions, transitionVacuumWavelength, units, vacuumToAir } from "starlume";
+ * import { SI, ions, transitionVacuumWavelength, units, airFromVacuum } from "starlume";
  * const ha = transitionVacuumWavelength(SI, ions.H, 2, 3, { model: "dirac-centroid" });
- * SI.valueIn(vacuumToAir(SI, ha), units.nm); // ≈ 656.2794 (NIST: 656.279 in air)
+ * SI.valueIn(airFromVacuum(SI, ha), units.nm); // ≈ 656.2794 (NIST: 656.279 in air)
  * ```
  */
 export function transitionVacuumWavelength<S extends SystemName>(
@@ -275,9 +275,9 @@ export interface DiracLevel {
  * @throws RangeError for bad quantum numbers or an upper level not above the lower one
  * @example
  * ```ts
- * import { SI, diracTransitionEnergy, ions, photonFrequencyFromEnergy, units } from "starlume";
+ * import { SI, diracTransitionEnergy, ions, frequencyFromPhotonEnergy, units } from "starlume";
  * const fs = diracTransitionEnergy(SI, ions.H, { n: 2, j: 0.5 }, { n: 2, j: 1.5 });
- * SI.valueIn(photonFrequencyFromEnergy(SI, fs), units.GHz); // ≈ 10.94 (2p fine structure, no QED)
+ * SI.valueIn(frequencyFromPhotonEnergy(SI, fs), units.GHz); // ≈ 10.94 (2p fine structure, no QED)
  * ```
  */
 export function diracTransitionEnergy<S extends SystemName>(

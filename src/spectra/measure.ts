@@ -139,8 +139,8 @@ export function equivalentWidth<S extends SystemName, G extends LengthArray<S>, 
  *
  * @example
  * ```ts
- * import { SI, airWavelength, airWavelengths, assumeArray, lineCentroid, units, type DimensionlessArray } from "starlume";
- * const grid = airWavelengths(SI, SI.arrayOf([656.1, 656.2, 656.3, 656.4], units.nm));
+ * import { SI, airWavelength, airWavelengthArray, assumeArray, lineCentroid, units, type DimensionlessArray } from "starlume";
+ * const grid = airWavelengthArray(SI, SI.arrayOf([656.1, 656.2, 656.3, 656.4], units.nm));
  * const flux = assumeArray<DimensionlessArray>(Float64Array.of(1, 0.6, 0.8, 1));
  * const cont = assumeArray<DimensionlessArray>(Float64Array.of(1, 1, 1, 1));
  * const c = lineCentroid(SI, grid, flux, cont, airWavelength(SI, SI.of(656.1, units.nm)), airWavelength(SI, SI.of(656.4, units.nm))); // AirWavelength<"SI">

@@ -12,7 +12,7 @@
  *
  * 1. **Branded wavelengths say their medium.** Functions that compute a
  *    wavelength from physics (line lists, photon conversions) return
- *    {@link VacuumWavelength}; {@link vacuumToAir} returns
+ *    {@link VacuumWavelength}; {@link airFromVacuum} returns
  *    {@link AirWavelength}; {@link vacuumWavelength} and
  *    {@link airWavelength} brand a length you have.
  * 2. **Where the physics needs a vacuum wavelength** (E = hc/λ, ν = c/λ,
@@ -21,8 +21,8 @@
  *    (an unbranded length counts as vacuum, the library-wide convention, as
  *    in the radiation module). An air wavelength does not compile there.
  * 3. **The two conversions demand the brand of their input**:
- *    {@link vacuumToAir} takes only a {@link VacuumWavelength} and
- *    {@link airToVacuum} only an {@link AirWavelength}, so the medium is
+ *    {@link airFromVacuum} takes only a {@link VacuumWavelength} and
+ *    {@link vacuumFromAir} only an {@link AirWavelength}, so the medium is
  *    stated exactly where it changes, and converting twice does not compile.
  * 4. **Where several wavelengths meet** (observed vs rest wavelength, a grid
  *    vs line centres vs a measurement window), branded ones must share one
@@ -139,7 +139,7 @@ const toVacuum = defineLaw({
 
 /**
  * Brand a length as a vacuum wavelength. Throws unless it is finite and > 0.
- * An air wavelength does not compile here (use {@link airToVacuum}).
+ * An air wavelength does not compile here (use {@link vacuumFromAir}).
  *
  * @param sys - `SI` or `CGS`
  * @param length - the wavelength, in `sys`
@@ -160,7 +160,7 @@ export function vacuumWavelength<S extends SystemName>(
 
 /**
  * Brand a length as a standard-air wavelength. Throws unless it is finite
- * and > 0. A vacuum wavelength does not compile here (use {@link vacuumToAir}).
+ * and > 0. A vacuum wavelength does not compile here (use {@link airFromVacuum}).
  *
  * @param sys - `SI` or `CGS`
  * @param length - the wavelength, in `sys`
@@ -185,11 +185,11 @@ export function airWavelength<S extends SystemName>(
  *
  * @example
  * ```ts
- * import { SI, units, vacuumWavelengths } from "starlume";
- * const grid = vacuumWavelengths(SI, SI.arrayOf([656.0, 656.5, 657.0], units.nm));
+ * import { SI, units, vacuumWavelengthArray } from "starlume";
+ * const grid = vacuumWavelengthArray(SI, SI.arrayOf([656.0, 656.5, 657.0], units.nm));
  * ```
  */
-export function vacuumWavelengths<S extends SystemName>(
+export function vacuumWavelengthArray<S extends SystemName>(
   sys: UnitSystem<S>,
   lengths: NotAirWavelengthArray<NoInfer<S>>,
 ): VacuumWavelengthArray<S> {
@@ -202,11 +202,11 @@ export function vacuumWavelengths<S extends SystemName>(
  *
  * @example
  * ```ts
- * import { SI, airWavelengths, units } from "starlume";
- * const observed = airWavelengths(SI, SI.arrayOf([6562.0, 6562.8, 6563.6], units.angstrom));
+ * import { SI, airWavelengthArray, units } from "starlume";
+ * const observed = airWavelengthArray(SI, SI.arrayOf([6562.0, 6562.8, 6563.6], units.angstrom));
  * ```
  */
-export function airWavelengths<S extends SystemName>(
+export function airWavelengthArray<S extends SystemName>(
   sys: UnitSystem<S>,
   lengths: NotVacuumWavelengthArray<NoInfer<S>>,
 ): AirWavelengthArray<S> {
@@ -246,12 +246,12 @@ export function airRefractiveIndex<S extends SystemName>(
  * @throws RangeError outside the range (in the caller's unit)
  * @example
  * ```ts
- * import { SI, units, vacuumToAir, vacuumWavelength } from "starlume";
- * const ha = vacuumToAir(SI, vacuumWavelength(SI, SI.of(656.4614, units.nm)));
+ * import { SI, units, airFromVacuum, vacuumWavelength } from "starlume";
+ * const ha = airFromVacuum(SI, vacuumWavelength(SI, SI.of(656.4614, units.nm)));
  * SI.valueIn(ha, units.nm); // ≈ 656.2801
  * ```
  */
-export function vacuumToAir<S extends SystemName>(
+export function airFromVacuum<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: VacuumWavelength<NoInfer<S>>,
 ): AirWavelength<S> {
@@ -268,12 +268,12 @@ export function vacuumToAir<S extends SystemName>(
  * @throws RangeError outside the range (in the caller's unit)
  * @example
  * ```ts
- * import { CGS, airToVacuum, airWavelength, units } from "starlume";
- * const naD2 = airToVacuum(CGS, airWavelength(CGS, CGS.of(5889.951, units.angstrom)));
+ * import { CGS, vacuumFromAir, airWavelength, units } from "starlume";
+ * const naD2 = vacuumFromAir(CGS, airWavelength(CGS, CGS.of(5889.951, units.angstrom)));
  * CGS.valueIn(naD2, units.angstrom); // ≈ 5891.583
  * ```
  */
-export function airToVacuum<S extends SystemName>(
+export function vacuumFromAir<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: AirWavelength<NoInfer<S>>,
 ): VacuumWavelength<S> {
@@ -281,19 +281,19 @@ export function airToVacuum<S extends SystemName>(
 }
 
 /**
- * {@link vacuumToAir} over an array (a new array). Never throws part-way:
+ * {@link airFromVacuum} over an array (a new array). Never throws part-way:
  * rows outside the range, or not finite, become NaN, are listed in
- * `invalid`, and `reasons` holds the message {@link vacuumToAir} would throw
+ * `invalid`, and `reasons` holds the message {@link airFromVacuum} would throw
  * for each.
  *
  * @example
  * ```ts
- * import { SI, units, vacuumToAirArray, vacuumWavelengths } from "starlume";
- * const { values, invalid, reasons } = vacuumToAirArray(SI, vacuumWavelengths(SI, SI.arrayOf([486.27, 656.47, 50], units.nm)));
+ * import { SI, units, airFromVacuumBatch, vacuumWavelengthArray } from "starlume";
+ * const { values, invalid, reasons } = airFromVacuumBatch(SI, vacuumWavelengthArray(SI, SI.arrayOf([486.27, 656.47, 50], units.nm)));
  * // invalid = [2]; reasons[0] = "wavelength must be in [2.00064…e-7, 0.0000200…] m (standard-air formula range, …); got 5e-8"
  * ```
  */
-export function vacuumToAirArray<S extends SystemName>(
+export function airFromVacuumBatch<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelengths: VacuumWavelengthArray<NoInfer<S>>,
 ): BatchResult<AirWavelengthArray<S>> {
@@ -301,16 +301,16 @@ export function vacuumToAirArray<S extends SystemName>(
 }
 
 /**
- * {@link airToVacuum} over an array (a new array; bad rows NaN, listed in
+ * {@link vacuumFromAir} over an array (a new array; bad rows NaN, listed in
  * `invalid` with their reasons in `reasons`).
  *
  * @example
  * ```ts
- * import { SI, airToVacuumArray, airWavelengths, units } from "starlume";
- * const { values } = airToVacuumArray(SI, airWavelengths(SI, SI.arrayOf([5889.951, 5895.924], units.angstrom)));
+ * import { SI, vacuumFromAirBatch, airWavelengthArray, units } from "starlume";
+ * const { values } = vacuumFromAirBatch(SI, airWavelengthArray(SI, SI.arrayOf([5889.951, 5895.924], units.angstrom)));
  * ```
  */
-export function airToVacuumArray<S extends SystemName>(
+export function vacuumFromAirBatch<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelengths: AirWavelengthArray<NoInfer<S>>,
 ): BatchResult<VacuumWavelengthArray<S>> {

@@ -10,7 +10,7 @@ import {
   frequencyFromWavelengthSI,
   frequencyFromWavenumberSI,
   photonEnergyFromFrequencySI,
-  photonEnergyFromWavelengthSI,
+  photonEnergyFromVacuumWavelengthSI,
   photonEnergyFromWavenumberSI,
   wavelengthFromFrequencySI,
   wavelengthFromPhotonEnergySI,
@@ -23,11 +23,11 @@ import {
   frequencyFromVacuumWavelength,
   frequencyFromWavenumber,
   photonEnergyFromFrequency,
-  photonEnergyFromWavelength,
+  photonEnergyFromVacuumWavelength,
   photonEnergyFromWavenumber,
-  photonFrequencyFromEnergy,
-  photonWavelengthFromEnergy,
-  photonWavenumberFromEnergy,
+  frequencyFromPhotonEnergy,
+  vacuumWavelengthFromPhotonEnergy,
+  wavenumberFromPhotonEnergy,
   vacuumWavelengthFromFrequency,
   vacuumWavelengthFromWavenumber,
   wavenumberFromFrequency,
@@ -48,26 +48,26 @@ describe("typed = kernel (SI); CGS = SI × 10^k exactly for the same physical in
   const lams = [1e-12, 121.567e-9, 500e-9, 0.21106114054, 3];
   it("from wavelength", () => {
     for (const m of lams) {
-      expect(photonEnergyFromWavelength(SI, lenSI(m))).toBe(photonEnergyFromWavelengthSI(m));
+      expect(photonEnergyFromVacuumWavelength(SI, lenSI(m))).toBe(photonEnergyFromVacuumWavelengthSI(m));
       expect(frequencyFromVacuumWavelength(SI, lenSI(m))).toBe(frequencyFromWavelengthSI(m));
       expect(wavenumberFromVacuumWavelength(SI, lenSI(m))).toBe(wavenumberFromWavelengthSI(m));
       const cm = times10(m, 2);
       const si = times10(cm, -2);
-      expect(photonEnergyFromWavelength(CGS, lenCGS(cm))).toBe(times10(photonEnergyFromWavelength(SI, lenSI(si)), 7));
+      expect(photonEnergyFromVacuumWavelength(CGS, lenCGS(cm))).toBe(times10(photonEnergyFromVacuumWavelength(SI, lenSI(si)), 7));
       expect(frequencyFromVacuumWavelength(CGS, lenCGS(cm))).toBe(frequencyFromVacuumWavelength(SI, lenSI(si)));
       expect(wavenumberFromVacuumWavelength(CGS, lenCGS(cm))).toBe(times10(wavenumberFromVacuumWavelength(SI, lenSI(si)), -2));
     }
   });
   it("from energy, frequency and wavenumber", () => {
     for (const j of [1e-25, 1.602176634e-19, 3e-12]) {
-      expect(photonWavelengthFromEnergy(SI, eSI(j))).toBe(wavelengthFromPhotonEnergySI(j));
-      expect(photonFrequencyFromEnergy(SI, eSI(j))).toBe(frequencyFromPhotonEnergySI(j));
-      expect(photonWavenumberFromEnergy(SI, eSI(j))).toBe(wavenumberFromPhotonEnergySI(j));
+      expect(vacuumWavelengthFromPhotonEnergy(SI, eSI(j))).toBe(wavelengthFromPhotonEnergySI(j));
+      expect(frequencyFromPhotonEnergy(SI, eSI(j))).toBe(frequencyFromPhotonEnergySI(j));
+      expect(wavenumberFromPhotonEnergy(SI, eSI(j))).toBe(wavenumberFromPhotonEnergySI(j));
       const erg = times10(j, 7);
       const si = times10(erg, -7);
-      expect(photonWavelengthFromEnergy(CGS, eCGS(erg))).toBe(times10(photonWavelengthFromEnergy(SI, eSI(si)), 2));
-      expect(photonFrequencyFromEnergy(CGS, eCGS(erg))).toBe(photonFrequencyFromEnergy(SI, eSI(si)));
-      expect(photonWavenumberFromEnergy(CGS, eCGS(erg))).toBe(times10(photonWavenumberFromEnergy(SI, eSI(si)), -2));
+      expect(vacuumWavelengthFromPhotonEnergy(CGS, eCGS(erg))).toBe(times10(vacuumWavelengthFromPhotonEnergy(SI, eSI(si)), 2));
+      expect(frequencyFromPhotonEnergy(CGS, eCGS(erg))).toBe(frequencyFromPhotonEnergy(SI, eSI(si)));
+      expect(wavenumberFromPhotonEnergy(CGS, eCGS(erg))).toBe(times10(wavenumberFromPhotonEnergy(SI, eSI(si)), -2));
     }
     for (const hz of [1.420405751768e9, 4.568e14, 2.4e18]) {
       expect(photonEnergyFromFrequency(SI, nu(hz))).toBe(photonEnergyFromFrequencySI(hz));
@@ -93,14 +93,14 @@ describe("typed = kernel (SI); CGS = SI × 10^k exactly for the same physical in
 describe("reference values", () => {
   it("hc = 1239.841 98 eV nm (CODATA 2018: exact h, c, e; printed 1239.841 984…)", () => {
     // exact constants → only rounding: 10 significant digits compared → 1e-10
-    const e = photonEnergyFromWavelength(SI, SI.of(1, units.nm));
+    const e = photonEnergyFromVacuumWavelength(SI, SI.of(1, units.nm));
     expect(rel(SI.valueIn(e, units.eV), 1239.84198)).toBeLessThan(1e-8);
-    expect(rel(SI.valueIn(photonWavelengthFromEnergy(SI, SI.of(1, units.eV)), units.nm), 1239.841984)).toBeLessThan(1e-9);
+    expect(rel(SI.valueIn(vacuumWavelengthFromPhotonEnergy(SI, SI.of(1, units.eV)), units.nm), 1239.841984)).toBeLessThan(1e-9);
   });
   it("1 eV ↔ 8065.543 937 cm⁻¹ and 241.798 924 THz (CODATA 2018 printed values), in CGS", () => {
     // 10 significant digits → 1e-9
-    expect(rel(CGS.valueIn(photonWavenumberFromEnergy(CGS, CGS.of(1, units.eV)), units.per_cm), 8065.543937)).toBeLessThan(1e-9);
-    expect(rel(SI.valueIn(photonFrequencyFromEnergy(CGS, CGS.of(1, units.eV)), units.THz), 241.798924)).toBeLessThan(1e-8);
+    expect(rel(CGS.valueIn(wavenumberFromPhotonEnergy(CGS, CGS.of(1, units.eV)), units.per_cm), 8065.543937)).toBeLessThan(1e-9);
+    expect(rel(SI.valueIn(frequencyFromPhotonEnergy(CGS, CGS.of(1, units.eV)), units.THz), 241.798924)).toBeLessThan(1e-8);
   });
   it("21-cm line: ν = 1 420 405 751.768 Hz ↔ λ = 21.106 114 054 cm (from memory)", () => {
     // 11 significant digits remembered → 1e-10
@@ -116,9 +116,9 @@ describe("properties", () => {
     fc.assert(
       fc.property(logUniform(1e-10, 1e4), (cm) => {
         const lam = vacuumWavelength(CGS, lenCGS(cm));
-        const a = photonWavelengthFromEnergy(CGS, photonEnergyFromWavelength(CGS, lam));
+        const a = vacuumWavelengthFromPhotonEnergy(CGS, photonEnergyFromVacuumWavelength(CGS, lam));
         const b = vacuumWavelengthFromFrequency(CGS, frequencyFromVacuumWavelength(CGS, lam));
-        const c = photonWavelengthFromEnergy(CGS, photonEnergyFromWavenumber(CGS, wavenumberFromVacuumWavelength(CGS, lam)));
+        const c = vacuumWavelengthFromPhotonEnergy(CGS, photonEnergyFromWavenumber(CGS, wavenumberFromVacuumWavelength(CGS, lam)));
         return rel(a, cm) < 1e-15 && rel(b, cm) < 1e-15 && rel(c, cm) < 1e-15;
       }),
       { numRuns: 200 },
@@ -138,8 +138,8 @@ describe("properties", () => {
 
 describe("bad input: RangeError naming the parameter and the caller's unit", () => {
   it("non-positive or non-finite inputs", () => {
-    expect(() => photonEnergyFromWavelength(CGS, lenCGS(0))).toThrow(/^wavelength must be a finite number > 0 cm; got 0$/);
-    expect(() => photonWavelengthFromEnergy(CGS, eCGS(-1))).toThrow(/^energy must be a finite number > 0 cm\^2 g s\^-2; got -1$/);
+    expect(() => photonEnergyFromVacuumWavelength(CGS, lenCGS(0))).toThrow(/^wavelength must be a finite number > 0 cm; got 0$/);
+    expect(() => vacuumWavelengthFromPhotonEnergy(CGS, eCGS(-1))).toThrow(/^energy must be a finite number > 0 cm\^2 g s\^-2; got -1$/);
     expect(() => vacuumWavelengthFromFrequency(SI, nu(Number.NaN))).toThrow(/^frequency must be a finite number > 0 s\^-1; got NaN$/);
     expect(() => vacuumWavelengthFromWavenumber(CGS, kCGS(Infinity))).toThrow(/^wavenumber must be a finite number > 0 cm\^-1/);
   });

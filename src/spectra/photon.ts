@@ -127,11 +127,11 @@ const wavenumberOfFrequency = defineLaw({
  * @throws RangeError unless λ is finite and > 0
  * @example
  * ```ts
- * import { SI, photonEnergyFromWavelength, units } from "starlume";
- * SI.valueIn(photonEnergyFromWavelength(SI, SI.of(500, units.nm)), units.eV); // ≈ 2.4797
+ * import { SI, photonEnergyFromVacuumWavelength, units } from "starlume";
+ * SI.valueIn(photonEnergyFromVacuumWavelength(SI, SI.of(500, units.nm)), units.eV); // ≈ 2.4797
  * ```
  */
-export function photonEnergyFromWavelength<S extends SystemName>(
+export function photonEnergyFromVacuumWavelength<S extends SystemName>(
   sys: UnitSystem<S>,
   wavelength: NotAirWavelength<NoInfer<S>>,
 ): Energy<S> {
@@ -146,12 +146,12 @@ export function photonEnergyFromWavelength<S extends SystemName>(
  * @throws RangeError unless E is finite and > 0
  * @example
  * ```ts
- * import { CGS, photonWavelengthFromEnergy, units } from "starlume";
- * const lambda = photonWavelengthFromEnergy(CGS, CGS.of(13.6, units.eV));
+ * import { CGS, vacuumWavelengthFromPhotonEnergy, units } from "starlume";
+ * const lambda = vacuumWavelengthFromPhotonEnergy(CGS, CGS.of(13.6, units.eV));
  * CGS.valueIn(lambda, units.nm); // ≈ 91.165
  * ```
  */
-export function photonWavelengthFromEnergy<S extends SystemName>(
+export function vacuumWavelengthFromPhotonEnergy<S extends SystemName>(
   sys: UnitSystem<S>,
   energy: Energy<NoInfer<S>>,
 ): VacuumWavelength<S> {
@@ -179,11 +179,11 @@ export function photonEnergyFromFrequency<S extends SystemName>(sys: UnitSystem<
  *
  * @example
  * ```ts
- * import { SI, photonFrequencyFromEnergy, units } from "starlume";
- * SI.valueIn(photonFrequencyFromEnergy(SI, SI.of(1, units.eV)), units.THz); // ≈ 241.7989
+ * import { SI, frequencyFromPhotonEnergy, units } from "starlume";
+ * SI.valueIn(frequencyFromPhotonEnergy(SI, SI.of(1, units.eV)), units.THz); // ≈ 241.7989
  * ```
  */
-export function photonFrequencyFromEnergy<S extends SystemName>(sys: UnitSystem<S>, energy: Energy<NoInfer<S>>): Frequency {
+export function frequencyFromPhotonEnergy<S extends SystemName>(sys: UnitSystem<S>, energy: Energy<NoInfer<S>>): Frequency {
   return frequencyOfEnergy(sys, energy);
 }
 
@@ -208,11 +208,11 @@ export function photonEnergyFromWavenumber<S extends SystemName>(
  *
  * @example
  * ```ts
- * import { CGS, photonWavenumberFromEnergy, units } from "starlume";
- * CGS.valueIn(photonWavenumberFromEnergy(CGS, CGS.of(1, units.eV)), units.per_cm); // ≈ 8065.544
+ * import { CGS, wavenumberFromPhotonEnergy, units } from "starlume";
+ * CGS.valueIn(wavenumberFromPhotonEnergy(CGS, CGS.of(1, units.eV)), units.per_cm); // ≈ 8065.544
  * ```
  */
-export function photonWavenumberFromEnergy<S extends SystemName>(
+export function wavenumberFromPhotonEnergy<S extends SystemName>(
   sys: UnitSystem<S>,
   energy: Energy<NoInfer<S>>,
 ): Wavenumber<S> {

@@ -27,7 +27,7 @@ import {
   lorentzianProfile,
   voigtFwhm,
   voigtProfile,
-  voigtProfileArray,
+  voigtProfileBatch,
 } from "./profiles";
 
 const rel = (a: number, b: number): number => Math.abs(a / b - 1);
@@ -59,7 +59,7 @@ describe("profiles: typed = kernel (SI); CGS = SI × 10⁻² exactly (per cm ins
     const offsets = assumeArray<LengthArray<"CGS">>(Float64Array.of(-3e-9, 0, 1e-9, Number.NaN));
     const b = lenCGS(3e-9);
     const g = lenCGS(3e-10);
-    const r = voigtProfileArray(CGS, offsets, b, g);
+    const r = voigtProfileBatch(CGS, offsets, b, g);
     expect(r.invalid).toEqual([3]);
     for (let i = 0; i < 3; i++) expect(r.values[i]).toBe(voigtProfile(CGS, lenCGS(offsets[i] as number), b, g));
     expect(r.values[3]).toBeNaN();
@@ -75,7 +75,7 @@ describe("profiles: typed = kernel (SI); CGS = SI × 10⁻² exactly (per cm ins
         const n = 2 * 40000 + 1;
         const offs = new Float64Array(n);
         for (let i = 0; i < n; i++) offs[i] = (i - 40000) * step;
-        const { values } = voigtProfileArray(CGS, assumeArray<LengthArray<"CGS">>(offs), lenCGS(b), lenCGS(a * b));
+        const { values } = voigtProfileBatch(CGS, assumeArray<LengthArray<"CGS">>(offs), lenCGS(b), lenCGS(a * b));
         let s = 0;
         for (let i = 0; i < n; i++) s += (values[i] as number) * (i === 0 || i === n - 1 ? 0.5 : 1);
         const area = s * step;
@@ -165,14 +165,14 @@ describe("bad input: RangeError naming the parameter and the caller's unit", () 
     expect(() => lorentzianProfile(SI, lenSI(Number.NaN), lenSI(1))).toThrow(/^offset must be a finite number m; got NaN$/);
     expect(() => voigtProfile(SI, lenSI(0), lenSI(0), lenSI(0))).toThrow(/^lorentzHwhm must be a finite number > 0 m; got 0$/);
     expect(() => voigtProfile(CGS, lenCGS(0), lenCGS(-1), lenCGS(1))).toThrow(/^dopplerWidth must be a finite number >= 0 cm/);
-    expect(() => voigtProfileArray(CGS, assumeArray<LengthArray<"CGS">>(new Float64Array(1)), lenCGS(1), lenCGS(-1))).toThrow(/^lorentzHwhm must/);
+    expect(() => voigtProfileBatch(CGS, assumeArray<LengthArray<"CGS">>(new Float64Array(1)), lenCGS(1), lenCGS(-1))).toThrow(/^lorentzHwhm must/);
   });
   it("widths", () => {
     const m = atomicMass(CGS, 1);
     expect(() => dopplerVelocityWidth(CGS, T(-1), m)).toThrow(/^temperature must be a finite number > 0 K/);
     expect(() => dopplerVelocityWidth(CGS, T(1), assume<Mass<"CGS">>(0))).toThrow(/^mass must be a finite number > 0 g; got 0$/);
     expect(() => dopplerWidth(CGS, lenCGS(1e-5), T(1), m, assume<Velocity<"CGS">>(-1))).toThrow(/^microturbulence must be a finite number >= 0 cm s\^-1/);
-    expect(() => dopplerWidth(SI, lenSI(-1), T(1), atomicMass(SI, 1))).toThrow(/^centerWavelength must/);
+    expect(() => dopplerWidth(SI, lenSI(-1), T(1), atomicMass(SI, 1))).toThrow(/^centreWavelength must/);
     expect(() => lorentzHwhm(SI, lenSI(1e-7), hz(-1))).toThrow(/^dampingRate must be a finite number >= 0 s\^-1/);
     expect(() => atomicMass(SI, 0)).toThrow(/relativeAtomicMass/);
   });
@@ -181,11 +181,11 @@ describe("bad input: RangeError naming the parameter and the caller's unit", () 
 describe("batch reasons and results beyond the double range", () => {
   it("non-finite offsets are reported with the scalar message; widths both 0 throw before any row", () => {
     const offsets = assumeArray<LengthArray<"CGS">>(Float64Array.of(0, Number.NaN, Infinity));
-    const r = voigtProfileArray(CGS, offsets, lenCGS(3e-9), lenCGS(0));
+    const r = voigtProfileBatch(CGS, offsets, lenCGS(3e-9), lenCGS(0));
     expect(r.invalid).toEqual([1, 2]);
     expect(r.reasons).toEqual(["offset must be a finite number cm; got NaN", "offset must be a finite number cm; got Infinity"]);
     expect(() => voigtProfile(CGS, lenCGS(Number.NaN), lenCGS(3e-9), lenCGS(0))).toThrow(new RangeError(r.reasons[0]));
-    expect(() => voigtProfileArray(CGS, offsets, lenCGS(0), lenCGS(0))).toThrow(/^lorentzHwhm must be a finite number > 0 cm; got 0$/);
+    expect(() => voigtProfileBatch(CGS, offsets, lenCGS(0), lenCGS(0))).toThrow(/^lorentzHwhm must be a finite number > 0 cm; got 0$/);
   });
   it("a profile too tall for a double throws naming the arguments instead of returning Infinity", () => {
     // φ_G(0) = 1/(b√π) = 5.6e309 m⁻¹ for b = 1e-310 m

@@ -79,8 +79,8 @@ const relativeAtomicMass = lawInput("relativeAtomicMass", kinds.dimensionless);
 const temperature = lawInput("temperature", kinds.temperature);
 const mass = lawInput("mass", kinds.mass);
 const microturbulence = lawInput("microturbulence", kinds.velocity, { check: "nonNegative" });
-const centerWavelength = lawInput("centerWavelength", kinds.length);
-const centerFrequency = lawInput("centerFrequency", kinds.frequency);
+const centreWavelength = lawInput("centreWavelength", kinds.length);
+const centreFrequency = lawInput("centreFrequency", kinds.frequency);
 const dampingRate = lawInput("dampingRate", kinds.frequency, { check: "nonNegative" });
 
 const atomMass = defineLaw({ name: "atomic mass", inputs: [relativeAtomicMass], result: kinds.mass, kernel: atomicMassUnchecked });
@@ -98,31 +98,31 @@ const thermalVelocityWidth = defineLaw({
 });
 const wavelengthWidth = defineLaw({
   name: "Doppler width",
-  inputs: [centerWavelength, temperature, mass, microturbulence],
+  inputs: [centreWavelength, temperature, mass, microturbulence],
   result: kinds.length,
   kernel: (l, t, m, xi) => dopplerWidthUnchecked(l, dopplerVelocityWidthUnchecked(t, m, xi)),
 });
 const thermalWavelengthWidth = defineLaw({
   name: "Doppler width",
-  inputs: [centerWavelength, temperature, mass],
+  inputs: [centreWavelength, temperature, mass],
   result: kinds.length,
   kernel: (l, t, m) => dopplerWidthUnchecked(l, dopplerVelocityWidthUnchecked(t, m, 0)),
 });
 const frequencyWidth = defineLaw({
   name: "Doppler width",
-  inputs: [centerFrequency, temperature, mass, microturbulence],
+  inputs: [centreFrequency, temperature, mass, microturbulence],
   result: kinds.frequency,
   kernel: (f, t, m, xi) => dopplerWidthUnchecked(f, dopplerVelocityWidthUnchecked(t, m, xi)),
 });
 const thermalFrequencyWidth = defineLaw({
   name: "Doppler width",
-  inputs: [centerFrequency, temperature, mass],
+  inputs: [centreFrequency, temperature, mass],
   result: kinds.frequency,
   kernel: (f, t, m) => dopplerWidthUnchecked(f, dopplerVelocityWidthUnchecked(t, m, 0)),
 });
 const lorentzWavelength = defineLaw({
   name: "Lorentz HWHM",
-  inputs: [centerWavelength, dampingRate],
+  inputs: [centreWavelength, dampingRate],
   result: kinds.length,
   kernel: lorentzHwhmWavelengthUnchecked,
 });
@@ -200,12 +200,12 @@ export function voigtProfile<S extends SystemName>(
  *
  * @example
  * ```ts
- * import { SI, units, voigtProfileArray } from "starlume";
+ * import { SI, units, voigtProfileBatch } from "starlume";
  * const offsets = SI.arrayOf([-0.1, 0, 0.1], units.nm);
- * const { values } = voigtProfileArray(SI, offsets, SI.of(0.03, units.nm), SI.of(0.003, units.nm)); // WavenumberArray<"SI">
+ * const { values } = voigtProfileBatch(SI, offsets, SI.of(0.03, units.nm), SI.of(0.003, units.nm)); // WavenumberArray<"SI">
  * ```
  */
-export function voigtProfileArray<S extends SystemName>(
+export function voigtProfileBatch<S extends SystemName>(
   sys: UnitSystem<S>,
   offsets: LengthArray<NoInfer<S>>,
   dopplerWidth: Length<NoInfer<S>>,
@@ -260,7 +260,7 @@ export function dopplerVelocityWidth<S extends SystemName>(
  * Doppler width in wavelength, Δλ_D = λ₀ b_v / c, b_v = √(2kT/m + ξ²).
  *
  * @param sys - `SI` (m) or `CGS` (cm)
- * @param centerWavelength - line centre λ₀ (any medium), > 0
+ * @param centreWavelength - line centre λ₀ (any medium), > 0
  * @param temperature - T (> 0)
  * @param mass - absorber mass (> 0)
  * @param microturbulence - ξ ≥ 0 (default 0)
@@ -273,21 +273,21 @@ export function dopplerVelocityWidth<S extends SystemName>(
  */
 export function dopplerWidth<S extends SystemName>(
   sys: UnitSystem<S>,
-  centerWavelength: Length<NoInfer<S>>,
+  centreWavelength: Length<NoInfer<S>>,
   temperature: Temperature,
   mass: Mass<NoInfer<S>>,
   microturbulence?: Velocity<NoInfer<S>>,
 ): Length<S> {
   return microturbulence === undefined
-    ? thermalWavelengthWidth(sys, centerWavelength, temperature, mass)
-    : wavelengthWidth(sys, centerWavelength, temperature, mass, microturbulence);
+    ? thermalWavelengthWidth(sys, centreWavelength, temperature, mass)
+    : wavelengthWidth(sys, centreWavelength, temperature, mass, microturbulence);
 }
 
 /**
  * Doppler width in frequency, Δν_D = ν₀ b_v / c.
  *
  * @param sys - `SI` or `CGS` (the system of the mass and ξ)
- * @param centerFrequency - ν₀ (> 0)
+ * @param centreFrequency - ν₀ (> 0)
  * @example
  * ```ts
  * import { SI, atomicMass, dopplerWidthFrequency, units } from "starlume";
@@ -296,14 +296,14 @@ export function dopplerWidth<S extends SystemName>(
  */
 export function dopplerWidthFrequency<S extends SystemName>(
   sys: UnitSystem<S>,
-  centerFrequency: Frequency,
+  centreFrequency: Frequency,
   temperature: Temperature,
   mass: Mass<NoInfer<S>>,
   microturbulence?: Velocity<NoInfer<S>>,
 ): Frequency {
   return microturbulence === undefined
-    ? thermalFrequencyWidth(sys, centerFrequency, temperature, mass)
-    : frequencyWidth(sys, centerFrequency, temperature, mass, microturbulence);
+    ? thermalFrequencyWidth(sys, centreFrequency, temperature, mass)
+    : frequencyWidth(sys, centreFrequency, temperature, mass, microturbulence);
 }
 
 /**
@@ -311,7 +311,7 @@ export function dopplerWidthFrequency<S extends SystemName>(
  * γ_λ = λ₀² Γ / (4π c) (first order in γ/ν₀).
  *
  * @param sys - `SI` (m) or `CGS` (cm)
- * @param centerWavelength - λ₀ (> 0, any medium)
+ * @param centreWavelength - λ₀ (> 0, any medium)
  * @param dampingRate - Γ, the total decay rate (s⁻¹) of the two levels, ≥ 0
  * @example
  * ```ts
@@ -321,10 +321,10 @@ export function dopplerWidthFrequency<S extends SystemName>(
  */
 export function lorentzHwhm<S extends SystemName>(
   sys: UnitSystem<S>,
-  centerWavelength: Length<NoInfer<S>>,
+  centreWavelength: Length<NoInfer<S>>,
   dampingRate: Frequency,
 ): Length<S> {
-  return lorentzWavelength(sys, centerWavelength, dampingRate);
+  return lorentzWavelength(sys, centreWavelength, dampingRate);
 }
 
 /**

@@ -15,7 +15,7 @@ import { planckRadianceWavelengthBatch } from "../radiation/planck";
 import { equivalentWidthSI, lineCentroidSI, lineDepthSI } from "./kernels/measure";
 import { equivalentWidthFromTau0SI, synthesizeSpectrumSI, tau0FromEquivalentWidthSI } from "./kernels/synthesize";
 import { equivalentWidth, lineCentroid, lineDepth } from "./measure";
-import { airWavelength, airWavelengths, vacuumWavelength } from "./medium";
+import { airWavelength, airWavelengthArray, vacuumWavelength } from "./medium";
 import {
   equivalentWidthFromTau0,
   synthesizePlanckSpectrum,
@@ -41,8 +41,8 @@ describe("synthesis: typed = kernel (SI)", () => {
     const g = gridOf(656e-9, 1e-12, n);
     const cont = new Float64Array(n).map((_, i) => 1e13 * (1 + 1e-4 * i));
     const kernelLines = [
-      { centerM: 656.5e-9, dopplerWidthM: 3e-11, lorentzHwhmM: 1e-12, tau0: 2 },
-      { centerM: 657.2e-9, gaussianSigmaM: 2e-11, lorentzHwhmM: 0, equivalentWidthM: 1e-12 },
+      { centreM: 656.5e-9, dopplerWidthM: 3e-11, lorentzHwhmM: 1e-12, tau0: 2 },
+      { centreM: 657.2e-9, gaussianSigmaM: 2e-11, lorentzHwhmM: 0, equivalentWidthM: 1e-12 },
     ];
     const ref = new Float64Array(n);
     const r = synthesizeSpectrumSI(g, cont, kernelLines, ref);
@@ -103,7 +103,7 @@ describe("synthesis in CGS", () => {
           const b = 2e-10; // cm (0.02 Å)
           const n = 40001;
           const step = b / 8;
-          const grid = airWavelengths(CGS, assumeArray<LengthArray<"CGS">>(gridOf(5e-5 - 20000 * step, step, n)));
+          const grid = airWavelengthArray(CGS, assumeArray<LengthArray<"CGS">>(gridOf(5e-5 - 20000 * step, step, n)));
           const cont = assumeArray<DimensionlessArray>(new Float64Array(n).fill(1));
           const center = airWavelength(CGS, lenCGS(5e-5 + shift * step));
           const W = wOverB * b;
@@ -151,8 +151,8 @@ describe("Planck continuum", () => {
     const n = 2001;
     const step = 0.001; // nm
     const g = SI.arrayOf(Array.from({ length: n }, (_, i) => -0.5 + 655.5 + i * step), units.nm);
-    const centerIndex = 1000;
-    const center = vacuumWavelength(SI, lenSI(g[centerIndex] as number));
+    const centreIndex = 1000;
+    const center = vacuumWavelength(SI, lenSI(g[centreIndex] as number));
     const r = synthesizePlanckSpectrum(SI, g, assume<Temperature>(9500), [{ center, dopplerWidth: SI.of(0.03, units.nm), tau0: 0.8 }]);
     const lo = SI.of(655.7, units.nm);
     const hi = SI.of(656.3, units.nm);

@@ -192,14 +192,14 @@ function fieldToSI(sys: UnitSystem<SystemName>, i: number, field: LawInput, valu
 function resolveLines(sys: UnitSystem<SystemName>, lines: readonly SynthesisLine<SystemName, Medium>[]): ResolvedLinesSI {
   const nl = lines.length;
   const out: ResolvedLinesSI = {
-    centerM: new Float64Array(nl),
+    centreM: new Float64Array(nl),
     dopplerWidthM: new Float64Array(nl),
     lorentzHwhmM: new Float64Array(nl),
     tau0: new Float64Array(nl),
   };
   for (let i = 0; i < nl; i++) {
     const line = lines[i] as SynthesisLine<SystemName, Medium>;
-    out.centerM[i] = fieldToSI(sys, i, center, line.center);
+    out.centreM[i] = fieldToSI(sys, i, center, line.center);
     const hasB = line.dopplerWidth !== undefined;
     if (hasB === (line.gaussianSigma !== undefined)) {
       throw new RangeError(`lines[${i}] must give exactly one of dopplerWidth or gaussianSigma (${sys.coherentUnit(kinds.length.dimension)})`);

@@ -85,7 +85,7 @@ describe("reader", () => {
 describe("converterFrom", () => {
   test("SI powers to erg s⁻¹", () => {
     const toCGS = CGS.converterFrom(kinds.power);
-    expectTypeOf(toCGS(SI.of(1, units.Lsol))).toEqualTypeOf<Power<"CGS">>();
+    expectTypeOf(toCGS(SI.of(1, units.Lsun))).toEqualTypeOf<Power<"CGS">>();
     const c: SystemConverter<LengthDimension, "SI", "CGS"> = CGS.converterFrom(units.m);
     void c;
   });

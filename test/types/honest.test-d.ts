@@ -52,7 +52,7 @@ describe("building and reading", () => {
     expectTypeOf(p).toEqualTypeOf<Angle>();
   });
   test("converting between systems", () => {
-    const l: Power<"CGS"> = CGS.from(SI.of(1, units.Lsol), kinds.power);
+    const l: Power<"CGS"> = CGS.from(SI.of(1, units.Lsun), kinds.power);
     const back: Power<"SI"> = SI.from(l, kinds.power);
     expectTypeOf(back).toEqualTypeOf<Power<"SI">>();
   });
@@ -63,7 +63,7 @@ describe("arithmetic", () => {
     expectTypeOf(add(SI.of(1, units.au), SI.of(1, units.km))).toEqualTypeOf<Length<"SI">>();
   });
   test("products and quotients combine dimensions", () => {
-    const r = SI.of(1, units.Rsol);
+    const r = SI.of(1, units.Rsun);
     const a: Area<"SI"> = mul(r, r);
     const v: Velocity<"CGS"> = div(CGS.of(1, units.km), CGS.of(1, units.s));
     const k: Wavenumber<"SI"> = inv(SI.of(500, units.nm));

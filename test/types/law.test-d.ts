@@ -32,7 +32,7 @@ import {
   type TemperatureArray,
   type UnitSystem,
 } from "../../src/index";
-import { airWavelength, airWavelengths, vacuumWavelength } from "../../src/spectra/index";
+import { airWavelength, airWavelengthArray, vacuumWavelength } from "../../src/spectra/index";
 
 const frequency = lawInput("frequency", kinds.frequency);
 const temperature = lawInput("temperature", kinds.temperature);
@@ -155,12 +155,12 @@ describe("must not compile: misuse of a user-defined law", () => {
     bLambda(SI, 5e-7, T);
   });
   test("an air wavelength into a vacuum: true input", () => {
-    // @ts-expect-error convert with airToVacuum first
+    // @ts-expect-error convert with vacuumFromAir first
     bLambda(SI, air, T);
   });
   test("an air grid into the batch form of a vacuum: true input", () => {
     // @ts-expect-error an air grid
-    bLambda.batch(SI, airWavelengths(SI, SI.arrayOf([500, 600], units.nm)), T);
+    bLambda.batch(SI, airWavelengthArray(SI, SI.arrayOf([500, 600], units.nm)), T);
   });
   test("too few arguments", () => {
     // @ts-expect-error temperature is missing

@@ -1,6 +1,6 @@
 /**
  * Radiation laws are written for vacuum wavelengths: an air wavelength must
- * not reach them (convert it with airToVacuum first); vacuum or unbranded
+ * not reach them (convert it with vacuumFromAir first); vacuum or unbranded
  * lengths are fine.
  */
 import { describe, expectTypeOf, test } from "vitest";
@@ -11,18 +11,18 @@ import {
   planckRadianceWavelengthBatch,
   type SpectralRadiancePerWavelength,
 } from "../../src/index";
-import { airToVacuum, airWavelength, airWavelengths, vacuumWavelength } from "../../src/spectra/index";
+import { vacuumFromAir, airWavelength, airWavelengthArray, vacuumWavelength } from "../../src/spectra/index";
 
 const T = SI.of(5772, units.K);
 const air = airWavelength(SI, SI.of(656.28, units.nm));
 
 describe("air wavelengths never reach vacuum-wavelength laws", () => {
   test("Planck B_λ at an air wavelength", () => {
-    // @ts-expect-error convert with airToVacuum first
+    // @ts-expect-error convert with vacuumFromAir first
     planckRadianceWavelength(SI, air, T);
   });
   test("a Planck batch over an air grid", () => {
-    const grid = airWavelengths(SI, SI.arrayOf([500, 600], units.nm));
+    const grid = airWavelengthArray(SI, SI.arrayOf([500, 600], units.nm));
     // @ts-expect-error an air grid
     planckRadianceWavelengthBatch(SI, grid, T);
   });
@@ -32,7 +32,7 @@ describe("air wavelengths never reach vacuum-wavelength laws", () => {
     brightnessTemperatureWavelength(SI, air, b);
   });
   test("vacuum, converted and unbranded wavelengths are accepted", () => {
-    const viaVacuum = planckRadianceWavelength(SI, airToVacuum(SI, air), T);
+    const viaVacuum = planckRadianceWavelength(SI, vacuumFromAir(SI, air), T);
     const plain = planckRadianceWavelength(SI, SI.of(500, units.nm), T);
     const vac = planckRadianceWavelength(SI, vacuumWavelength(SI, SI.of(500, units.nm)), T);
     expectTypeOf(viaVacuum).toEqualTypeOf<SpectralRadiancePerWavelength<"SI">>();

@@ -26,11 +26,11 @@ import {
   luminosityFromAbsoluteBolometricMagnitude,
   luminosityFromFlux,
   magnitudeDifference,
-  parallaxDistance,
+  distanceEstimateFromParallax,
   parallaxFromDistance,
   radiusFromAngularDiameter,
   reddenFlux,
-  solidAngleOfDisk,
+  solidAngleFromAngularDiameter,
   solveStar,
   surfaceBrightness,
   type StarSolution,
@@ -62,8 +62,8 @@ import {
 const mas = SI.of(12.3, units.mas);
 const pcSI = SI.of(10, units.pc);
 const pcCGS = CGS.of(10, units.pc);
-const lumSI = SI.of(1, units.Lsol);
-const lumCGS = CGS.of(1, units.Lsol);
+const lumSI = SI.of(1, units.Lsun);
+const lumCGS = CGS.of(1, units.Lsun);
 const fluxSI = SI.of(1e-9, units.W_per_m2);
 const fluxCGS = CGS.of(1e-6, units.erg_per_s_cm2);
 const jySI = SI.of(3631, units.Jy);
@@ -86,7 +86,7 @@ describe("photometry mix-ups that must not compile", () => {
     // @ts-expect-error a length is not an angle
     distanceFromParallaxExact(CGS, pcCGS);
     // @ts-expect-error the parallax uncertainty must be an angle too
-    parallaxDistance(SI, mas, pcSI);
+    distanceEstimateFromParallax(SI, mas, pcSI);
   });
   test("f_ν where f_λ is wanted", () => {
     // @ts-expect-error f_ν (per Hz) is not f_λ (per metre)
@@ -155,9 +155,9 @@ describe("photometry mix-ups that must not compile", () => {
     // @ts-expect-error the angular diameter must be an angle
     radiusFromAngularDiameter(SI, pcSI, pcSI);
     // @ts-expect-error CGS radius with an SI call
-    angularDiameter(SI, CGS.of(1, units.Rsol), pcSI);
+    angularDiameter(SI, CGS.of(1, units.Rsun), pcSI);
     // @ts-expect-error a solid angle needs an angle
-    solidAngleOfDisk(pcSI);
+    solidAngleFromAngularDiameter(pcSI);
   });
   test("a frequency where the extinction law wants a wavelength", () => {
     // @ts-expect-error CCM89 takes a wavelength
@@ -182,7 +182,7 @@ describe("photometry mix-ups that must not compile", () => {
       temperature,
       parallax,
       // @ts-expect-error centimetres in an SI solve
-      radius: { value: CGS.of(1, units.Rsol), sigma: CGS.of(0.1, units.Rsol) },
+      radius: { value: CGS.of(1, units.Rsun), sigma: CGS.of(0.1, units.Rsun) },
     });
     solveStar(SI, {
       temperature,
@@ -238,7 +238,7 @@ describe("honest photometry code compiles", () => {
     expectTypeOf(distanceFromParallax(SI, SI.of(12.3, units.mas))).toEqualTypeOf<Length<"SI">>();
     expectTypeOf(distanceFromParallax(CGS, SI.of(0.0123, units.arcsec))).toEqualTypeOf<Length<"CGS">>();
     expectTypeOf(parallaxFromDistance(CGS, pcCGS)).toEqualTypeOf<Angle>();
-    expectTypeOf(parallaxDistance(SI, mas, SI.of(0.1, units.uas)).distance).toEqualTypeOf<Length<"SI">>();
+    expectTypeOf(distanceEstimateFromParallax(SI, mas, SI.of(0.1, units.uas)).distance).toEqualTypeOf<Length<"SI">>();
   });
   test("inverse square in SI and CGS", () => {
     expectTypeOf(fluxFromLuminosity(SI, lumSI, pcSI)).toEqualTypeOf<Flux<"SI">>();
@@ -259,8 +259,8 @@ describe("honest photometry code compiles", () => {
     expectTypeOf(fNuFromFLambda(CGS, fl, CGS.of(5500, units.angstrom))).toEqualTypeOf<SpectralFluxPerFrequency<"CGS">>();
   });
   test("angular size and surface brightness", () => {
-    expectTypeOf(angularDiameter(SI, SI.of(1, units.Rsol), SI.of(1, units.au), "disk")).toEqualTypeOf<Angle>();
-    expectTypeOf(solidAngleOfDisk(mas)).toEqualTypeOf<SolidAngle>();
+    expectTypeOf(angularDiameter(SI, SI.of(1, units.Rsun), SI.of(1, units.au), "disk")).toEqualTypeOf<Angle>();
+    expectTypeOf(solidAngleFromAngularDiameter(mas)).toEqualTypeOf<SolidAngle>();
     expectTypeOf(surfaceBrightness(CGS, fluxCGS, mas)).toEqualTypeOf<Radiance<"CGS">>();
   });
   test("reddening returns the type it was given", () => {

@@ -4,7 +4,7 @@
  * tsc and vitest fail) and honest calls that must (expectTypeOf).
  */
 import { describe, expectTypeOf, test } from "vitest";
-import { htmlMarkup, markupPlain, svgChart, type ChartSpec, type MarkerShape, type ResidualPanel, type ScatterSeries } from "../../src/plot/index";
+import { htmlFromMarkup, plainTextFromMarkup, svgChart, type ChartSpec, type MarkerShape, type ResidualPanel, type ScatterSeries } from "../../src/plot/index";
 
 describe("svgChart settings", () => {
   test("a reversed log axis, x/y error bars, hollow squares, a residual panel and inline band labels compile", () => {
@@ -20,8 +20,8 @@ describe("svgChart settings", () => {
     };
     expectTypeOf(svgChart(spec)).toEqualTypeOf<string>();
     expectTypeOf<MarkerShape>().toEqualTypeOf<"circle" | "square" | "diamond" | "dash">();
-    expectTypeOf(htmlMarkup("T_{eff}")).toEqualTypeOf<string>();
-    expectTypeOf(markupPlain("T_{eff}")).toEqualTypeOf<string>();
+    expectTypeOf(htmlFromMarkup("T_{eff}")).toEqualTypeOf<string>();
+    expectTypeOf(plainTextFromMarkup("T_{eff}")).toEqualTypeOf<string>();
   });
 
   test("an unknown marker shape does not compile", () => {

@@ -60,9 +60,9 @@ import {
   temperatureFromExitance,
   temperatureFromLuminosityRadius,
   temperatureFromPeakWavenumber,
-  wienPeakFrequency,
-  wienPeakWavelength,
-  wienPeakWavenumber,
+  peakFrequency,
+  peakWavelength,
+  peakWavenumber,
   wienRadianceFrequency,
   type ResponseCurve,
   type SpectralRadiancePerWavelengthPerTemperature,
@@ -175,7 +175,7 @@ describe("must not compile: radiometric kinds never mix", () => {
   });
   test("a wavelength where a temperature is wanted", () => {
     // @ts-expect-error m is not K
-    wienPeakWavelength(SI, lamSI);
+    peakWavelength(SI, lamSI);
   });
   test("a spectral exitance (π B_λ, per m) where the bolometric exitance is wanted", () => {
     // @ts-expect-error W m^-2 m^-1 is not W m^-2: integrate over the band first
@@ -208,7 +208,7 @@ describe("must not compile: radiometric kinds never mix", () => {
   });
   test("the peak frequency where a wavenumber is wanted", () => {
     // @ts-expect-error ν_max is in Hz; σ̃_max has its own function
-    const k: Wavenumber<"SI"> = wienPeakFrequency(SI, tempK);
+    const k: Wavenumber<"SI"> = peakFrequency(SI, tempK);
     void k;
   });
   test("F_ν values into the colour temperature from per-wavelength densities", () => {
@@ -240,9 +240,9 @@ describe("must compile: honest code", () => {
     expectTypeOf(luminosityFromRadiusTemperature(SI, constants.Rsun.si, constants.Tsun.si)).toEqualTypeOf<Power<"SI">>();
     expectTypeOf(photonExitance(CGS, tempK)).toEqualTypeOf<PhotonFlux<"CGS">>();
     expectTypeOf(photonEmissionRate(CGS, constants.Rsun.cgs, tempK)).toEqualTypeOf<PhotonRate>();
-    expectTypeOf(wienPeakWavelength(CGS, tempK)).toEqualTypeOf<Length<"CGS">>();
-    expectTypeOf(wienPeakWavenumber(SI, tempK)).toEqualTypeOf<Wavenumber<"SI">>();
-    expectTypeOf(wienPeakFrequency(CGS, tempK)).toEqualTypeOf<Frequency>();
+    expectTypeOf(peakWavelength(CGS, tempK)).toEqualTypeOf<Length<"CGS">>();
+    expectTypeOf(peakWavenumber(SI, tempK)).toEqualTypeOf<Wavenumber<"SI">>();
+    expectTypeOf(peakFrequency(CGS, tempK)).toEqualTypeOf<Frequency>();
     expectTypeOf(bandPhotonRadianceWavelength(CGS, lamCGS, CGS.of(600, units.nm), tempK)).toEqualTypeOf<PhotonRadiance<"CGS">>();
     expectTypeOf(bandMeanRadiance(CGS, curveCGS, tempK, "photon")).toEqualTypeOf<SpectralRadiancePerWavelength<"CGS">>();
     expectTypeOf(planckRadianceWavelengthBatch(SI, gridSI, tempK).values).toEqualTypeOf<SpectralRadiancePerWavelengthArray<"SI">>();
@@ -277,7 +277,7 @@ describe("must compile: honest code", () => {
   });
   test("generic code over the system keeps S", () => {
     function peakRadiance<S extends SystemName>(sys: UnitSystem<S>, t: Temperature): SpectralRadiancePerWavelength<S> {
-      return planckRadianceWavelength(sys, wienPeakWavelength(sys, t), t);
+      return planckRadianceWavelength(sys, peakWavelength(sys, t), t);
     }
     expectTypeOf(peakRadiance(CGS, tempK)).toEqualTypeOf<SpectralRadiancePerWavelength<"CGS">>();
     expectTypeOf(brightnessTemperatureWavelength(CGS, lamCGS, peakRadiance(CGS, tempK))).toEqualTypeOf<Temperature>();

@@ -23,13 +23,13 @@ import {
   type WavenumberArray,
 } from "../../src/quantity/index";
 import {
-  airToVacuum,
-  airToVacuumArray,
+  vacuumFromAir,
+  vacuumFromAirBatch,
   airWavelength,
-  airWavelengths,
+  airWavelengthArray,
   atomicMass,
-  dopplerShift,
-  dopplerShiftArray,
+  observedWavelengthFromRadialVelocity,
+  observedWavelengthFromRadialVelocityBatch,
   dopplerWidth,
   equivalentWidth,
   frequencyFromVacuumWavelength,
@@ -40,11 +40,11 @@ import {
   lineCentroid,
   lineDepth,
   lorentzHwhm,
-  photonEnergyFromWavelength,
+  photonEnergyFromVacuumWavelength,
   photonEnergyFromWavenumber,
-  photonWavelengthFromEnergy,
+  vacuumWavelengthFromPhotonEnergy,
   radialVelocityFromWavelengths,
-  redshiftFromVelocity,
+  redshiftFromRadialVelocity,
   redshiftFromWavelengths,
   seriesVacuumWavelengths,
   synthesizePlanckSpectrum,
@@ -53,13 +53,13 @@ import {
   transitionFrequency,
   transitionVacuumWavelength,
   transitionWavenumber,
-  vacuumToAir,
-  vacuumToAirArray,
+  airFromVacuum,
+  airFromVacuumBatch,
   vacuumWavelength,
-  vacuumWavelengths,
-  velocityFromRedshift,
+  vacuumWavelengthArray,
+  radialVelocityFromRedshift,
   voigtFwhm,
-  voigtProfileArray,
+  voigtProfileBatch,
   wavenumberFromVacuumWavelength,
   type AirWavelength,
   type AirWavelengthArray,
@@ -79,11 +79,11 @@ const vSI = SI.of(30, units.km_per_s);
 const vCGS = CGS.of(30, units.km_per_s);
 const ergs = CGS.of(1e-12, units.erg);
 const joules = SI.of(1e-19, units.J);
-const z: Dimensionless = redshiftFromVelocity(SI, vSI);
+const z: Dimensionless = redshiftFromRadialVelocity(SI, vSI);
 const gridSI = SI.arrayOf([656.0, 656.5, 657.0], units.nm);
 const gridCGS = CGS.arrayOf([6560, 6565, 6570], units.angstrom);
-const airGridSI = airWavelengths(SI, SI.arrayOf([656.0, 656.5, 657.0], units.nm));
-const vacGridSI = vacuumWavelengths(SI, SI.arrayOf([656.0, 656.5, 657.0], units.nm));
+const airGridSI = airWavelengthArray(SI, SI.arrayOf([656.0, 656.5, 657.0], units.nm));
+const vacGridSI = vacuumWavelengthArray(SI, SI.arrayOf([656.0, 656.5, 657.0], units.nm));
 declare const contSI: SpectralFluxPerWavelengthArray<"SI">;
 declare const contCGS: SpectralFluxPerWavelengthArray<"CGS">;
 declare const radianceSI: SpectralRadiancePerWavelengthArray<"SI">;
@@ -95,26 +95,26 @@ declare function wantsLengthSI(w: Length<"SI">): void;
 
 describe("medium mix-ups that must not compile", () => {
   test("a vacuum wavelength where an air wavelength is expected", () => {
-    // @ts-expect-error airToVacuum needs an AirWavelength
-    airToVacuum(SI, vacSI);
+    // @ts-expect-error vacuumFromAir needs an AirWavelength
+    vacuumFromAir(SI, vacSI);
   });
   test("an air wavelength where a vacuum wavelength is expected", () => {
-    // @ts-expect-error vacuumToAir needs a VacuumWavelength
-    vacuumToAir(SI, airSI);
+    // @ts-expect-error airFromVacuum needs a VacuumWavelength
+    airFromVacuum(SI, airSI);
   });
   test("converting an unbranded length: the conversion demands the medium be stated", () => {
     // @ts-expect-error a plain Length is not known to be in vacuum here
-    vacuumToAir(SI, plainSI);
+    airFromVacuum(SI, plainSI);
     // @ts-expect-error nor in air
-    airToVacuum(SI, plainSI);
+    vacuumFromAir(SI, plainSI);
   });
   test("converting twice does not compile", () => {
-    // @ts-expect-error vacuumToAir's result is an air wavelength
-    vacuumToAir(SI, vacuumToAir(SI, vacSI));
+    // @ts-expect-error airFromVacuum's result is an air wavelength
+    airFromVacuum(SI, airFromVacuum(SI, vacSI));
   });
   test("an air wavelength into a photon conversion (E = hc/λ needs vacuum)", () => {
     // @ts-expect-error photon energy from an air wavelength
-    photonEnergyFromWavelength(SI, airSI);
+    photonEnergyFromVacuumWavelength(SI, airSI);
     // @ts-expect-error frequency from an air wavelength
     frequencyFromVacuumWavelength(SI, airSI);
     // @ts-expect-error wavenumber from an air wavelength
@@ -126,19 +126,19 @@ describe("medium mix-ups that must not compile", () => {
     // @ts-expect-error airWavelength rejects a vacuum wavelength
     airWavelength(SI, vacSI);
     // @ts-expect-error the array brands too
-    vacuumWavelengths(SI, airGridSI);
+    vacuumWavelengthArray(SI, airGridSI);
   });
   test("line lists are vacuum wavelengths, not air", () => {
     // @ts-expect-error transitionVacuumWavelength returns a VacuumWavelength
     wantsAirSI(transitionVacuumWavelength(SI, ions.H, 2, 3));
     // @ts-expect-error series arrays too
-    airToVacuumArray(SI, seriesVacuumWavelengths(SI, ions.H, "balmer", 3));
+    vacuumFromAirBatch(SI, seriesVacuumWavelengths(SI, ions.H, "balmer", 3));
   });
   test("a Doppler-shifted air wavelength stays air", () => {
     // @ts-expect-error the shift keeps the air brand
-    wantsVacuumSI(dopplerShift(SI, airSI, vSI));
+    wantsVacuumSI(observedWavelengthFromRadialVelocity(SI, airSI, vSI));
     // @ts-expect-error so does the array version
-    wantsVacuumArraySI(dopplerShiftArray(SI, airGridSI, vSI).values);
+    wantsVacuumArraySI(observedWavelengthFromRadialVelocityBatch(SI, airGridSI, vSI).values);
   });
   test("observed and rest wavelengths in different media (an 83 km/s error)", () => {
     // @ts-expect-error air observed vs vacuum rest
@@ -175,19 +175,19 @@ describe("system and dimension mix-ups that must not compile", () => {
     // @ts-expect-error measurement on a CGS grid with SI
     lineDepth(SI, gridCGS, contSI, contSI, plainSI, plainSI);
     // @ts-expect-error Voigt profile over CGS offsets with SI
-    voigtProfileArray(SI, gridCGS, widthSI, widthSI);
+    voigtProfileBatch(SI, gridCGS, widthSI, widthSI);
   });
   test("a CGS wavelength in an SI call", () => {
     // @ts-expect-error vacuum wavelength in cm, system SI
-    photonEnergyFromWavelength(SI, vacCGS);
+    photonEnergyFromVacuumWavelength(SI, vacCGS);
     // @ts-expect-error also for the conversions
-    vacuumToAir(SI, vacCGS);
+    airFromVacuum(SI, vacCGS);
     // @ts-expect-error and the line widths
     gaussianProfile(SI, lenCGS, widthSI);
   });
   test("a CGS wavelength in the medium-preserving (generic) functions with SI", () => {
     // @ts-expect-error Doppler shift of a cm wavelength with SI
-    dopplerShift(SI, vacCGS, vSI);
+    observedWavelengthFromRadialVelocity(SI, vacCGS, vSI);
     // @ts-expect-error redshift from cm wavelengths with SI
     redshiftFromWavelengths(SI, vacCGS, vacCGS);
     // @ts-expect-error rest wavelength in cm, observed in m
@@ -199,29 +199,29 @@ describe("system and dimension mix-ups that must not compile", () => {
   });
   test("a frequency where a wavelength is wanted", () => {
     // @ts-expect-error ν is not λ
-    photonEnergyFromWavelength(SI, freq);
+    photonEnergyFromVacuumWavelength(SI, freq);
     // @ts-expect-error nor a line centre
     dopplerWidth(SI, freq, SI.of(5772, units.K), atomicMass(SI, 56));
   });
   test("a velocity in the wrong system", () => {
     // @ts-expect-error cm/s velocity, SI system
-    dopplerShift(SI, vacSI, vCGS);
+    observedWavelengthFromRadialVelocity(SI, vacSI, vCGS);
     // @ts-expect-error also for the redshift
-    redshiftFromVelocity(SI, vCGS);
+    redshiftFromRadialVelocity(SI, vCGS);
     // @ts-expect-error and microturbulence
     dopplerWidth(SI, vacSI, SI.of(5772, units.K), atomicMass(SI, 56), vCGS);
   });
   test("an energy in erg (CGS) to an SI call", () => {
     // @ts-expect-error erg into SI
-    photonWavelengthFromEnergy(SI, ergs);
+    vacuumWavelengthFromPhotonEnergy(SI, ergs);
     // @ts-expect-error and J into CGS
-    photonWavelengthFromEnergy(CGS, joules);
+    vacuumWavelengthFromPhotonEnergy(CGS, joules);
   });
   test("a redshift passed as a velocity, and a velocity as a redshift", () => {
     // @ts-expect-error z is dimensionless
-    dopplerShift(SI, vacSI, z);
+    observedWavelengthFromRadialVelocity(SI, vacSI, z);
     // @ts-expect-error v is not z
-    velocityFromRedshift(SI, vSI);
+    radialVelocityFromRedshift(SI, vSI);
   });
   test("an energy result is not a wavelength, a profile is not a length", () => {
     // @ts-expect-error Energy<"SI"> is not a Length
@@ -271,26 +271,26 @@ describe("honest code compiles", () => {
     expectTypeOf(ionizationEnergy(SI, ions.H)).toEqualTypeOf<Energy<"SI">>();
   });
   test("conversions: vacuum ↔ air, scalar and array", () => {
-    expectTypeOf(vacuumToAir(SI, vacSI)).toEqualTypeOf<AirWavelength<"SI">>();
-    expectTypeOf(airToVacuum(CGS, vacuumToAir(CGS, vacCGS))).toEqualTypeOf<VacuumWavelength<"CGS">>();
-    expectTypeOf(vacuumToAirArray(SI, vacGridSI).values).toEqualTypeOf<AirWavelengthArray<"SI">>();
+    expectTypeOf(airFromVacuum(SI, vacSI)).toEqualTypeOf<AirWavelength<"SI">>();
+    expectTypeOf(vacuumFromAir(CGS, airFromVacuum(CGS, vacCGS))).toEqualTypeOf<VacuumWavelength<"CGS">>();
+    expectTypeOf(airFromVacuumBatch(SI, vacGridSI).values).toEqualTypeOf<AirWavelengthArray<"SI">>();
   });
   test("a branded wavelength is still a Length; an unbranded Length counts as vacuum where vacuum is needed", () => {
     wantsLengthSI(vacSI);
     wantsLengthSI(airSI);
-    expectTypeOf(photonEnergyFromWavelength(SI, plainSI)).toEqualTypeOf<Energy<"SI">>();
-    expectTypeOf(photonEnergyFromWavelength(SI, vacSI)).toEqualTypeOf<Energy<"SI">>();
-    expectTypeOf(photonWavelengthFromEnergy(CGS, CGS.of(2, units.eV))).toEqualTypeOf<VacuumWavelength<"CGS">>();
+    expectTypeOf(photonEnergyFromVacuumWavelength(SI, plainSI)).toEqualTypeOf<Energy<"SI">>();
+    expectTypeOf(photonEnergyFromVacuumWavelength(SI, vacSI)).toEqualTypeOf<Energy<"SI">>();
+    expectTypeOf(vacuumWavelengthFromPhotonEnergy(CGS, CGS.of(2, units.eV))).toEqualTypeOf<VacuumWavelength<"CGS">>();
     expectTypeOf(SI.valueIn(vacSI, units.nm)).toEqualTypeOf<number>();
   });
   test("Doppler: shifts keep the input's type; redshift and velocity", () => {
-    expectTypeOf(dopplerShift(SI, airSI, vSI)).toEqualTypeOf<AirWavelength<"SI">>();
-    expectTypeOf(dopplerShift(SI, vacSI, vSI, "classical")).toEqualTypeOf<VacuumWavelength<"SI">>();
-    expectTypeOf(dopplerShift(SI, plainSI, vSI)).toEqualTypeOf<Length<"SI">>();
-    expectTypeOf(dopplerShiftArray(CGS, gridCGS, vCGS).values).toEqualTypeOf<LengthArray<"CGS">>();
-    expectTypeOf(redshiftFromVelocity(CGS, vCGS)).toEqualTypeOf<Dimensionless>();
-    expectTypeOf(velocityFromRedshift(SI, 0.1)).toEqualTypeOf<Velocity<"SI">>();
-    expectTypeOf(velocityFromRedshift(CGS, z)).toEqualTypeOf<Velocity<"CGS">>();
+    expectTypeOf(observedWavelengthFromRadialVelocity(SI, airSI, vSI)).toEqualTypeOf<AirWavelength<"SI">>();
+    expectTypeOf(observedWavelengthFromRadialVelocity(SI, vacSI, vSI, "classical")).toEqualTypeOf<VacuumWavelength<"SI">>();
+    expectTypeOf(observedWavelengthFromRadialVelocity(SI, plainSI, vSI)).toEqualTypeOf<Length<"SI">>();
+    expectTypeOf(observedWavelengthFromRadialVelocityBatch(CGS, gridCGS, vCGS).values).toEqualTypeOf<LengthArray<"CGS">>();
+    expectTypeOf(redshiftFromRadialVelocity(CGS, vCGS)).toEqualTypeOf<Dimensionless>();
+    expectTypeOf(radialVelocityFromRedshift(SI, 0.1)).toEqualTypeOf<Velocity<"SI">>();
+    expectTypeOf(radialVelocityFromRedshift(CGS, z)).toEqualTypeOf<Velocity<"CGS">>();
     // same medium, or one side unbranded
     expectTypeOf(redshiftFromWavelengths(SI, airSI, airSI)).toEqualTypeOf<Dimensionless>();
     expectTypeOf(redshiftFromWavelengths(SI, airSI, plainSI)).toEqualTypeOf<Dimensionless>();
@@ -298,7 +298,7 @@ describe("honest code compiles", () => {
   });
   test("profiles and widths", () => {
     expectTypeOf(gaussianProfile(CGS, lenCGS, lenCGS)).toEqualTypeOf<Wavenumber<"CGS">>();
-    expectTypeOf(voigtProfileArray(SI, gridSI, widthSI, widthSI).values).toEqualTypeOf<WavenumberArray<"SI">>();
+    expectTypeOf(voigtProfileBatch(SI, gridSI, widthSI, widthSI).values).toEqualTypeOf<WavenumberArray<"SI">>();
     expectTypeOf(dopplerWidth(SI, airSI, SI.of(5772, units.K), atomicMass(SI, 55.845), vSI)).toEqualTypeOf<Length<"SI">>();
     expectTypeOf(lorentzHwhm(CGS, vacCGS, SI.of(1e8, units.Hz))).toEqualTypeOf<Length<"CGS">>();
     expectTypeOf(atomicMass(CGS, 1.008)).toEqualTypeOf<Mass<"CGS">>();

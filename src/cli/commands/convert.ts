@@ -66,7 +66,7 @@ Converts a quantity written as 'number unit' into TARGET, a unit of the same
 kind (dimension) or one of the words SI and CGS (the system's coherent unit).
 Units follow the library's grammar: products with spaces, '/' for division,
 integer powers with '^' (cm^-2) or superscripts, SI prefixes (nm, mJy, kpc),
-and symbols such as A (ångström), um, mas, pc, Lsol, Rsol, Jy, erg. A change of
+and symbols such as A (ångström), um, mas, pc, Lsun, Rsun, Jy, erg. A change of
 kind (e.g. wavelength to frequency) is refused with exit code 2.
 The result is printed with the shortest decimal that reads back as the same
 double, unless --digits is given.`,
@@ -76,7 +76,7 @@ double, unless --digits is given.`,
   ],
   examples: [
     { args: ["3.6e-13 erg s^-1 cm^-2 A^-1", "W m^-2 nm^-1"], note: "a spectral flux density from CGS per ångström to SI per nanometre" },
-    { args: ["1 Lsol", "CGS"], note: "the nominal solar luminosity in erg s^-1" },
+    { args: ["1 Lsun", "CGS"], note: "the nominal solar luminosity in erg s^-1" },
     { args: ["42 mas", "arcsec", "--digits", "3"], note: "milliarcseconds to arcseconds, 3 significant digits" },
   ],
   async run(args: ParsedArgs, io: CliIO): Promise<number> {

@@ -119,12 +119,12 @@ responses and residuals, Planck curves, temperature–luminosity diagram) is wri
       ...withSigma("teff", "K"),
       ...withSigma("theta", "mas"),
       ...withSigma("distance", "pc"),
-      ...withSigma("radius", "Rsol"),
-      ...withSigma("luminosity", "Lsol"),
+      ...withSigma("radius", "Rsun"),
+      ...withSigma("luminosity", "Lsun"),
       { name: "chi2/dof", unit: null },
       { name: "true_teff", unit: "K" },
       { name: "z(teff)", unit: null },
-      { name: "true_radius", unit: "Rsol" },
+      { name: "true_radius", unit: "Rsun" },
       { name: "z(radius)", unit: null },
       { name: "status", unit: null },
     ];
@@ -167,22 +167,22 @@ responses and residuals, Planck curves, temperature–luminosity diagram) is wri
             u(f.sigmaAngularDiameter, units.mas),
             u(st.distance, units.pc),
             u(st.sigmaDistance, units.pc),
-            u(st.radius, units.Rsol),
-            u(st.sigmaRadius, units.Rsol),
-            u(st.luminosity, units.Lsol),
-            u(st.sigmaLuminosity, units.Lsol),
+            u(st.radius, units.Rsun),
+            u(st.sigmaRadius, units.Rsun),
+            u(st.luminosity, units.Lsun),
+            u(st.sigmaLuminosity, units.Lsun),
             f.dof > 0 ? Math.round((f.chi2 / f.dof) * 100) / 100 : null,
             tr !== undefined ? Number(tr.temperatureK.toPrecision(6)) : null,
             tr !== undefined ? pull(f.temperature, tr.temperatureK, f.sigmaTemperature) : null,
-            tr !== undefined ? Number(u(tr.radiusM, units.Rsol).toPrecision(6)) : null,
+            tr !== undefined ? Number(u(tr.radiusM, units.Rsun).toPrecision(6)) : null,
             tr !== undefined ? pull(st.radius, tr.radiusM, st.sigmaRadius) : null,
             o.flags.length === 0 ? "ok" : `flagged: ${o.flags.join("+")}`,
           ];
           seds.push(sedData(o.id, o));
-          hr.push({ name: o.id, temperatureK: f.temperature, sigmaT: f.sigmaTemperature, luminosity: u(st.luminosity, units.Lsol), sigmaL: u(st.sigmaLuminosity, units.Lsol) });
+          hr.push({ name: o.id, temperatureK: f.temperature, sigmaT: f.sigmaTemperature, luminosity: u(st.luminosity, units.Lsun), sigmaL: u(st.sigmaLuminosity, units.Lsun) });
           if (tr !== undefined) {
             const lTrue = 4 * Math.PI * tr.radiusM ** 2 * 5.670374419e-8 * tr.temperatureK ** 4; // L = 4πR²σT⁴, σ from CODATA 2018
-            truthHr.push({ temperatureK: tr.temperatureK, luminosity: u(lTrue, units.Lsol) });
+            truthHr.push({ temperatureK: tr.temperatureK, luminosity: u(lTrue, units.Lsun) });
           }
         }
       }
@@ -196,9 +196,9 @@ responses and residuals, Planck curves, temperature–luminosity diagram) is wri
 
     if (!optFlag(args, "no-report")) {
       const reportDir = optString(args, "report") ?? "starlume-report";
-      const figures: ReportFigure[] = fitFigures(seds, [], bandSet, "Lsol");
+      const figures: ReportFigure[] = fitFigures(seds, [], bandSet, "Lsun");
       figures.push({
-        svg: hrFigure(hr, "Lsol", truthHr),
+        svg: hrFigure(hr, "Lsun", truthHr),
         caption:
           "Fitted effective temperature (decreasing to the right, as in a Hertzsprung–Russell diagram) against luminosity from the fit and the parallax, with 1σ error bars in both (circles), and the true values chosen when the demo data were generated (hollow diamonds).",
       });

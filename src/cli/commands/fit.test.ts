@@ -23,7 +23,7 @@ describe("starlume fit", () => {
       expect(row.n_bands).toBe("6");
       // The demo data carry 1.5–3 % Gaussian noise (scripts/gen-demo-survey.mjs); 3σ bounds a fair draw.
       const zT = (Number(row["teff [K]"]) - Number(t["teff [K]"])) / Number(row["sigma(teff) [K]"]);
-      const zR = (Number(row["radius [Rsol]"]) - Number(t["radius [Rsol]"])) / Number(row["sigma(radius) [Rsol]"]);
+      const zR = (Number(row["radius [Rsun]"]) - Number(t["radius [Rsun]"])) / Number(row["sigma(radius) [Rsun]"]);
       expect(Math.abs(zT)).toBeLessThan(3);
       expect(Math.abs(zR)).toBeLessThan(3);
     }

@@ -14,7 +14,7 @@ import { SI } from "../../quantity/system";
 import type { Unit } from "../../quantity/unit";
 import { units } from "../../quantity/units";
 import {
-  dopplerShift,
+  observedWavelengthFromRadialVelocity,
   hydrogenSeries,
   ions,
   seriesLimitVacuumWavelength,
@@ -23,7 +23,7 @@ import {
   transitionEnergy,
   transitionVacuumWavelength,
   transitionWavenumber,
-  vacuumToAir,
+  airFromVacuum,
   type Ion,
   type LevelModel,
   type SeriesName,
@@ -111,7 +111,7 @@ export function computeLines(s: LinesSetup): LineRow[] {
   const v = s.velocityMs === null ? null : (s.velocityMs as Velocity<"SI">);
   const rows: LineRow[] = [];
   const make = (label: string, nUpper: number | null, vac: VacuumWavelength<"SI">, energyJ: number, sigma: number): LineRow => {
-    const obsVac = v === null ? vac : dopplerShift(SI, vac, v);
+    const obsVac = v === null ? vac : observedWavelengthFromRadialVelocity(SI, vac, v);
     let rest = NaN;
     let observed = NaN;
     let reason: string | null = null;
@@ -120,9 +120,9 @@ export function computeLines(s: LinesSetup): LineRow[] {
         rest = vac;
         observed = obsVac;
       } else {
-        const air = vacuumToAir(SI, vac);
+        const air = airFromVacuum(SI, vac);
         rest = air;
-        observed = v === null ? air : dopplerShift(SI, air, v);
+        observed = v === null ? air : observedWavelengthFromRadialVelocity(SI, air, v);
       }
     } catch (e) {
       if (!(e instanceof RangeError)) throw e;

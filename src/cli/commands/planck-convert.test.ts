@@ -77,7 +77,7 @@ describe("starlume convert", () => {
   });
 
   it("converts to SI and CGS coherent units, with named units where they exist", async () => {
-    expect((await runCli(["convert", "1 Lsol", "CGS"])).stdout).toBe("3.828e33 erg s^-1\n"); // IAU 2015 B3 nominal L☉
+    expect((await runCli(["convert", "1 Lsun", "CGS"])).stdout).toBe("3.828e33 erg s^-1\n"); // IAU 2015 B3 nominal L☉
     expect((await runCli(["convert", "1 au", "SI"])).stdout).toBe("149597870700 m\n"); // IAU 2012 B2, exact
     expect((await runCli(["convert", "1 pc", "ly", "--digits", "6"])).stdout).toBe("3.26156 ly\n");
     expect((await runCli(["convert", "1500 mas", "arcsec", "--number"])).stdout).toBe("1.5\n");

@@ -11,7 +11,7 @@ import { SI } from "../../quantity/system";
 import { units } from "../../quantity/units";
 import { BATCH_ROWS } from "../run-table";
 
-const HEADER = "name,teff [K],sigma(teff) [K],radius [Rsol],sigma(radius) [Rsol],distance [pc],sigma(distance) [pc]";
+const HEADER = "name,teff [K],sigma(teff) [K],radius [Rsun],sigma(radius) [Rsun],distance [pc],sigma(distance) [pc]";
 
 describe("starlume solve", () => {
   it("derives L, θ and f from T, R, d (Stefan–Boltzmann, small-angle diameter, inverse square)", async () => {
@@ -25,16 +25,16 @@ describe("starlume solve", () => {
     // Expected values computed here from the defining relations with CODATA 2018 σ and IAU 2015 R☉, pc;
     // exactly determined, so the solver must reproduce them to rounding (1e-12 relative: a log/exp round trip, ~10 ulp).
     const l = (4 * Math.PI * R_SUN ** 2 * SIGMA * 5772 ** 4) / L_SUN;
-    expect(Number(row["luminosity [Lsol]"])).toBeCloseTo(l, 12);
+    expect(Number(row["luminosity [Lsun]"])).toBeCloseTo(l, 12);
     const thetaMas = ((2 * R_SUN) / (10 * PARSEC)) * (648e6 / Math.PI);
     expect(Math.abs(Number(row["theta [mas]"]) / thetaMas - 1)).toBeLessThan(1e-12);
     const f = (L_SUN * l) / (4 * Math.PI * (10 * PARSEC) ** 2);
     expect(Math.abs(Number(row["fbol [W m^-2]"]) / f - 1)).toBeLessThan(1e-12);
     // IAU 2015 B3: the nominal T☉ = 5772 K is L☉ and R☉ rounded to 4 digits, so L = 1 L☉ to ~1e-4 (common practice).
-    expect(Math.abs(Number(row["luminosity [Lsol]"]) - 1)).toBeLessThan(2e-4);
+    expect(Math.abs(Number(row["luminosity [Lsun]"]) - 1)).toBeLessThan(2e-4);
     // First-order σ of L: (σL/L)² = (4 σT/T)² + (2 σR/R)² (independent inputs).
     const rel = Math.hypot((4 * 10) / 5772, 2 * 0.01);
-    expect(Number(row["sigma(luminosity) [Lsol]"]) / Number(row["luminosity [Lsol]"])).toBeCloseTo(rel, 10);
+    expect(Number(row["sigma(luminosity) [Lsun]"]) / Number(row["luminosity [Lsun]"])).toBeCloseTo(rel, 10);
     expect(row.chi2).toBe("0");
     expect(row.dof).toBe("0");
   });
@@ -103,7 +103,7 @@ describe("starlume solve", () => {
     const ra = csvRecords(a.stdout)[0] as Record<string, string>;
     const rb = csvRecords(b.stdout)[0] as Record<string, string>;
     // Same star in different input units; output radius km / R☉ = R☉ in km (IAU 2015 B3, 695 700 km); 1e-12: a few roundings.
-    expect(Number(rb["radius [km]"]) / Number(ra["radius [Rsol]"]) / 695700 - 1).toBeCloseTo(0, 12);
+    expect(Number(rb["radius [km]"]) / Number(ra["radius [Rsun]"]) / 695700 - 1).toBeCloseTo(0, 12);
     expect(Number(rb["fbol [erg s^-1 cm^-2]"]) / Number(ra["fbol [W m^-2]"]) / 1e3 - 1).toBeCloseTo(0, 12);
     // pc → ly: 1 pc = 3.2615637771674… ly (IAU 2015 B2 pc, Julian-year light-year)
     expect(Number(rb["distance [ly]"]) / Number(ra["distance [pc]"])).toBeCloseTo(3.2615637771674333, 12);
@@ -113,7 +113,7 @@ describe("starlume solve", () => {
   });
 
   it("reports the consistency of an over-determined row", async () => {
-    const stdin = "teff [K],sigma(teff) [K],radius [Rsol],sigma(radius) [Rsol],distance [pc],sigma(distance) [pc],luminosity [Lsol],sigma(luminosity) [Lsol]\n5772,10,1,0.01,10,0.1,2,0.02\n";
+    const stdin = "teff [K],sigma(teff) [K],radius [Rsun],sigma(radius) [Rsun],distance [pc],sigma(distance) [pc],luminosity [Lsun],sigma(luminosity) [Lsun]\n5772,10,1,0.01,10,0.1,2,0.02\n";
     const r = await runCli(["solve", "-", "--format", "csv"], { stdin });
     const row = csvRecords(r.stdout)[0] as Record<string, string>;
     expect(row.dof).toBe("1");
@@ -126,20 +126,20 @@ describe("starlume solve", () => {
   });
 
   it("treats a value without an uncertainty column as exact, or uses --assume-sigma", async () => {
-    const stdin = "teff [K],radius [Rsol],distance [pc]\n5772,1,10\n";
+    const stdin = "teff [K],radius [Rsun],distance [pc]\n5772,1,10\n";
     const exact = await runCli(["solve", "-", "--format", "csv"], { stdin });
     expect(exact.stderr).toContain("note: column 'teff' has no sigma(teff); its values are treated as exact");
     const row = csvRecords(exact.stdout)[0] as Record<string, string>;
-    expect(Number(row["sigma(luminosity) [Lsol]"]) / Number(row["luminosity [Lsol]"])).toBeLessThan(1e-8);
+    expect(Number(row["sigma(luminosity) [Lsun]"]) / Number(row["luminosity [Lsun]"])).toBeLessThan(1e-8);
     const assumed = await runCli(["solve", "-", "--format", "csv", "--assume-sigma", "0.01"], { stdin });
     const r2 = csvRecords(assumed.stdout)[0] as Record<string, string>;
     // σL/L = √((4·0.01)² + (2·0.01)²) for 1 % on T and R.
-    expect(Number(r2["sigma(luminosity) [Lsol]"]) / Number(r2["luminosity [Lsol]"])).toBeCloseTo(Math.hypot(0.04, 0.02), 10);
+    expect(Number(r2["sigma(luminosity) [Lsun]"]) / Number(r2["luminosity [Lsun]"])).toBeCloseTo(Math.hypot(0.04, 0.02), 10);
   });
 
   it("reads JSON Lines and writes JSON (keys are the header texts), table and JSON Lines", async () => {
     const stdin = [
-      `{"star":"a","teff [K]":5772,"sigma(teff) [K]":10,"radius [Rsol]":1,"sigma(radius) [Rsol]":0.01,"distance [pc]":10,"sigma(distance) [pc]":0.1}`,
+      `{"star":"a","teff [K]":5772,"sigma(teff) [K]":10,"radius [Rsun]":1,"sigma(radius) [Rsun]":0.01,"distance [pc]":10,"sigma(distance) [pc]":0.1}`,
       "not json",
       `{"star":"b","teff [K]":5000,"colour":"red"}`,
     ].join("\n");
@@ -149,7 +149,7 @@ describe("starlume solve", () => {
     expect(out).toHaveLength(3);
     expect(out[0]?.star).toBe("a");
     expect(out[0]?.status).toBe("ok");
-    expect(typeof out[0]?.["radius [Rsol]"]).toBe("number");
+    expect(typeof out[0]?.["radius [Rsun]"]).toBe("number");
     expect(out[1]?.line).toBe(2);
     expect(String(out[1]?.reason)).toContain("invalid JSON");
     expect(String(out[2]?.reason)).toContain("key 'colour' is not a column");
@@ -215,7 +215,7 @@ describe("starlume solve", () => {
   it("solves exactly determined rows in batches: the scalar solver's numbers, every row in order across chunks, reasons kept", async () => {
     // Seven row kinds, cycling; more rows than one chunk so that chunk boundaries are crossed.
     const n = BATCH_ROWS + 900;
-    const head = "name,teff [K],sigma(teff) [K],radius [Rsol],sigma(radius) [Rsol],distance [pc],sigma(distance) [pc],parallax [mas],sigma(parallax) [mas],fbol [W m^-2],sigma(fbol) [W m^-2],theta [mas],sigma(theta) [mas]";
+    const head = "name,teff [K],sigma(teff) [K],radius [Rsun],sigma(radius) [Rsun],distance [pc],sigma(distance) [pc],parallax [mas],sigma(parallax) [mas],fbol [W m^-2],sigma(fbol) [W m^-2],theta [mas],sigma(theta) [mas]";
     const lines = [head];
     type Obs = StarObservations<"SI">;
     const expected: (Obs | string)[] = [];
@@ -237,11 +237,11 @@ describe("starlume solve", () => {
           break;
         case 1: // teff + radius + distance
           row = [cell(t, 40), cell(r, 0.01), cell(d, d / 100), cell(null, null), cell(null, null), cell(null, null)].join(",");
-          expected.push({ temperature: m(t, 40, units.K), radius: m(r, 0.01, units.Rsol), distance: m(d, d / 100, units.pc) } as unknown as Obs);
+          expected.push({ temperature: m(t, 40, units.K), radius: m(r, 0.01, units.Rsun), distance: m(d, d / 100, units.pc) } as unknown as Obs);
           break;
         case 2: // four inputs: over-determined, the scalar solver with its consistency report
           row = [cell(t, 40), cell(r, 0.01), cell(d, d / 100), cell(p * 1.01, 0.05), cell(null, null), cell(null, null)].join(",");
-          expected.push({ temperature: m(t, 40, units.K), radius: m(r, 0.01, units.Rsol), distance: m(d, d / 100, units.pc), parallax: m(p * 1.01, 0.05, units.mas) } as unknown as Obs);
+          expected.push({ temperature: m(t, 40, units.K), radius: m(r, 0.01, units.Rsun), distance: m(d, d / 100, units.pc), parallax: m(p * 1.01, 0.05, units.mas) } as unknown as Obs);
           break;
         case 3: // parallax + fbol + theta
           row = [cell(null, null), cell(null, null), cell(null, null), cell(p, 0.05), cell(f, f / 50), cell(th, th / 30)].join(",");
@@ -268,8 +268,8 @@ describe("starlume solve", () => {
     expect(rows).toHaveLength(n);
     const keys: [string, keyof ReturnType<typeof solveStar<"SI">>, (typeof units)[keyof typeof units]][] = [
       ["teff [K]", "temperature", units.K],
-      ["luminosity [Lsol]", "luminosity", units.Lsol],
-      ["radius [Rsol]", "radius", units.Rsol],
+      ["luminosity [Lsun]", "luminosity", units.Lsun],
+      ["radius [Rsun]", "radius", units.Rsun],
       ["distance [pc]", "distance", units.pc],
       ["theta [mas]", "angularDiameter", units.mas],
       ["fbol [W m^-2]", "bolometricFlux", units.W_per_m2],
@@ -316,7 +316,7 @@ describe("starlume solve", () => {
     si.forEach((r, i) => {
       const c = cgs[i] as Record<string, string>;
       expect(Number(c["fbol [erg s^-1 cm^-2]"]) / (1000 * Number(r["fbol [W m^-2]"])) - 1).toBeLessThan(1e-12);
-      expect(Number(c["radius [Rsol]"]) / Number(r["radius [Rsol]"]) - 1).toBeLessThan(1e-12);
+      expect(Number(c["radius [Rsun]"]) / Number(r["radius [Rsun]"]) - 1).toBeLessThan(1e-12);
     });
   });
 });

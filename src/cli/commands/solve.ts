@@ -46,8 +46,8 @@ interface InputQuantity {
 
 const INPUTS: readonly InputQuantity[] = [
   { key: "teff", observation: "temperature", names: ["teff", "t_eff", "temperature"], kind: kinds.temperature, example: "teff [K]" },
-  { key: "luminosity", observation: "luminosity", names: ["luminosity", "lum"], kind: kinds.power, example: "luminosity [Lsol]" },
-  { key: "radius", observation: "radius", names: ["radius"], kind: kinds.length, example: "radius [Rsol]" },
+  { key: "luminosity", observation: "luminosity", names: ["luminosity", "lum"], kind: kinds.power, example: "luminosity [Lsun]" },
+  { key: "radius", observation: "radius", names: ["radius"], kind: kinds.length, example: "radius [Rsun]" },
   { key: "distance", observation: "distance", names: ["distance", "dist"], kind: kinds.length, example: "distance [pc]" },
   { key: "parallax", observation: "parallax", names: ["parallax", "plx"], kind: kinds.angle, example: "parallax [mas]" },
   { key: "fbol", observation: "bolometricFlux", names: ["fbol", "f_bol", "bolometric_flux"], kind: kinds.flux, example: "fbol [erg s^-1 cm^-2]" },
@@ -69,7 +69,7 @@ const OUTPUT_KIND: Record<OutputKey, KindLike> = {
 };
 
 function defaultUnits(system: SystemName): Record<OutputKey, string> {
-  return { teff: "K", luminosity: "Lsol", radius: "Rsol", distance: "pc", theta: "mas", fbol: system === "SI" ? "W m^-2" : "erg s^-1 cm^-2" };
+  return { teff: "K", luminosity: "Lsun", radius: "Rsun", distance: "pc", theta: "mas", fbol: system === "SI" ? "W m^-2" : "erg s^-1 cm^-2" };
 }
 
 /** Relative σ given to a value that has no uncertainty (treated as exact). */
@@ -486,8 +486,8 @@ these columns, each with a unit in brackets and optionally its uncertainty
 column sigma(NAME) in a compatible unit:
 
   teff [K]          effective temperature        (also: t_eff, temperature)
-  luminosity [Lsol] luminosity, any power unit   (also: lum)
-  radius [Rsol]     radius, any length unit
+  luminosity [Lsun] luminosity, any power unit   (also: lum)
+  radius [Rsun]     radius, any length unit
   distance [pc]     distance                     (also: dist)
   parallax [mas]    trigonometric parallax       (also: plx)
   fbol [W m^-2]     bolometric flux              (also: f_bol, bolometric_flux)

@@ -112,7 +112,7 @@ function requirePoints(points: number): number {
  * `points` equally spaced nodes including both edges (the trapezoid rule
  * then integrates the box exactly: the edge nodes get half weight).
  *
- * @param centerM - centre λ_c, m (> 0)
+ * @param centreM - centre λ_c, m (> 0)
  * @param widthM - full width Δλ, m (> 0, < 2 λ_c)
  * @param points - number of nodes (integer, 3 … 100000; default 201)
  * @throws RangeError naming `center`, `width` or `points`
@@ -121,14 +121,14 @@ function requirePoints(points: number): number {
  * const box = topHatResponseSI(550e-9, 90e-9);
  * ```
  */
-export function topHatResponseSI(centerM: number, widthM: number, points = 201): ResponseCurveSI {
-  requirePositive("center", centerM, "m");
+export function topHatResponseSI(centreM: number, widthM: number, points = 201): ResponseCurveSI {
+  requirePositive("center", centreM, "m");
   requirePositive("width", widthM, "m");
   requirePoints(points);
-  if (!(widthM < 2 * centerM)) {
-    throw new RangeError(`width must be < 2 × center (${2 * centerM} m) so that the band stays at positive wavelengths; got ${widthM} m`);
+  if (!(widthM < 2 * centreM)) {
+    throw new RangeError(`width must be < 2 × center (${2 * centreM} m) so that the band stays at positive wavelengths; got ${widthM} m`);
   }
-  const lo = centerM - widthM / 2;
+  const lo = centreM - widthM / 2;
   const l = new Float64Array(points);
   const r = new Float64Array(points).fill(1);
   for (let i = 0; i < points; i++) l[i] = lo + (widthM * i) / (points - 1);
@@ -143,7 +143,7 @@ export const GAUSSIAN_BAND_HALF_WIDTH_SIGMA = 5;
  * tabulated on `points` equally spaced nodes over λ_c ± 5s (the truncated
  * tails hold a fraction erfc(5/√2) ≈ 5.7e-7 of the area).
  *
- * @param centerM - centre λ_c, m (> 0)
+ * @param centreM - centre λ_c, m (> 0)
  * @param fwhmM - full width at half maximum, m (> 0, with λ_c − 5s > 0)
  * @param points - number of nodes (integer, 3 … 100000; default 201)
  * @throws RangeError naming `center`, `fwhm` or `points`
@@ -152,21 +152,21 @@ export const GAUSSIAN_BAND_HALF_WIDTH_SIGMA = 5;
  * const g = gaussianResponseSI(2.2e-6, 0.35e-6);
  * ```
  */
-export function gaussianResponseSI(centerM: number, fwhmM: number, points = 201): ResponseCurveSI {
-  requirePositive("center", centerM, "m");
+export function gaussianResponseSI(centreM: number, fwhmM: number, points = 201): ResponseCurveSI {
+  requirePositive("center", centreM, "m");
   requirePositive("fwhm", fwhmM, "m");
   requirePoints(points);
   const s = fwhmM / (2 * Math.sqrt(2 * Math.LN2));
   const half = GAUSSIAN_BAND_HALF_WIDTH_SIGMA * s;
-  if (!(centerM - half > 0)) {
-    throw new RangeError(`fwhm must be < ${(centerM / half) * fwhmM} m for a band centred at ${centerM} m (the tabulated ±5σ must stay at positive wavelengths); got ${fwhmM} m`);
+  if (!(centreM - half > 0)) {
+    throw new RangeError(`fwhm must be < ${(centreM / half) * fwhmM} m for a band centred at ${centreM} m (the tabulated ±5σ must stay at positive wavelengths); got ${fwhmM} m`);
   }
   const l = new Float64Array(points);
   const r = new Float64Array(points);
   for (let i = 0; i < points; i++) {
-    const lam = centerM - half + (2 * half * i) / (points - 1);
+    const lam = centreM - half + (2 * half * i) / (points - 1);
     l[i] = lam;
-    const u = (lam - centerM) / s;
+    const u = (lam - centreM) / s;
     r[i] = Math.exp(-0.5 * u * u);
   }
   return { wavelengthsM: l, response: r };

@@ -187,7 +187,7 @@ export interface BlackbodyFitSI {
   /** Covariance of the fitted parameters in K, rad, mag (products thereof). */
   readonly covariance: number[][];
   /** Covariance of (ln T, ln θ, A_V) for the fitted parameters. */
-  readonly logCovariance: number[][];
+  readonly lnCovariance: number[][];
   /** Correlation matrix of the fitted parameters. */
   readonly correlation: number[][];
   /** χ² = Σ pulls² at the solution (flux residuals for flux data, magnitude residuals for magnitudes). */
@@ -743,7 +743,7 @@ export function createBlackbodyFitterSI(channels: readonly FitChannelSI[], setti
       rV: ext ? rV : null,
       parameters: params,
       covariance: cov,
-      logCovariance: logCov,
+      lnCovariance: logCov,
       correlation: cor,
       chi2,
       dof,

@@ -29,7 +29,7 @@ import {
   STAR_QUANTITIES,
   type DerivedQuantitySI,
   type MeasurementSI,
-  type StarInputKind,
+  type StarInputKindSI,
   type StarSolutionSI,
 } from "../../photometry/kernels/solver";
 import type { BlackbodyFitSI } from "./blackbody-fit";
@@ -42,7 +42,7 @@ export type DistanceInputSI =
 /** Stellar parameters from a fit: the solver's solution with the T–θ correlation included. */
 export interface StellarFromFitSI extends StarSolutionSI {
   /** Cov(ln T, ln θ) taken from the fit. */
-  readonly lnTemperatureLnThetaCovariance: number;
+  readonly lnTemperatureLnAngularDiameterCovariance: number;
 }
 
 /**
@@ -63,21 +63,21 @@ export function stellarParametersFromFitSI(fit: BlackbodyFitSI, distance: Distan
   const hasD = distance.distanceM !== undefined;
   const hasP = distance.parallaxRad !== undefined;
   if (hasD === hasP) throw new RangeError("distance must give exactly one of distanceM or parallaxRad");
-  const lnCov = fit.logCovariance;
+  const lnCov = fit.lnCovariance;
   const vT = lnCov[0]?.[0] as number;
   const vTh = lnCov[1]?.[1] as number;
   const c = lnCov[0]?.[1] as number;
   if (!(vT > 0 && vTh > 0 && Number.isFinite(c))) {
     throw new RangeError("fit has no finite covariance of T and θ (tooFewBands: singular information matrix); stellar parameters would have no uncertainty");
   }
-  const dKind: StarInputKind = hasD ? "distanceM" : "parallaxRad";
+  const dKind: StarInputKindSI = hasD ? "distanceM" : "parallaxRad";
   const dMeas = (hasD ? distance.distanceM : distance.parallaxRad) as MeasurementSI;
   const sol = solveStarSI({
     temperatureK: { value: fit.temperatureK, sigma: fit.sigmaTemperatureK },
     angularDiameterRad: { value: fit.angularDiameterRad, sigma: fit.sigmaAngularDiameterRad },
     [dKind]: dMeas,
   });
-  const kinds: readonly [StarInputKind, StarInputKind, StarInputKind] = ["temperatureK", "angularDiameterRad", dKind];
+  const kinds: readonly [StarInputKindSI, StarInputKindSI, StarInputKindSI] = ["temperatureK", "angularDiameterRad", dKind];
   const G = createStarBatchSolverSI(kinds).jacobian; // 6 × 3, rows in STAR_QUANTITIES order
   const nq = STAR_QUANTITIES.length;
   const lnCovariance = sol.lnCovariance.map((row, i) =>
@@ -107,6 +107,6 @@ export function stellarParametersFromFitSI(fit: BlackbodyFitSI, distance: Distan
     absoluteBolometricMag: { ...sol.absoluteBolometricMag, sigma: rel(1) * magPerLn, relativeSigma: rel(1) * magPerLn },
     lnCovariance,
     covariance,
-    lnTemperatureLnThetaCovariance: c,
+    lnTemperatureLnAngularDiameterCovariance: c,
   };
 }

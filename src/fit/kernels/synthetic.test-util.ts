@@ -12,12 +12,12 @@ export { gaussian, mulberry32 } from "../../../test/support/random";
  * A smooth, slightly asymmetric filter-like response on `n` points over
  * c ± 2w: R = exp(−((λ−c)/w)⁴) (1 + 0.3 (λ−c)/w), clipped at 0.
  */
-export function filterCurve(centerM: number, halfWidthM: number, n = 200): ResponseCurveSI {
+export function filterCurve(centreM: number, halfWidthM: number, n = 200): ResponseCurveSI {
   const l = new Float64Array(n);
   const r = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    const lam = centerM - 2 * halfWidthM + (4 * halfWidthM * i) / (n - 1);
-    const u = (lam - centerM) / halfWidthM;
+    const lam = centreM - 2 * halfWidthM + (4 * halfWidthM * i) / (n - 1);
+    const u = (lam - centreM) / halfWidthM;
     l[i] = lam;
     r[i] = Math.max(0, Math.exp(-(u ** 4)) * (1 + 0.3 * u));
   }

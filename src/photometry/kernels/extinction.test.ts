@@ -2,13 +2,13 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import fixture from "../../../test/fixtures/ccm89.json";
 import {
-  aVFromColorExcess,
+  aVFromColourExcess,
   ccm89AInverseMicron,
   ccm89BInverseMicron,
   ccm89ExtinctionMagSI,
   ccm89RatioInverseMicron,
   ccm89RatioSI,
-  colorExcessFromAV,
+  colourExcessFromAV,
   dereddenFlux,
   dereddenMagnitude,
   reddenFlux,
@@ -116,11 +116,11 @@ describe("CCM89 extinction law (Cardelli, Clayton & Mathis 1989, ApJ 345, 245, e
 
 describe("reddening and colour excess", () => {
   it("A_V/E(B−V) = R_V (definition), both directions", () => {
-    expect(aVFromColorExcess(0.1, 3.1)).toBe(0.1 * 3.1);
-    expect(rel(colorExcessFromAV(aVFromColorExcess(0.37, 3.1), 3.1), 0.37)).toBeLessThan(2.3e-16);
+    expect(aVFromColourExcess(0.1, 3.1)).toBe(0.1 * 3.1);
+    expect(rel(colourExcessFromAV(aVFromColourExcess(0.37, 3.1), 3.1), 0.37)).toBeLessThan(2.3e-16);
     fc.assert(
       fc.property(fc.double({ min: 0, max: 5, noNaN: true }), fc.double({ min: 2, max: 6, noNaN: true }), (ebv, rv) => {
-        const av = aVFromColorExcess(ebv, rv);
+        const av = aVFromColourExcess(ebv, rv);
         expect(Math.abs(av / rv - ebv)).toBeLessThanOrEqual(4.5e-16 * Math.max(ebv, 1e-300));
       }),
     );
@@ -143,7 +143,7 @@ describe("reddening and colour excess", () => {
     expect(() => reddenFlux(0, 1)).toThrow(/flux/);
     expect(() => dereddenFlux(1, NaN)).toThrow(/extinction/);
     expect(() => reddenMagnitude(NaN, 1)).toThrow(/magnitude/);
-    expect(() => aVFromColorExcess(Infinity, 3.1)).toThrow(/E\(B-V\)/);
-    expect(() => colorExcessFromAV(1, 0)).toThrow(/R_V/);
+    expect(() => aVFromColourExcess(Infinity, 3.1)).toThrow(/E\(B-V\)/);
+    expect(() => colourExcessFromAV(1, 0)).toThrow(/R_V/);
   });
 });

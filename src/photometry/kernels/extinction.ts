@@ -208,20 +208,20 @@ export function ccm89ExtinctionMagSI(wavelengthM: number, aVMag: number, rV: num
 /**
  * Total extinction from colour excess: A_V = R_V × E(B−V).
  *
- * @param colorExcessBVMag - E(B−V), mag (finite)
+ * @param colourExcessBVMag - E(B−V), mag (finite)
  * @param rV - R_V (> 0)
  * @returns A_V, mag
  * @throws RangeError naming `E(B-V)` or `R_V`
  * @example
  * ```ts
- * import { aVFromColorExcess } from "./extinction";
- * const aV = aVFromColorExcess(0.1, 3.1); // 0.31
+ * import { aVFromColourExcess } from "./extinction";
+ * const aV = aVFromColourExcess(0.1, 3.1); // 0.31
  * ```
  */
-export function aVFromColorExcess(colorExcessBVMag: number, rV: number): number {
-  requireFinite("E(B-V)", colorExcessBVMag, "mag");
+export function aVFromColourExcess(colourExcessBVMag: number, rV: number): number {
+  requireFinite("E(B-V)", colourExcessBVMag, "mag");
   requirePositive("R_V", rV, "(dimensionless)");
-  return requireFiniteResult("A_V", rV * colorExcessBVMag, "mag");
+  return requireFiniteResult("A_V", rV * colourExcessBVMag, "mag");
 }
 
 /**
@@ -233,11 +233,11 @@ export function aVFromColorExcess(colorExcessBVMag: number, rV: number): number 
  * @throws RangeError naming `A_V` or `R_V`
  * @example
  * ```ts
- * import { colorExcessFromAV } from "./extinction";
- * const ebv = colorExcessFromAV(0.31, 3.1); // 0.1
+ * import { colourExcessFromAV } from "./extinction";
+ * const ebv = colourExcessFromAV(0.31, 3.1); // 0.1
  * ```
  */
-export function colorExcessFromAV(aVMag: number, rV: number): number {
+export function colourExcessFromAV(aVMag: number, rV: number): number {
   requireFinite("A_V", aVMag, "mag");
   requirePositive("R_V", rV, "(dimensionless)");
   return requireFiniteResult("E(B-V)", aVMag / rV, "mag");
@@ -332,12 +332,12 @@ export function ccm89ExtinctionUnchecked(wavelengthM: number, aVMag: number, rV:
   return aVMag * ccm89RatioUnchecked(wavelengthM, rV);
 }
 
-/** A_V = R_V E(B−V) without input or result checks (see {@link aVFromColorExcess}). @internal */
-export function aVFromColorExcessUnchecked(colorExcessBVMag: number, rV: number): number {
-  return rV * colorExcessBVMag;
+/** A_V = R_V E(B−V) without input or result checks (see {@link aVFromColourExcess}). @internal */
+export function aVFromColorExcessUnchecked(colourExcessBVMag: number, rV: number): number {
+  return rV * colourExcessBVMag;
 }
 
-/** E(B−V) = A_V / R_V without input or result checks (see {@link colorExcessFromAV}). @internal */
+/** E(B−V) = A_V / R_V without input or result checks (see {@link colourExcessFromAV}). @internal */
 export function colorExcessFromAVUnchecked(aVMag: number, rV: number): number {
   return aVMag / rV;
 }

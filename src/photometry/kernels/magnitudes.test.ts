@@ -8,7 +8,7 @@ import {
   absoluteMagnitudeSI,
   apparentBolometricMagnitudeSI,
   apparentMagnitudeSI,
-  bolometricFluxFromApparentMagnitudeSI,
+  bolometricFluxFromApparentBolometricMagnitudeSI,
   distanceFromDistanceModulusSI,
   distanceModulusSI,
   fLambdaFromFNuSI,
@@ -132,7 +132,7 @@ describe("IAU 2015 Resolution B2 bolometric magnitudes", () => {
         // f₀ = L₀/(4π(10 pc)²) makes this identity exact in real arithmetic
         expect(Math.abs(mu - distanceModulusSI(d))).toBeLessThan(1e-13);
         expect(rel(luminosityFromAbsoluteBolometricMagnitudeSI(absoluteBolometricMagnitudeSI(l)), l)).toBeLessThan(2e-14);
-        expect(rel(bolometricFluxFromApparentMagnitudeSI(apparentBolometricMagnitudeSI(f)), f)).toBeLessThan(2e-14);
+        expect(rel(bolometricFluxFromApparentBolometricMagnitudeSI(apparentBolometricMagnitudeSI(f)), f)).toBeLessThan(2e-14);
       }),
     );
   });
@@ -183,7 +183,7 @@ describe("bad input", () => {
       expect(() => apparentMagnitudeSI(bad, 1e17)).toThrow(/absolute magnitude/);
       expect(() => distanceFromDistanceModulusSI(bad)).toThrow(/distance modulus/);
       expect(() => luminosityFromAbsoluteBolometricMagnitudeSI(bad)).toThrow(/absolute bolometric magnitude/);
-      expect(() => bolometricFluxFromApparentMagnitudeSI(bad)).toThrow(/apparent bolometric magnitude/);
+      expect(() => bolometricFluxFromApparentBolometricMagnitudeSI(bad)).toThrow(/apparent bolometric magnitude/);
       expect(() => spectralFluxDensityFromAbMagnitudeSI(bad)).toThrow(/AB magnitude/);
     }
     // overflow is reported, not returned as Infinity

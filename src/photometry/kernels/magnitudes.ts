@@ -220,11 +220,11 @@ export function apparentBolometricMagnitudeSI(bolometricFluxWm2: number): number
  * @throws RangeError naming `apparent bolometric magnitude`; or when f is not representable
  * @example
  * ```ts
- * import { bolometricFluxFromApparentMagnitudeSI } from "./magnitudes";
- * const f = bolometricFluxFromApparentMagnitudeSI(-26.832); // ≈ 1361 W m^-2
+ * import { bolometricFluxFromApparentBolometricMagnitudeSI } from "./magnitudes";
+ * const f = bolometricFluxFromApparentBolometricMagnitudeSI(-26.832); // ≈ 1361 W m^-2
  * ```
  */
-export function bolometricFluxFromApparentMagnitudeSI(apparentBolometricMag: number): number {
+export function bolometricFluxFromApparentBolometricMagnitudeSI(apparentBolometricMag: number): number {
   requireFinite("apparent bolometric magnitude", apparentBolometricMag, "mag");
   return requirePositiveResult("bolometric flux", F0 * pogsonRatio(apparentBolometricMag, "bolometric flux"), "W m^-2");
 }
@@ -362,7 +362,7 @@ export function apparentBolometricMagnitudeUnchecked(bolometricFluxWm2: number):
   return pogsonMag(bolometricFluxWm2 / F0);
 }
 
-/** f = f₀ 10^(m_bol/−2.5) without input or result checks (see {@link bolometricFluxFromApparentMagnitudeSI}). @internal */
+/** f = f₀ 10^(m_bol/−2.5) without input or result checks (see {@link bolometricFluxFromApparentBolometricMagnitudeSI}). @internal */
 export function bolometricFluxFromApparentMagnitudeUnchecked(apparentBolometricMag: number): number {
   return F0 * 10 ** (apparentBolometricMag / -2.5);
 }

@@ -6,7 +6,7 @@ import {
   distanceFromParallaxExactSI,
   distanceFromParallaxSI,
   distanceUncertaintyFromParallaxSI,
-  parallaxDistanceSI,
+  distanceEstimateFromParallaxSI,
   parallaxFromDistanceExactSI,
   parallaxFromDistanceSI,
 } from "./parallax";
@@ -55,28 +55,28 @@ describe("parallax → distance", () => {
   });
 
   it("flags fractional parallax errors above the threshold (default 0.1)", () => {
-    const ok = parallaxDistanceSI(10 * MAS, 0.5 * MAS);
+    const ok = distanceEstimateFromParallaxSI(10 * MAS, 0.5 * MAS);
     expect(ok.inversionBiased).toBe(false);
     expect(rel(ok.fractionalParallaxError, 0.05)).toBeLessThan(1e-15);
     expect(rel(ok.distanceM, 100 * PARSEC)).toBeLessThan(1e-15);
     expect(rel(ok.sigmaDistanceM, 5 * PARSEC)).toBeLessThan(1e-15);
-    expect(parallaxDistanceSI(10 * MAS, 1.5 * MAS).inversionBiased).toBe(true);
-    expect(parallaxDistanceSI(10 * MAS, 1.5 * MAS, 0.2).inversionBiased).toBe(false);
-    expect(parallaxDistanceSI(10 * MAS, 2.5 * MAS, 0.2).inversionBiased).toBe(true);
+    expect(distanceEstimateFromParallaxSI(10 * MAS, 1.5 * MAS).inversionBiased).toBe(true);
+    expect(distanceEstimateFromParallaxSI(10 * MAS, 1.5 * MAS, 0.2).inversionBiased).toBe(false);
+    expect(distanceEstimateFromParallaxSI(10 * MAS, 2.5 * MAS, 0.2).inversionBiased).toBe(true);
   });
 
   it("rejects p ≤ 0, non-finite values and bad uncertainties, naming the parameter", () => {
     for (const bad of [0, -1e-9, NaN, Infinity, -Infinity]) {
       expect(() => distanceFromParallaxSI(bad)).toThrow(/parallax/);
       expect(() => distanceFromParallaxExactSI(bad)).toThrow(/parallax/);
-      expect(() => parallaxDistanceSI(bad, 1e-9)).toThrow(/parallax/);
+      expect(() => distanceEstimateFromParallaxSI(bad, 1e-9)).toThrow(/parallax/);
       expect(() => parallaxFromDistanceSI(bad)).toThrow(/distance/);
       expect(() => parallaxFromDistanceExactSI(bad)).toThrow(/distance/);
-      expect(() => parallaxDistanceSI(1e-8, 1e-9, bad)).toThrow(/threshold/);
+      expect(() => distanceEstimateFromParallaxSI(1e-8, 1e-9, bad)).toThrow(/threshold/);
     }
     expect(() => distanceFromParallaxExactSI(Math.PI / 2)).toThrow(/parallax must be < π\/2/);
-    expect(() => parallaxDistanceSI(1e-8, -1e-9)).toThrow(/parallax uncertainty/);
+    expect(() => distanceEstimateFromParallaxSI(1e-8, -1e-9)).toThrow(/parallax uncertainty/);
     expect(() => distanceUncertaintyFromParallaxSI(1e-8, NaN)).toThrow(/parallax uncertainty/);
-    expect(() => parallaxDistanceSI(1e-8, 1e-9)).not.toThrow();
+    expect(() => distanceEstimateFromParallaxSI(1e-8, 1e-9)).not.toThrow();
   });
 });

@@ -20,7 +20,7 @@
  * distribution is skewed, and the first-order uncertainty σ_d = d σ_p / p is
  * then meaningless. Beyond that threshold a probabilistic distance estimate
  * (a posterior with an explicit distance prior) is advised.
- * {@link parallaxDistanceSI} sets a flag when the threshold is exceeded.
+ * {@link distanceEstimateFromParallaxSI} sets a flag when the threshold is exceeded.
  *
  * @module
  */
@@ -151,8 +151,8 @@ export function distanceUncertaintyFromParallaxSI(parallaxRad: number, sigmaPara
   return s;
 }
 
-/** Result of {@link parallaxDistanceSI}. */
-export interface ParallaxDistance {
+/** Result of {@link distanceEstimateFromParallaxSI}. */
+export interface ParallaxDistanceEstimate {
   /** Distance d = 1 au / p, m. */
   readonly distanceM: number;
   /** First-order standard uncertainty σ_d = d σ_p / p, m. */
@@ -179,16 +179,16 @@ export interface ParallaxDistance {
  * @throws RangeError naming `parallax`, `parallax uncertainty` or `threshold`
  * @example
  * ```ts
- * import { parallaxDistanceSI } from "./parallax";
+ * import { distanceEstimateFromParallaxSI } from "./parallax";
  * const mas = Math.PI / 648000 / 1000;
- * const r = parallaxDistanceSI(2 * mas, 0.5 * mas); // r.inversionBiased === true (25 %)
+ * const r = distanceEstimateFromParallaxSI(2 * mas, 0.5 * mas); // r.inversionBiased === true (25 %)
  * ```
  */
-export function parallaxDistanceSI(
+export function distanceEstimateFromParallaxSI(
   parallaxRad: number,
   sigmaParallaxRad: number,
   threshold: number = PARALLAX_FRACTIONAL_ERROR_THRESHOLD,
-): ParallaxDistance {
+): ParallaxDistanceEstimate {
   requirePositive("parallax", parallaxRad, "rad");
   requireNonNegative("parallax uncertainty", sigmaParallaxRad, "rad");
   requireInRange("threshold", threshold, Number.MIN_VALUE, Number.MAX_VALUE, "(dimensionless σ_p/p)");

@@ -9,9 +9,9 @@ import {
   solveStarSI,
   STAR_QUANTITIES,
   type MeasurementSI,
-  type StarInputKind,
+  type StarInputKindSI,
   type StarObservationsSI,
-  type StarQuantity,
+  type StarQuantitySI,
 } from "./solver";
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
@@ -160,7 +160,7 @@ describe("stellar-parameter solver: sufficiency", () => {
   base.bolometricFluxWm2 = base.luminosityW / (4 * Math.PI * base.distanceM ** 2);
   base.angularDiameterRad = (2 * base.radiusM) / base.distanceM;
 
-  const triples: [StarQuantity, StarQuantity, StarQuantity][] = [];
+  const triples: [StarQuantitySI, StarQuantitySI, StarQuantitySI][] = [];
   for (let a = 0; a < 6; a++) for (let b = a + 1; b < 6; b++) for (let c = b + 1; c < 6; c++) triples.push([STAR_QUANTITIES[a]!, STAR_QUANTITIES[b]!, STAR_QUANTITIES[c]!]);
   const dependent = new Set([
     "temperatureK,luminosityW,radiusM",
@@ -283,7 +283,7 @@ describe("stellar-parameter solver: uncertainties", () => {
 describe("stellar-parameter solver: bad input", () => {
   it("rejects zero/negative/non-finite values and uncertainties, naming the parameter", () => {
     const good = { temperatureK: m(5000, 0.01), radiusM: m(R_SUN, 0.01), distanceM: m(PARSEC, 0.01) };
-    const names: [StarInputKind, RegExp][] = [
+    const names: [StarInputKindSI, RegExp][] = [
       ["temperatureK", /temperature/],
       ["radiusM", /radius/],
       ["distanceM", /distance/],

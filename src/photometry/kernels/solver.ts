@@ -75,10 +75,10 @@ export const STAR_QUANTITIES = [
 ] as const;
 
 /** One of the six solver quantities, named with their SI unit: `"temperatureK"`, `"luminosityW"`, `"radiusM"`, `"distanceM"`, `"bolometricFluxWm2"`, `"angularDiameterRad"`. */
-export type StarQuantity = (typeof STAR_QUANTITIES)[number];
+export type StarQuantitySI = (typeof STAR_QUANTITIES)[number];
 
 /** Kinds of input the solver accepts (the six quantities plus parallax and apparent bolometric magnitude). */
-export type StarInputKind = StarQuantity | "parallaxRad" | "apparentBolometricMag";
+export type StarInputKindSI = StarQuantitySI | "parallaxRad" | "apparentBolometricMag";
 
 /** A measured value and its standard uncertainty, in the unit named by the field it is stored under. */
 export interface MeasurementSI {
@@ -113,7 +113,7 @@ export interface DerivedQuantitySI {
 }
 
 /** Consistency report of an over-determined solve. */
-export interface StarConsistency {
+export interface StarConsistencySI {
   /** Weighted sum of squared log-residuals χ² (0 when exactly determined). */
   readonly chi2: number;
   /** Degrees of freedom = number of inputs − 3. */
@@ -125,7 +125,7 @@ export interface StarConsistency {
   /** Two-sided Gaussian-equivalent disagreement: erfc(sigma/√2) = pValue (= √χ² when dof = 1). */
   readonly sigma: number;
   /** Normalised residual (input − fitted)/σ in log space, per input kind. */
-  readonly pulls: Readonly<Partial<Record<StarInputKind, number>>>;
+  readonly pulls: Readonly<Partial<Record<StarInputKindSI, number>>>;
 }
 
 /** Result of {@link solveStarSI}; plain JSON (numbers, booleans, strings, arrays). */
@@ -149,13 +149,13 @@ export interface StarSolutionSI {
   /** Absolute bolometric magnitude (IAU 2015 B2), mag. */
   readonly absoluteBolometricMag: DerivedQuantitySI;
   /** Row/column order of the covariance matrices. */
-  readonly quantities: readonly StarQuantity[];
+  readonly quantities: readonly StarQuantitySI[];
   /** 6 × 6 covariance of the ln quantities (dimensionless). */
   readonly lnCovariance: number[][];
   /** 6 × 6 covariance of the quantities in SI units (products of the row and column units). */
   readonly covariance: number[][];
   /** χ² consistency of the inputs (chi2 = 0, dof = 0, p = 1 when exactly determined). */
-  readonly consistency: StarConsistency;
+  readonly consistency: StarConsistencySI;
 }
 
 // ---- model tables -----------------------------------------------------------
@@ -203,7 +203,7 @@ interface KindInfo {
   readonly positive: boolean; // value must be > 0
 }
 
-const KINDS: Readonly<Record<StarInputKind, KindInfo>> = {
+const KINDS: Readonly<Record<StarInputKindSI, KindInfo>> = {
   temperatureK: { quantity: 0, name: "temperature", unit: "K", positive: true },
   luminosityW: { quantity: 1, name: "luminosity", unit: "W", positive: true },
   radiusM: { quantity: 2, name: "radius", unit: "m", positive: true },
@@ -214,7 +214,7 @@ const KINDS: Readonly<Record<StarInputKind, KindInfo>> = {
   angularDiameterRad: { quantity: 5, name: "angular diameter", unit: "rad", positive: true },
 };
 
-const INPUT_ORDER: readonly StarInputKind[] = [
+const INPUT_ORDER: readonly StarInputKindSI[] = [
   "temperatureK",
   "luminosityW",
   "radiusM",
@@ -237,7 +237,7 @@ const QUANTITY_REQUEST: readonly string[] = [
 const QUANTITY_NAME: readonly string[] = ["temperature", "luminosity", "radius", "distance", "bolometric flux", "angular diameter"];
 
 /** Scaled ln-value ln x′ and ln-uncertainty of a measurement of a given kind (no validation). */
-function lnOf(kind: StarInputKind, value: number, sigma: number, out: Float64Array): void {
+function lnOf(kind: StarInputKindSI, value: number, sigma: number, out: Float64Array): void {
   if (kind === "parallaxRad") {
     out[0] = LN_ARCSEC - Math.log(value);
     out[1] = sigma / value;
@@ -286,7 +286,7 @@ export interface StarInputSufficiency {
   /** Rank of the inputs' rows in the 3-parameter model (3 = sufficient). */
   readonly rank: number;
   /** Quantities whose value the inputs leave free (empty when sufficient); adding any one of them (or its alias) raises the rank. */
-  readonly undetermined: readonly StarQuantity[];
+  readonly undetermined: readonly StarQuantitySI[];
 }
 
 /**
@@ -303,10 +303,10 @@ export interface StarInputSufficiency {
  * starInputSufficiency(["luminosityW", "radiusM", "temperatureK"]).undetermined; // ["distanceM", "bolometricFluxWm2", "angularDiameterRad"]
  * ```
  */
-export function starInputSufficiency(kinds: readonly StarInputKind[]): StarInputSufficiency {
+export function starInputSufficiency(kinds: readonly StarInputKindSI[]): StarInputSufficiency {
   const rows = kinds.map((k) => M_ROWS[KINDS[k].quantity]!);
   const rank = rankOf(rows);
-  const undetermined: StarQuantity[] = [];
+  const undetermined: StarQuantitySI[] = [];
   if (rank < 3) {
     for (let q = 0; q < 6; q++) if (rankOf([...rows, M_ROWS[q]!]) > rank) undetermined.push(STAR_QUANTITIES[q]!);
   }
@@ -314,7 +314,7 @@ export function starInputSufficiency(kinds: readonly StarInputKind[]): StarInput
 }
 
 /** Throw a RangeError naming what is missing unless the kinds determine z. */
-function requireSufficient(kinds: readonly StarInputKind[]): void {
+function requireSufficient(kinds: readonly StarInputKindSI[]): void {
   const { rank, undetermined: free } = starInputSufficiency(kinds);
   if (rank === 3) return;
   const undetermined: string[] = [];
@@ -400,7 +400,7 @@ function qrSolve(a: Float64Array, b: Float64Array, n: number): { z: Float64Array
   return { z, rInv };
 }
 
-function validateMeasurement(kind: StarInputKind, m: MeasurementSI): void {
+function validateMeasurement(kind: StarInputKindSI, m: MeasurementSI): void {
   const info = KINDS[kind];
   if (info.positive) requirePositive(info.name, m.value, info.unit);
   else requireFinite(info.name, m.value, info.unit);
@@ -431,7 +431,7 @@ function validateMeasurement(kind: StarInputKind, m: MeasurementSI): void {
  * ```
  */
 export function solveStarSI(obs: StarObservationsSI): StarSolutionSI {
-  const kinds: StarInputKind[] = [];
+  const kinds: StarInputKindSI[] = [];
   for (const k of INPUT_ORDER) {
     const m = obs[k];
     if (m !== undefined) {
@@ -518,7 +518,7 @@ export function solveStarSI(obs: StarObservationsSI): StarSolutionSI {
 
   // consistency
   let chi2 = 0;
-  const pulls: Partial<Record<StarInputKind, number>> = {};
+  const pulls: Partial<Record<StarInputKindSI, number>> = {};
   for (let i = 0; i < n; i++) {
     const k = kinds[i]!;
     const r = (ys[i]! - lnQ[KINDS[k].quantity]!) / ss[i]!;
@@ -599,7 +599,7 @@ export interface StarBatchOutputSI {
 /** A batch solver for a fixed, exactly determined set of three input kinds. */
 export interface StarBatchSolverSI {
   /** The input kinds, in column order. */
-  readonly inputs: readonly [StarInputKind, StarInputKind, StarInputKind];
+  readonly inputs: readonly [StarInputKindSI, StarInputKindSI, StarInputKindSI];
   /**
    * d ln qⱼ / d yₖ: row j (in STAR_QUANTITIES order) of the constant 6 × 3
    * matrix mapping the inputs' ln-values yₖ to the outputs (row-major copy).
@@ -649,7 +649,7 @@ export interface StarBatchSolverSI {
  * ```
  */
 export function createStarBatchSolverSI(
-  inputs: readonly [StarInputKind, StarInputKind, StarInputKind],
+  inputs: readonly [StarInputKindSI, StarInputKindSI, StarInputKindSI],
   options: StarBatchSolverOptions = {},
 ): StarBatchSolverSI {
   if (inputs.length !== 3) throw new RangeError(`inputs must list exactly 3 input kinds; got ${String(inputs.length)}`);
@@ -658,7 +658,7 @@ export function createStarBatchSolverSI(
   }
   if (new Set(inputs).size !== 3) throw new RangeError(`inputs must be 3 distinct kinds; got ${inputs.join(", ")}`);
   requireSufficient(inputs);
-  const kinds: readonly [StarInputKind, StarInputKind, StarInputKind] = [inputs[0], inputs[1], inputs[2]];
+  const kinds: readonly [StarInputKindSI, StarInputKindSI, StarInputKindSI] = [inputs[0], inputs[1], inputs[2]];
   // M_S (3×3) and its inverse by cofactors (entries are small integers).
   const inv = inverse3(kinds.map((k) => M_ROWS[KINDS[k].quantity]!));
   const jac = new Float64Array(18);

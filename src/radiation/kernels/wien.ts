@@ -83,32 +83,32 @@ export const WIEN_B_PHOTON_FREQUENCY = (WIEN_X_PHOTON_FREQUENCY * K_B) / H;
 /** Photon-count wavenumber displacement constant x₂k/(hc), m^-1 K^-1. */
 export const WIEN_B_PHOTON_WAVENUMBER = (WIEN_X_PHOTON_FREQUENCY * K_B) / (H * C);
 
-/** {@link wienPeakWavelengthSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+/** {@link peakWavelengthSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
 export function wienPeakWavelengthUnchecked(temperatureK: number): number {
   return WIEN_B_WAVELENGTH / temperatureK;
 }
 
-/** {@link wienPeakFrequencySI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+/** {@link peakFrequencySI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
 export function wienPeakFrequencyUnchecked(temperatureK: number): number {
   return WIEN_B_FREQUENCY * temperatureK;
 }
 
-/** {@link wienPeakWavenumberSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+/** {@link peakWavenumberSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
 export function wienPeakWavenumberUnchecked(temperatureK: number): number {
   return WIEN_B_WAVENUMBER * temperatureK;
 }
 
-/** {@link wienPhotonPeakWavelengthSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+/** {@link photonPeakWavelengthSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
 export function wienPhotonPeakWavelengthUnchecked(temperatureK: number): number {
   return WIEN_B_PHOTON_WAVELENGTH / temperatureK;
 }
 
-/** {@link wienPhotonPeakFrequencySI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+/** {@link photonPeakFrequencySI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
 export function wienPhotonPeakFrequencyUnchecked(temperatureK: number): number {
   return WIEN_B_PHOTON_FREQUENCY * temperatureK;
 }
 
-/** {@link wienPhotonPeakWavenumberSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
+/** {@link photonPeakWavenumberSI} without input checks: 0 or +Infinity where the true value leaves the double range. @internal */
 export function wienPhotonPeakWavenumberUnchecked(temperatureK: number): number {
   return WIEN_B_PHOTON_WAVENUMBER * temperatureK;
 }
@@ -160,10 +160,10 @@ function finite(v: number, what: string, name: string, value: number, unit: stri
  * Source: Wien's displacement law; CODATA 2018 b.
  * @example
  * ```ts
- * wienPeakWavelengthSI(5772); // ≈ 5.020e-7 m (502 nm)
+ * peakWavelengthSI(5772); // ≈ 5.020e-7 m (502 nm)
  * ```
  */
-export function wienPeakWavelengthSI(temperatureK: number): number {
+export function peakWavelengthSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
   return finite(wienPeakWavelengthUnchecked(temperatureK), "peak wavelength", "temperature", temperatureK, "K");
 }
@@ -178,10 +178,10 @@ export function wienPeakWavelengthSI(temperatureK: number): number {
  * Source: Wien's displacement law; CODATA 2018 b′.
  * @example
  * ```ts
- * wienPeakFrequencySI(5772); // ≈ 3.393e14 Hz
+ * peakFrequencySI(5772); // ≈ 3.393e14 Hz
  * ```
  */
-export function wienPeakFrequencySI(temperatureK: number): number {
+export function peakFrequencySI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
   return finite(wienPeakFrequencyUnchecked(temperatureK), "peak frequency", "temperature", temperatureK, "K");
 }
@@ -196,10 +196,10 @@ export function wienPeakFrequencySI(temperatureK: number): number {
  * Source: Wien's displacement law.
  * @example
  * ```ts
- * wienPeakWavenumberSI(300); // ≈ 5.88e4 m^-1 (588 cm^-1)
+ * peakWavenumberSI(300); // ≈ 5.88e4 m^-1 (588 cm^-1)
  * ```
  */
-export function wienPeakWavenumberSI(temperatureK: number): number {
+export function peakWavenumberSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
   return finite(wienPeakWavenumberUnchecked(temperatureK), "peak wavenumber", "temperature", temperatureK, "K");
 }
@@ -213,10 +213,10 @@ export function wienPeakWavenumberSI(temperatureK: number): number {
  * Source: Wien's displacement law for photon counts (n = 4).
  * @example
  * ```ts
- * wienPhotonPeakWavelengthSI(5772); // ≈ 6.36e-7 m
+ * photonPeakWavelengthSI(5772); // ≈ 6.36e-7 m
  * ```
  */
-export function wienPhotonPeakWavelengthSI(temperatureK: number): number {
+export function photonPeakWavelengthSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
   return finite(wienPhotonPeakWavelengthUnchecked(temperatureK), "photon peak wavelength", "temperature", temperatureK, "K");
 }
@@ -230,10 +230,10 @@ export function wienPhotonPeakWavelengthSI(temperatureK: number): number {
  * Source: Wien's displacement law for photon counts (n = 2).
  * @example
  * ```ts
- * wienPhotonPeakFrequencySI(5772);
+ * photonPeakFrequencySI(5772);
  * ```
  */
-export function wienPhotonPeakFrequencySI(temperatureK: number): number {
+export function photonPeakFrequencySI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
   return finite(wienPhotonPeakFrequencyUnchecked(temperatureK), "photon peak frequency", "temperature", temperatureK, "K");
 }
@@ -247,10 +247,10 @@ export function wienPhotonPeakFrequencySI(temperatureK: number): number {
  * Source: Wien's displacement law for photon counts (n = 2).
  * @example
  * ```ts
- * wienPhotonPeakWavenumberSI(5772);
+ * photonPeakWavenumberSI(5772);
  * ```
  */
-export function wienPhotonPeakWavenumberSI(temperatureK: number): number {
+export function photonPeakWavenumberSI(temperatureK: number): number {
   requirePositive("temperature", temperatureK, "K");
   return finite(wienPhotonPeakWavenumberUnchecked(temperatureK), "photon peak wavenumber", "temperature", temperatureK, "K");
 }

@@ -7,10 +7,10 @@ import {
   dopplerShiftWavelengthsSI,
   observedWavelengthFromRedshiftSI,
   radialVelocityFromWavelengthsSI,
-  redshiftFromVelocitySI,
+  redshiftFromRadialVelocitySI,
   redshiftFromWavelengthsSI,
   relativisticDopplerWavelengthSI,
-  velocityFromRedshiftSI,
+  radialVelocityFromRedshiftSI,
 } from "./doppler";
 
 const rel = (a: number, b: number): number => Math.abs(a / b - 1);
@@ -22,15 +22,15 @@ const signedLog = (lo: number, hi: number) =>
 describe("relativistic Doppler", () => {
   it("exact textbook points: β = 0.6 → 1 + z = 2; β = −0.6 → 1 + z = 1/2", () => {
     // √(1.6/0.4) = 2 exactly; double rounding only → 4e-16.
-    expect(rel(redshiftFromVelocitySI(0.6 * C), 1)).toBeLessThan(4e-16);
+    expect(rel(redshiftFromRadialVelocitySI(0.6 * C), 1)).toBeLessThan(4e-16);
     expect(rel(relativisticDopplerWavelengthSI(500e-9, -0.6 * C), 250e-9)).toBeLessThan(4e-16);
-    expect(rel(velocityFromRedshiftSI(1), 0.6 * C)).toBeLessThan(4e-16);
+    expect(rel(radialVelocityFromRedshiftSI(1), 0.6 * C)).toBeLessThan(4e-16);
     expect(rel(radialVelocityFromWavelengthsSI(250e-9, 500e-9), -0.6 * C)).toBeLessThan(4e-16);
   });
   it("small-β expansion: z = β + β²/2 + β³/2 + … (series of √((1+β)/(1−β)))", () => {
     // At β = 1e-6 the β⁴ term (3/8 β⁴ ≈ 4e-25) is negligible; result good to rounding.
     const b = 1e-6;
-    expect(rel(redshiftFromVelocitySI(b * C), b + (b * b) / 2 + (b * b * b) / 2)).toBeLessThan(1e-15);
+    expect(rel(redshiftFromRadialVelocitySI(b * C), b + (b * b) / 2 + (b * b * b) / 2)).toBeLessThan(1e-15);
   });
   it("property: velocity → wavelength → velocity round trip (|β| from 1e-9 to 0.99)", () => {
     fc.assert(
@@ -46,7 +46,7 @@ describe("relativistic Doppler", () => {
     fc.assert(
       fc.property(signedLog(1e-12, 0.999), (beta) => {
         const v = beta * C;
-        return Math.abs(velocityFromRedshiftSI(redshiftFromVelocitySI(v)) - v) <= 4e-15 * Math.abs(v);
+        return Math.abs(radialVelocityFromRedshiftSI(redshiftFromRadialVelocitySI(v)) - v) <= 4e-15 * Math.abs(v);
       }),
     );
   });
@@ -84,13 +84,13 @@ describe("bad input", () => {
     expect(() => relativisticDopplerWavelengthSI(500e-9, C)).toThrow(/radialVelocityMs/);
     expect(() => relativisticDopplerWavelengthSI(500e-9, -2 * C)).toThrow(/radialVelocityMs/);
     expect(() => classicalDopplerWavelengthSI(500e-9, C)).toThrow(/radialVelocityMs/);
-    expect(() => redshiftFromVelocitySI(Number.NaN)).toThrow(/radialVelocityMs/);
+    expect(() => redshiftFromRadialVelocitySI(Number.NaN)).toThrow(/radialVelocityMs/);
     expect(() => dopplerShiftWavelengthsSI(new Float64Array(1), C, new Float64Array(1))).toThrow(/radialVelocityMs/);
   });
   it("bad wavelengths and redshifts → RangeError naming them", () => {
     expect(() => relativisticDopplerWavelengthSI(0, 1)).toThrow(/restWavelengthM/);
     expect(() => radialVelocityFromWavelengthsSI(-1, 1e-7)).toThrow(/observedWavelengthM/);
-    expect(() => velocityFromRedshiftSI(-1)).toThrow(/redshift/);
+    expect(() => radialVelocityFromRedshiftSI(-1)).toThrow(/redshift/);
     expect(() => observedWavelengthFromRedshiftSI(1e-7, Infinity)).toThrow(/redshift/);
   });
 });

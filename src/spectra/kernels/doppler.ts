@@ -36,15 +36,15 @@ function requireSubluminal(name: string, vMs: number): number {
  *
  * @example
  * ```ts
- * redshiftFromVelocitySI(0.6 * 299792458); // 1
+ * redshiftFromRadialVelocitySI(0.6 * 299792458); // 1
  * ```
  */
-export function redshiftFromVelocitySI(radialVelocityMs: number): number {
+export function redshiftFromRadialVelocitySI(radialVelocityMs: number): number {
   requireSubluminal("radialVelocityMs", radialVelocityMs);
   return redshiftFromVelocityUnchecked(radialVelocityMs);
 }
 
-/** {@link redshiftFromVelocitySI} without the input check (|v| < c assumed). @internal */
+/** {@link redshiftFromRadialVelocitySI} without the input check (|v| < c assumed). @internal */
 export function redshiftFromVelocityUnchecked(radialVelocityMs: number): number {
   return Math.expm1(Math.atanh(radialVelocityMs / C));
 }
@@ -55,10 +55,10 @@ export function redshiftFromVelocityUnchecked(radialVelocityMs: number): number 
  *
  * @example
  * ```ts
- * velocityFromRedshiftSI(1); // 0.6 c
+ * radialVelocityFromRedshiftSI(1); // 0.6 c
  * ```
  */
-export function velocityFromRedshiftSI(redshift: number): number {
+export function radialVelocityFromRedshiftSI(redshift: number): number {
   requireFinite("redshift", redshift, "(dimensionless)");
   if (!(redshift > -1)) {
     throw new RangeError(`redshift must be a finite number > -1 (dimensionless); got ${show(redshift)}`);
@@ -66,7 +66,7 @@ export function velocityFromRedshiftSI(redshift: number): number {
   return velocityFromRedshiftUnchecked(redshift);
 }
 
-/** {@link velocityFromRedshiftSI} without the input check (z finite, > −1 assumed). @internal */
+/** {@link radialVelocityFromRedshiftSI} without the input check (z finite, > −1 assumed). @internal */
 export function velocityFromRedshiftUnchecked(redshift: number): number {
   const q = redshift * (2 + redshift);
   return (C * q) / (2 + q);

@@ -196,10 +196,10 @@ export function lineDepthUnchecked(flux: Float64Array, continuum: Float64Array, 
 
 /** Result of {@link fitPolynomialContinuumSI}. */
 export interface ContinuumFitSI {
-  /** Coefficients c_k of Σ c_k x^k with x = (λ − centerM)/halfSpanM. */
+  /** Coefficients c_k of Σ c_k x^k with x = (λ − centreM)/halfSpanM. */
   readonly coefficients: Float64Array;
   /** Centre of the scaled variable, m. */
-  readonly centerM: number;
+  readonly centreM: number;
   /** Half-span of the scaled variable, m. */
   readonly halfSpanM: number;
   /** Root-mean-square residual of the fitted points (unit of the flux). */
@@ -243,7 +243,7 @@ export function fitPolynomialContinuumSI(
     throw new RangeError(`regionsM must hold [lo, hi] pairs (even, non-zero length); got length ${regionsM.length}`);
   }
   const m = degree + 1;
-  const centerM = 0.5 * ((wavelengthsM[0] as number) + (wavelengthsM[n - 1] as number));
+  const centreM = 0.5 * ((wavelengthsM[0] as number) + (wavelengthsM[n - 1] as number));
   const halfSpanM = Math.max(0.5 * ((wavelengthsM[n - 1] as number) - (wavelengthsM[0] as number)), Number.MIN_VALUE);
   const ata = new Float64Array(m * m);
   const atb = new Float64Array(m);
@@ -258,7 +258,7 @@ export function fitPolynomialContinuumSI(
       used[i] = 1;
       const f = flux[i] as number;
       if (!Number.isFinite(f)) throw new RangeError(`flux must be finite in the continuum regions; element ${i} is ${f}`);
-      const x = ((wavelengthsM[i] as number) - centerM) / halfSpanM;
+      const x = ((wavelengthsM[i] as number) - centreM) / halfSpanM;
       let pj = 1;
       for (let j = 0; j < m; j++) {
         let pk = 1;
@@ -304,7 +304,7 @@ export function fitPolynomialContinuumSI(
     coef[r] = s / (ata[r * m + r] as number);
   }
   const evalAt = (lam: number): number => {
-    const x = (lam - centerM) / halfSpanM;
+    const x = (lam - centreM) / halfSpanM;
     let v = 0;
     for (let k = m - 1; k >= 0; k--) v = v * x + (coef[k] as number);
     return v;
@@ -315,5 +315,5 @@ export function fitPolynomialContinuumSI(
     out[i] = v;
     if (used[i]) ss += ((flux[i] as number) - v) ** 2;
   }
-  return { coefficients: coef, centerM, halfSpanM, rms: Math.sqrt(ss / count), count };
+  return { coefficients: coef, centreM, halfSpanM, rms: Math.sqrt(ss / count), count };
 }

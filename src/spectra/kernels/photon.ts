@@ -17,14 +17,14 @@ const HC = H * C;
  * Photon energy from vacuum wavelength, E = hc/λ, J.
  * @example
  * ```ts
- * photonEnergyFromWavelengthSI(500e-9); // 3.9729e-19 J
+ * photonEnergyFromVacuumWavelengthSI(500e-9); // 3.9729e-19 J
  * ```
  */
-export function photonEnergyFromWavelengthSI(wavelengthM: number): number {
+export function photonEnergyFromVacuumWavelengthSI(wavelengthM: number): number {
   return photonEnergyFromWavelengthUnchecked(requirePositive("wavelengthM", wavelengthM, "m"));
 }
 
-/** {@link photonEnergyFromWavelengthSI} without the input check (wavelengthM finite, > 0 assumed). @internal */
+/** {@link photonEnergyFromVacuumWavelengthSI} without the input check (wavelengthM finite, > 0 assumed). @internal */
 export function photonEnergyFromWavelengthUnchecked(wavelengthM: number): number {
   return HC / wavelengthM;
 }

@@ -68,7 +68,7 @@ describe("synthesis", () => {
           const rep = synthesizeSpectrumSI(
             g,
             cont,
-            [{ centerM: center, dopplerWidthM: b, lorentzHwhmM: a * b, equivalentWidthM: W }],
+            [{ centreM: center, dopplerWidthM: b, lorentzHwhmM: a * b, equivalentWidthM: W }],
             flux,
             { tauCutoff },
           );
@@ -96,7 +96,7 @@ describe("synthesis", () => {
     const cont = new Float64Array(n).fill(1);
     const flux = new Float64Array(n);
     const center = 600e-9 + 0.37 * (b / 10); // off-grid centre
-    synthesizeSpectrumSI(g, cont, [{ centerM: center, gaussianSigmaM: b / Math.SQRT2, lorentzHwhmM: 0, tau0: 0.7 }], flux);
+    synthesizeSpectrumSI(g, cont, [{ centreM: center, gaussianSigmaM: b / Math.SQRT2, lorentzHwhmM: 0, tau0: 0.7 }], flux);
     // Symmetric profile, trapezoid on a fine grid: centroid exact to ≪ step; 1e-4 of a step allowed.
     expect(Math.abs(lineCentroidSI(g, flux, cont, g[0] as number, g[n - 1] as number) - center)).toBeLessThan(1e-4 * (b / 10));
     // Depth at the nearest grid point (0.037 b from centre): 1 − exp(−0.7 e^{−0.037²}).
@@ -110,7 +110,7 @@ describe("synthesis", () => {
     cont[5] = Number.NaN;
     const one = new Float64Array(n);
     const two = new Float64Array(n);
-    const line = { centerM: 1e-6 + 50e-12, dopplerWidthM: 10e-12, lorentzHwhmM: 1e-13, tau0: 0.4 };
+    const line = { centreM: 1e-6 + 50e-12, dopplerWidthM: 10e-12, lorentzHwhmM: 1e-13, tau0: 0.4 };
     synthesizeSpectrumSI(g, cont, [line], one);
     const r = synthesizeSpectrumSI(g, cont, [line, line], two);
     expect(r.invalid).toEqual([5]);
@@ -132,10 +132,10 @@ describe("synthesis", () => {
     const g = grid(1e-6, 1e-12, 10);
     const c = new Float64Array(10).fill(1);
     const o = new Float64Array(10);
-    expect(() => synthesizeSpectrumSI(g, c, [{ centerM: 1e-6, lorentzHwhmM: 0, tau0: 1 }], o)).toThrow(/lines\[0\] must give exactly one of dopplerWidthM/);
-    expect(() => synthesizeSpectrumSI(g, c, [{ centerM: 1e-6, dopplerWidthM: 1e-12, lorentzHwhmM: 0 }], o)).toThrow(/tau0 or equivalentWidthM/);
-    expect(() => synthesizeSpectrumSI(g, c, [{ centerM: 1e-6, dopplerWidthM: -1, lorentzHwhmM: 0, tau0: 1 }], o)).toThrow(/lines\[0\]\.dopplerWidthM/);
-    expect(() => synthesizeSpectrumSI(g, c, [{ centerM: 1e-6, dopplerWidthM: 1e-12, lorentzHwhmM: 0, tau0: -1 }], o)).toThrow(/lines\[0\]\.tau0/);
+    expect(() => synthesizeSpectrumSI(g, c, [{ centreM: 1e-6, lorentzHwhmM: 0, tau0: 1 }], o)).toThrow(/lines\[0\] must give exactly one of dopplerWidthM/);
+    expect(() => synthesizeSpectrumSI(g, c, [{ centreM: 1e-6, dopplerWidthM: 1e-12, lorentzHwhmM: 0 }], o)).toThrow(/tau0 or equivalentWidthM/);
+    expect(() => synthesizeSpectrumSI(g, c, [{ centreM: 1e-6, dopplerWidthM: -1, lorentzHwhmM: 0, tau0: 1 }], o)).toThrow(/lines\[0\]\.dopplerWidthM/);
+    expect(() => synthesizeSpectrumSI(g, c, [{ centreM: 1e-6, dopplerWidthM: 1e-12, lorentzHwhmM: 0, tau0: -1 }], o)).toThrow(/lines\[0\]\.tau0/);
     expect(() => synthesizeSpectrumSI(g.slice().reverse(), c, [], o)).toThrow(/wavelengthsM/);
     expect(() => synthesizeSpectrumSI(g, c.subarray(0, 5), [], o)).toThrow(/continuum/);
     expect(() => synthesizeSpectrumSI(g, c, [], o, { tauCutoff: 0 })).toThrow(/tauCutoff/);

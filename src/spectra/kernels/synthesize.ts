@@ -50,7 +50,7 @@ const w = new Float64Array(2);
  */
 export interface SynthesisLineSI {
   /** Line-centre wavelength, m (> 0). */
-  readonly centerM: number;
+  readonly centreM: number;
   /** Doppler width b (1/e half-width of the Gaussian), m (> 0). */
   readonly dopplerWidthM?: number;
   /** Gaussian standard deviation σ = b/√2, m (> 0). */
@@ -236,7 +236,7 @@ function lowerBound(grid: Float64Array, x: number): number {
 
 function resolveLine(line: SynthesisLineSI, i: number): { b: number; gamma: number } {
   const p = `lines[${i}]`;
-  requirePositive(`${p}.centerM`, line.centerM, "m");
+  requirePositive(`${p}.centreM`, line.centreM, "m");
   const hasB = line.dopplerWidthM !== undefined;
   const hasS = line.gaussianSigmaM !== undefined;
   if (hasB === hasS) {
@@ -277,7 +277,7 @@ function resolveLine(line: SynthesisLineSI, i: number): { b: number; gamma: numb
  * const grid = new Float64Array(1001).map((_, i) => 656e-9 + i * 1e-12);
  * const cont = new Float64Array(1001).fill(1);
  * const flux = new Float64Array(1001);
- * synthesizeSpectrumSI(grid, cont, [{ centerM: 656.5e-9, dopplerWidthM: 3e-11, lorentzHwhmM: 1e-12, tau0: 2 }], flux);
+ * synthesizeSpectrumSI(grid, cont, [{ centreM: 656.5e-9, dopplerWidthM: 3e-11, lorentzHwhmM: 1e-12, tau0: 2 }], flux);
  * ```
  */
 export function synthesizeSpectrumSI(
@@ -299,14 +299,14 @@ export function synthesizeSpectrumSI(
   requireFinite("options.tauCutoff", tauCut, "(dimensionless)");
   const nl = lines.length;
   const resolved: ResolvedLinesSI = {
-    centerM: new Float64Array(nl),
+    centreM: new Float64Array(nl),
     dopplerWidthM: new Float64Array(nl),
     lorentzHwhmM: new Float64Array(nl),
     tau0: new Float64Array(nl),
   };
   for (let i = 0; i < nl; i++) {
     const r = resolveLine(lines[i] as SynthesisLineSI, i);
-    resolved.centerM[i] = (lines[i] as SynthesisLineSI).centerM;
+    resolved.centreM[i] = (lines[i] as SynthesisLineSI).centreM;
     resolved.dopplerWidthM[i] = r.b;
     resolved.lorentzHwhmM[i] = r.gamma;
   }
@@ -331,7 +331,7 @@ export function synthesizeSpectrumSI(
  */
 export interface ResolvedLinesSI {
   /** Line centres, m (finite, > 0). */
-  readonly centerM: Float64Array;
+  readonly centreM: Float64Array;
   /** Doppler widths b, m (finite, > 0). */
   readonly dopplerWidthM: Float64Array;
   /** Lorentz HWHM γ, m (finite, ≥ 0). */
@@ -367,7 +367,7 @@ export function synthesizeSpectrumUnchecked(
     if (!(t0 > tauCut)) continue;
     const b = lines.dopplerWidthM[i] as number;
     const a = (lines.lorentzHwhmM[i] as number) / b;
-    const center = lines.centerM[i] as number;
+    const center = lines.centreM[i] as number;
     const k0 = voigtK(0, a);
     const uCore = Math.sqrt(Math.log(t0 / tauCut));
     const uWing = a > 0 ? Math.sqrt((t0 * a) / (SQRT_PI * k0 * tauCut)) : 0;

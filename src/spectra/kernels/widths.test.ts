@@ -79,7 +79,7 @@ describe("Lorentz widths", () => {
     expect(() => dopplerVelocityWidthSI(0, 1e-26, 0)).toThrow(/temperatureK/);
     expect(() => dopplerVelocityWidthSI(100, -1, 0)).toThrow(/massKg/);
     expect(() => dopplerVelocityWidthSI(100, 1e-26, -1)).toThrow(/microturbulenceMs/);
-    expect(() => lorentzHwhmWavelengthSI(0, 1)).toThrow(/centerWavelengthM/);
+    expect(() => lorentzHwhmWavelengthSI(0, 1)).toThrow(/centreWavelengthM/);
     expect(() => lorentzHwhmFrequencySI(Number.NaN)).toThrow(/dampingRatePerS/);
     expect(() => atomicMassKg(0)).toThrow(/relativeAtomicMass/);
   });

@@ -68,13 +68,13 @@ export function dopplerVelocityWidthUnchecked(temperatureK: number, massKg: numb
  * ```
  */
 export function dopplerWidthWavelengthSI(
-  centerWavelengthM: number,
+  centreWavelengthM: number,
   temperatureK: number,
   massKg: number,
   microturbulenceMs: number,
 ): number {
-  requirePositive("centerWavelengthM", centerWavelengthM, "m");
-  return dopplerWidthUnchecked(centerWavelengthM, dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs));
+  requirePositive("centreWavelengthM", centreWavelengthM, "m");
+  return dopplerWidthUnchecked(centreWavelengthM, dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs));
 }
 
 /**
@@ -94,13 +94,13 @@ export function dopplerWidthUnchecked(center: number, velocityWidthMs: number): 
  * ```
  */
 export function dopplerWidthFrequencySI(
-  centerFrequencyHz: number,
+  centreFrequencyHz: number,
   temperatureK: number,
   massKg: number,
   microturbulenceMs: number,
 ): number {
-  requirePositive("centerFrequencyHz", centerFrequencyHz, "Hz");
-  return dopplerWidthUnchecked(centerFrequencyHz, dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs));
+  requirePositive("centreFrequencyHz", centreFrequencyHz, "Hz");
+  return dopplerWidthUnchecked(centreFrequencyHz, dopplerVelocityWidthSI(temperatureK, massKg, microturbulenceMs));
 }
 
 /**
@@ -129,15 +129,15 @@ export function lorentzHwhmFrequencyUnchecked(dampingRatePerS: number): number {
  * lorentzHwhmWavelengthSI(121.567e-9, 6.265e8); // ≈ 2.46e-15 m
  * ```
  */
-export function lorentzHwhmWavelengthSI(centerWavelengthM: number, dampingRatePerS: number): number {
-  requirePositive("centerWavelengthM", centerWavelengthM, "m");
+export function lorentzHwhmWavelengthSI(centreWavelengthM: number, dampingRatePerS: number): number {
+  requirePositive("centreWavelengthM", centreWavelengthM, "m");
   requireNonNegative("dampingRatePerS", dampingRatePerS, "s^-1");
-  return lorentzHwhmWavelengthUnchecked(centerWavelengthM, dampingRatePerS);
+  return lorentzHwhmWavelengthUnchecked(centreWavelengthM, dampingRatePerS);
 }
 
 /** {@link lorentzHwhmWavelengthSI} without the input checks. @internal */
-export function lorentzHwhmWavelengthUnchecked(centerWavelengthM: number, dampingRatePerS: number): number {
-  return (centerWavelengthM * centerWavelengthM * dampingRatePerS) / (4 * Math.PI * C);
+export function lorentzHwhmWavelengthUnchecked(centreWavelengthM: number, dampingRatePerS: number): number {
+  return (centreWavelengthM * centreWavelengthM * dampingRatePerS) / (4 * Math.PI * C);
 }
 
 /**
