@@ -60,7 +60,9 @@ export const EXIT_CODES_HELP = `Exit codes:
      and reported on stderr with its line number)
   2  usage error: unknown command or option, bad option value, unreadable file or
      header, incompatible units
-  3  internal error (a bug; please report it with the command line)`;
+  3  internal error (a bug; please report it with the command line)
+  4  the output could not be written (disk full, no permission, I/O error)
+A closed standard output (e.g. '| head') ends the run quietly with code 0.`;
 
 /** Full help text of a command. */
 export function commandHelp(c: Command): string {

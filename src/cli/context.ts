@@ -39,6 +39,8 @@ export const EXIT = {
   USAGE: 2,
   /** A bug: an unexpected exception (reported on stderr with its stack). */
   INTERNAL: 3,
+  /** The output could not be written (disk full, no permission, I/O error): one line on stderr, no stack. */
+  OUTPUT_FAILED: 4,
 } as const;
 
 /** A mistake in how the tool was called; reported on stderr with exit code 2. */
@@ -49,7 +51,25 @@ export class UsageError extends Error {
   }
 }
 
-/** Write one line to a stream (without waiting: messages are small). */
+/**
+ * The system error code of an I/O failure (`ENOSPC`, `EPIPE`, `EACCES`, …),
+ * or undefined for any other exception.
+ */
+export function ioErrorCode(e: unknown): string | undefined {
+  const code = (e as { code?: unknown } | null)?.code;
+  return e instanceof Error && typeof code === "string" && /^E[A-Z0-9]+$/.test(code) ? code : undefined;
+}
+
+/** Bidirectional control characters (embeddings, overrides, isolates, marks; Unicode UAX #9). */
+const BIDI_CONTROLS = /[\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/g;
+
+/** Text for display (messages, report titles): bidirectional control characters removed, so a file name cannot reorder what is shown. */
+export function displayText(text: string): string {
+  return text.replace(BIDI_CONTROLS, "");
+}
+
+/** Write one line to a stream (without waiting: messages are small), stripped of bidirectional controls. */
 export function say(stream: OutStream, text: string): void {
-  stream.write(text.endsWith("\n") ? text : `${text}\n`);
+  const clean = displayText(text);
+  stream.write(clean.endsWith("\n") ? clean : `${clean}\n`);
 }

@@ -7,7 +7,7 @@
  */
 import { parseArgs } from "./args";
 import { commandHelp, EXIT_CODES_HELP, type Command } from "./command";
-import { EXIT, UsageError, say, type CliIO } from "./context";
+import { EXIT, UsageError, ioErrorCode, say, type CliIO } from "./context";
 import { convertCommand } from "./commands/convert";
 import { demoCommand } from "./commands/demo";
 import { fitCommand } from "./commands/fit";
@@ -58,7 +58,7 @@ export function toolHelp(): string {
  *
  * @param argv - the arguments after the program name (`process.argv.slice(2)`)
  * @param io - streams and working directory
- * @returns the exit code: 0 success, 1 some rows rejected, 2 usage error, 3 internal error
+ * @returns the exit code: 0 success, 1 some rows rejected, 2 usage error, 3 internal error, 4 output not written
  */
 export async function main(argv: readonly string[], io: CliIO): Promise<number> {
   const [first, ...rest] = argv;
@@ -98,6 +98,12 @@ export async function main(argv: readonly string[], io: CliIO): Promise<number> 
       say(io.stderr, `starlume ${cmd.name}: error: ${e.message}`);
       say(io.stderr, `(see 'starlume ${cmd.name} --help')`);
       return EXIT.USAGE;
+    }
+    const code = ioErrorCode(e);
+    if (code === "EPIPE") return EXIT.OK; // the reader went away (`| head`): end quietly
+    if (code !== undefined) {
+      say(io.stderr, `starlume ${cmd.name}: error: cannot write the output (${code}${code === "ENOSPC" ? ": no space left on device" : ""})`);
+      return EXIT.OUTPUT_FAILED;
     }
     say(io.stderr, `starlume ${cmd.name}: internal error (please report it): ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
     return EXIT.INTERNAL;

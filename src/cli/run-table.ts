@@ -8,10 +8,12 @@
  *
  * @module
  */
-import { optString, type ParsedArgs, type OptionSpec } from "./args";
+import { optInteger, optString, type ParsedArgs, type OptionSpec } from "./args";
 import { EXIT, UsageError, say, type CliIO } from "./context";
 import type { ColumnSpec } from "./io/header";
 import { Progress } from "./io/progress";
+import { defaultJobs, IN_FLIGHT_PER_JOB, MAX_JOBS, WorkerPool, type ReadableRow, type RowResult } from "./jobs";
+import { tableWorker } from "./worker-state";
 import type { CellValue } from "./io/write";
 import { defaultFormat, openOutput, openTableWriter, OUTPUT_FORMATS, type OutColumn } from "./table-out";
 import { inputFormatFor, openTable, type InCell, type TableItem } from "./table-in";
@@ -25,14 +27,12 @@ export const TABLE_OPTIONS: readonly OptionSpec[] = [
   { name: "digits", short: "d", kind: "value", valueName: "N", help: "significant digits of numbers without uncertainty in the aligned table", defaultText: "4" },
   { name: "report", kind: "value", valueName: "DIR", help: "write an HTML report with figures to DIR/index.html" },
   { name: "quiet", short: "q", kind: "flag", help: "no summary line and no per-row messages on stderr" },
+  { name: "jobs", short: "j", kind: "value", valueName: "N", help: "process rows on N worker threads (output identical to --jobs 1)", defaultText: "the number of cores" },
+  { name: "shard", kind: "value", valueName: "K/N", help: "process only input rows K, K+N, K+2N, … (for a job array; merge by the line column)" },
+  { name: "line-offset", kind: "value", valueName: "M", help: "add M to every line number (for chunks of a larger file)", defaultText: "0" },
 ];
 
-/** Result of processing one row. */
-export interface RowResult {
-  readonly cells: readonly CellValue[];
-  /** Why the row was rejected (it is still written), or undefined. */
-  readonly rejected?: string;
-}
+export type { ReadableRow, RowResult } from "./jobs";
 
 /** A command's handling of one table, built once its header is known. */
 export interface TableBinding {
@@ -53,19 +53,47 @@ export interface TableBinding {
   finish?(summary: RunSummary): Promise<void>;
 }
 
-/** A readable input row and its 1-based line number. */
-export interface ReadableRow {
-  readonly cells: readonly InCell[];
-  readonly line: number;
-}
-
 /** Rows per chunk when a binding processes rows in batches (output is flushed after each chunk). */
 export const BATCH_ROWS = 4096;
 
+/** A chunk of input items and how to get its results (on this thread or from a worker). */
+interface Pending {
+  readonly chunk: readonly TableItem[];
+  run(): readonly RowResult[] | Promise<readonly RowResult[]>;
+}
+
+/** `--shard K/N`: this run takes input rows K, K+N, K+2N, … (K from 1 to N). */
+export function shardOption(args: ParsedArgs): { index: number; count: number } | undefined {
+  const v = optString(args, "shard");
+  if (v === undefined) return undefined;
+  const m = /^\s*([0-9]+)\s*\/\s*([0-9]+)\s*$/.exec(v);
+  const index = m !== null ? Number(m[1]) : NaN;
+  const count = m !== null ? Number(m[2]) : NaN;
+  if (!(Number.isSafeInteger(index) && Number.isSafeInteger(count) && count >= 1 && index >= 1 && index <= count)) {
+    throw new UsageError(`option --shard must be K/N with integers 1 <= K <= N (e.g. 3/10); got '${v}'`);
+  }
+  return { index, count };
+}
+
+/** The command-line form of parsed options (for worker threads, which parse them again). */
+export function argvOf(args: ParsedArgs): string[] {
+  const argv: string[] = [];
+  for (const [name, v] of args.options) {
+    if (v === true) argv.push(`--${name}`);
+    else if (typeof v === "string") argv.push(`--${name}=${v}`);
+    else for (const x of v) argv.push(`--${name}=${x}`);
+  }
+  argv.push("--", ...args.positionals);
+  return argv;
+}
+
 /** Counts of a run. */
 export interface RunSummary {
+  /** Input rows (every one is in the output): ok + flagged + rejected. */
   readonly rows: number;
   readonly rejected: number;
+  /** Rows with a result and a warning (status "flagged"). */
+  readonly flagged?: number;
 }
 
 /** How many rejected rows are listed on stderr before the rest are only counted. */
@@ -91,6 +119,15 @@ export async function runTableCommand(
   const digitsText = optString(args, "digits");
   const digits = digitsText === undefined ? 4 : Number(digitsText);
   if (!Number.isInteger(digits) || digits < 1 || digits > 17) throw new UsageError(`option --digits must be an integer from 1 to 17; got '${digitsText ?? ""}'`);
+  const jobs = optInteger(args, "jobs", defaultJobs(), 1, MAX_JOBS);
+  const shard = shardOption(args);
+  const lineOffset = optInteger(args, "line-offset", 0, 0);
+  const worker = tableWorker();
+  if (worker !== undefined) {
+    // Inside a worker of --jobs N: bind to the main thread's columns and serve chunks of rows.
+    worker.serve(await bind(worker.columns, worker.source));
+    return EXIT.OK;
+  }
   const table = await openTable(path, format, io);
   const binding = await bind(table.columns, table.source);
   const outPath = optString(args, "output");
@@ -100,77 +137,94 @@ export async function runTableCommand(
   const progress = new Progress({ stream: io.stderr, label: command });
   let rows = 0;
   let rejected = 0;
+  let flagged = 0;
+  // A row whose status column says "flagged" (a result, with a warning) is counted apart from ok and rejected.
+  const statusIndex = binding.columns.findIndex((c) => c.name === "status" && (c.unit === null || c.unit === undefined));
   const reject = (line: number, why: string): void => {
     rejected++;
     if (!quiet && rejected <= MAX_ROW_MESSAGES) say(io.stderr, `${table.source}: line ${line}: rejected: ${why.replace(/^line \d+: /, "")}`);
   };
-  const emit = async (cells: readonly CellValue[]): Promise<void> => {
-    const p = writer.writeRow(cells);
-    if (p !== undefined) await p;
-    progress.update(rows, rejected > 0 ? `${rejected} rejected` : undefined);
-  };
-  try {
-    if (binding.rows === undefined) {
-      for (;;) {
-        const r = await table.items.next();
-        if (r.done === true) break;
-        const item = r.value;
-        rows++;
-        let cells: readonly CellValue[];
-        if (item.kind === "bad") {
-          reject(item.line, item.message);
-          cells = binding.badRow(item.line, item.message);
-        } else {
-          const res = binding.row(item.cells, item.line);
-          if (res.rejected !== undefined) reject(item.line, res.rejected);
-          cells = res.cells;
-        }
-        await emit(cells);
+  const local = (readable: readonly ReadableRow[]): readonly RowResult[] =>
+    readable.length === 0 ? [] : binding.rows !== undefined ? binding.rows(readable) : readable.map((r) => binding.row(r.cells, r.line));
+  /** Write one processed chunk, in input order. */
+  const flush = async (entry: Pending): Promise<void> => {
+    const results = await entry.run();
+    let readable = 0;
+    for (const item of entry.chunk) if (item.kind === "row") readable++;
+    if (results.length !== readable) throw new Error(`internal: ${command} returned ${results.length} results for ${readable} rows`);
+    let k = 0;
+    for (const item of entry.chunk) {
+      rows++;
+      let cells: readonly CellValue[];
+      if (item.kind === "bad") {
+        reject(item.line, item.message);
+        cells = binding.badRow(item.line, item.message);
+      } else {
+        const res = results[k++] as RowResult;
+        if (res.rejected !== undefined) reject(item.line, res.rejected);
+        else if (statusIndex !== -1 && res.cells[statusIndex] === "flagged") flagged++;
+        cells = res.cells;
       }
-    } else {
-      // Chunked: read up to BATCH_ROWS items, process the readable ones together, write all in input order.
-      const rowsOf = binding.rows.bind(binding);
-      let done = false;
-      while (!done) {
-        const chunk: TableItem[] = [];
-        while (chunk.length < BATCH_ROWS) {
-          const r = await table.items.next();
-          if (r.done === true) {
-            done = true;
-            break;
-          }
-          chunk.push(r.value);
-        }
-        const readable: ReadableRow[] = [];
-        for (const item of chunk) if (item.kind === "row") readable.push({ cells: item.cells, line: item.line });
-        const results = readable.length > 0 ? rowsOf(readable) : [];
-        if (results.length !== readable.length) throw new Error(`internal: ${command} returned ${results.length} results for ${readable.length} rows`);
-        let k = 0;
-        for (const item of chunk) {
-          rows++;
-          let cells: readonly CellValue[];
-          if (item.kind === "bad") {
-            reject(item.line, item.message);
-            cells = binding.badRow(item.line, item.message);
-          } else {
-            const res = results[k++] as RowResult;
-            if (res.rejected !== undefined) reject(item.line, res.rejected);
-            cells = res.cells;
-          }
-          await emit(cells);
-        }
-      }
+      const p = writer.writeRow(cells);
+      if (p !== undefined) await p;
+      progress.update(rows, rejected > 0 ? `${rejected} rejected` : undefined);
     }
+  };
+  let pool: WorkerPool | undefined;
+  try {
+    // Rows are read in chunks of BATCH_ROWS. With --jobs 1 each chunk is processed and written
+    // before the next is read. With --jobs N chunks go to N worker threads, at most
+    // IN_FLIGHT_PER_JOB per worker ahead of the writer (a table of one chunk, and with a report the
+    // first chunk, which feeds the report's table and figures, are processed on this thread);
+    // results are written in input order.
+    const pending: Pending[] = [];
+    const window = jobs === 1 ? 0 : jobs * IN_FLIGHT_PER_JOB;
+    let index = 0; // input rows seen (for --shard)
+    let chunks = 0;
+    let done = false;
+    while (!done) {
+      const chunk: TableItem[] = [];
+      while (chunk.length < BATCH_ROWS) {
+        const r = await table.items.next();
+        if (r.done === true) {
+          done = true;
+          break;
+        }
+        const item = r.value;
+        if (shard !== undefined && index++ % shard.count !== shard.index - 1) continue;
+        chunk.push(lineOffset === 0 ? item : { ...item, line: item.line + lineOffset });
+      }
+      if (chunk.length === 0) break;
+      const readable: ReadableRow[] = [];
+      for (const item of chunk) if (item.kind === "row") readable.push({ cells: item.cells, line: item.line });
+      // On this thread: everything with --jobs 1; a table of one chunk (no worker start-up); the first chunk of a report.
+      if (jobs === 1 || readable.length === 0 || (chunks === 0 && (done || binding.finish !== undefined))) {
+        pending.push({ chunk, run: () => local(readable) });
+      } else {
+        pool ??= new WorkerPool(jobs, { starlumeTableWorker: 1, command, argv: argvOf(args), columns: table.columns, source: table.source, cwd: io.cwd ?? process.cwd() });
+        const results = pool.submit(readable);
+        results.catch(() => {}); // awaited in order by flush; avoid an unhandled rejection meanwhile
+        pending.push({ chunk, run: () => results });
+      }
+      chunks++;
+      while (pending.length > window) await flush(pending.shift() as Pending);
+    }
+    while (pending.length > 0) await flush(pending.shift() as Pending);
     await writer.end();
-  } finally {
+  } catch (e) {
     progress.done();
-    await output.close();
+    if (pool !== undefined) await pool.close();
+    await output.abort();
+    throw e;
   }
+  progress.done();
+  if (pool !== undefined) await pool.close();
+  await output.close();
   if (!quiet) {
     if (rejected > MAX_ROW_MESSAGES) say(io.stderr, `${table.source}: … and ${rejected - MAX_ROW_MESSAGES} more rejected rows (see the status and reason columns)`);
-    say(io.stderr, `${command}: ${rows} row${rows === 1 ? "" : "s"}, ${rows - rejected} ok, ${rejected} rejected`);
+    say(io.stderr, `${command}: ${rows} row${rows === 1 ? "" : "s"}, ${rows - rejected - flagged} ok, ${flagged} flagged, ${rejected} rejected`);
   }
-  if (binding.finish !== undefined) await binding.finish({ rows, rejected });
+  if (binding.finish !== undefined) await binding.finish({ rows, rejected, flagged });
   return rejected > 0 ? EXIT.ROWS_REJECTED : EXIT.OK;
 }
 

@@ -6,9 +6,10 @@
  *
  * @module
  */
-import { createWriteStream } from "node:fs";
+import { createWriteStream, unlinkSync } from "node:fs";
+import { rename, rm, stat } from "node:fs/promises";
 import { once } from "node:events";
-import { resolve } from "node:path";
+import { basename, dirname, join, resolve } from "node:path";
 import { UsageError, type CliIO } from "./context";
 import { formatColumnHeader, type ColumnSpec } from "./io/header";
 import { AlignedTableWriter, CsvWriter, JsonWriter, TextOut, type CellValue, type TextSink } from "./io/write";
@@ -43,25 +44,73 @@ export interface TableWriterOptions {
   readonly digits?: number;
 }
 
+/** Temporary files of outputs being written (removed on a signal by {@link removeTemporaryOutputs}). */
+const temporaryOutputs = new Set<string>();
+
+/** Remove the temporary files of unfinished outputs (synchronous: for signal handlers). */
+export function removeTemporaryOutputs(): void {
+  for (const t of temporaryOutputs) {
+    try {
+      unlinkSync(t);
+    } catch {
+      /* already gone */
+    }
+  }
+  temporaryOutputs.clear();
+}
+
 /**
- * Where results go: `--output FILE` (created or truncated) or stdout. The
- * returned `close` ends the file stream (never stdout).
+ * Where results go: `--output FILE` or stdout. A regular file (new or
+ * existing) is written to a temporary file beside it, renamed over FILE by
+ * `close` once everything is written, so an interrupted run leaves no
+ * half-written FILE (`abort` removes the temporary file); other paths
+ * (`/dev/stdout`, a named pipe) are written directly. `close` never ends stdout.
  */
-export async function openOutput(path: string | undefined, io: CliIO): Promise<{ sink: TextSink; close: () => Promise<void> }> {
-  if (path === undefined || path === "-") return { sink: io.stdout, close: async () => {} };
+export async function openOutput(path: string | undefined, io: CliIO): Promise<{ sink: TextSink; close: () => Promise<void>; abort: () => Promise<void> }> {
+  if (path === undefined || path === "-") return { sink: io.stdout, close: async () => {}, abort: async () => {} };
   const full = resolve(io.cwd ?? process.cwd(), path);
-  const ws = createWriteStream(full, { encoding: "utf8" });
+  let regular = true;
+  try {
+    regular = (await stat(full)).isFile();
+  } catch {
+    /* does not exist yet: a new regular file */
+  }
+  const target = regular ? join(dirname(full), `.${basename(full)}.${process.pid}.${Date.now().toString(36)}.tmp`) : full;
+  const ws = createWriteStream(target, { encoding: "utf8" });
   try {
     await once(ws, "open");
   } catch (e) {
     throw new UsageError(`cannot write output file '${path}' (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`);
   }
+  if (regular) temporaryOutputs.add(target);
+  let failure: Error | undefined;
+  ws.on("error", (e) => {
+    failure ??= e;
+  });
+  const finish = async (): Promise<void> => {
+    if (!ws.closed) {
+      ws.end();
+      await new Promise<void>((res) => {
+        ws.once("close", () => res());
+      });
+    }
+  };
   return {
     sink: ws,
     close: async () => {
-      if (ws.closed) return;
-      ws.end();
-      await once(ws, "close");
+      await finish();
+      if (failure !== undefined) throw failure;
+      if (regular) {
+        await rename(target, full);
+        temporaryOutputs.delete(target);
+      }
+    },
+    abort: async () => {
+      await finish();
+      if (regular) {
+        await rm(target, { force: true });
+        temporaryOutputs.delete(target);
+      }
     },
   };
 }

@@ -65,7 +65,7 @@ describe("starlume solve", () => {
     expect(reason("8")).toContain("sigma(teff) must be > 0");
     for (const line of ["3", "4", "5", "6", "7", "8"]) expect(r.stderr).toContain(`stdin: line ${line}: rejected:`);
     expect(r.stderr).not.toContain("line 2:");
-    expect(r.stderr).toContain("solve: 8 rows, 2 ok, 6 rejected");
+    expect(r.stderr).toContain("solve: 8 rows, 2 ok, 0 flagged, 6 rejected");
     // ids are kept for readable rows
     expect(rows.find((x) => x.line === "4")?.name).toBe("undetermined");
   });
@@ -262,7 +262,8 @@ describe("starlume solve", () => {
       }
       lines.push(`s${i},${row}`);
     }
-    const res = await runCli(["solve", "-", "--format", "csv", "--quiet"], { stdin: lines.join("\n") + "\n" });
+    // One thread: the worker path is compared with this one in src/cli/jobs.test.ts.
+    const res = await runCli(["solve", "-", "--format", "csv", "--quiet", "--jobs", "1"], { stdin: lines.join("\n") + "\n" });
     expect(res.code).toBe(1);
     const rows = csvRecords(res.stdout);
     expect(rows).toHaveLength(n);

@@ -10,6 +10,7 @@ import { CGS, SI, type UnitSystem } from "../../quantity/system";
 import type { SystemName } from "../../quantity/quantity";
 import {
   createStarBatchSolver,
+  PARALLAX_BIAS_THRESHOLD,
   solveStar,
   StarBatchReason,
   type Measurement,
@@ -180,6 +181,42 @@ function worstPull(sol: StarSolution<SystemName>): string {
   return sol.consistency.dof > 0 ? best : "";
 }
 
+/**
+ * The reason text of a parallax whose inversion is biased (σ_ϖ/ϖ above the
+ * library's {@link PARALLAX_BIAS_THRESHOLD}, 0.1), naming the user's
+ * column; "" when there is no parallax or it is precise enough.
+ */
+export function parallaxBias(observations: StarObservations<SystemName>, column: string): string {
+  const p = (observations as Partial<Record<StarObservationName, Measurement<number>>>).parallax;
+  if (p === undefined) return "";
+  const rel = p.sigma / p.value;
+  return rel > PARALLAX_BIAS_THRESHOLD
+    ? `parallax bias: sigma(${column})/${column} = ${rel.toPrecision(2)} > ${PARALLAX_BIAS_THRESHOLD}, so the distance from inverting it is biased (Lutz-Kelker)`
+    : "";
+}
+
+/** Inputs that a `starlume fit` output derives from its fitted T and θ (and the distance). */
+const DERIVED_BY_FIT = ["luminosity", "radius", "fbol"] as const;
+
+/**
+ * Refuse a table written by `starlume fit` (recognised by its n_bands and
+ * flags columns) when its derived columns would be solved together with the
+ * fitted T and θ they were computed from: that counts the same photometry
+ * twice (σ(T) shrinks and χ² → 0 without any new information).
+ *
+ * @throws UsageError naming the derived columns and what to keep
+ */
+export function refuseDerivedInputs(columns: readonly ColumnSpec[], bound: readonly { readonly q: { readonly key: string }; readonly spec: ColumnSpec }[], source: string): void {
+  const names = new Set(columns.map((c) => c.name.toLowerCase()));
+  if (!(names.has("n_bands") && names.has("flags"))) return;
+  const derived = bound.filter((b) => (DERIVED_BY_FIT as readonly string[]).includes(b.q.key)).map((b) => `'${b.spec.name}'`);
+  const fitted = bound.filter((b) => b.q.key === "teff" || b.q.key === "theta");
+  if (derived.length === 0 || fitted.length === 0) return;
+  throw new UsageError(
+    `${source} is the output of 'starlume fit': its column${derived.length === 1 ? "" : "s"} ${derived.join(", ")} ${derived.length === 1 ? "was" : "were"} derived from the fitted teff and theta, so solving ${derived.length === 1 ? "it" : "them"} together with ${fitted.map((b) => `'${b.spec.name}'`).join(" and ")} would count the same photometry twice (the fit's T-theta covariance is not in the table). Remove the derived columns (keep teff, theta and the distance or parallax with their sigma columns) and solve again.`,
+  );
+}
+
 /** The consistency columns of an exactly determined star (as the scalar solver reports them: χ² 0, dof 0, p 1, tension 0). */
 const EXACT_CONSISTENCY = { chi2: 0, dof: 0, pValue: 1, tensionSigma: 0 } as const;
 
@@ -191,6 +228,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
   const sys = systemOption(args);
   const units = outputUnits(args, sys.name);
   const bound = bindInputs(columns, args);
+  refuseDerivedInputs(columns, bound, source);
   if (bound.length === 0) {
     throw new UsageError(
       `${source}: no solver input columns found; name them ${INPUTS.map((q) => `'${q.example}'`).join(", ")} (or map yours with --column KEY=NAME)`,
@@ -217,6 +255,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
   for (const k of OUTPUT_KEYS) out.push(...withSigma(k, units[k].text));
   out.push({ name: "chi2", unit: null }, { name: "dof", unit: null }, { name: "p_value", unit: null }, { name: "tension_sigma", unit: null }, { name: "worst_pull", unit: null }, { name: "reason", unit: null });
   const nOut = out.length;
+  const parallaxColumn = bound.find((b) => b.q.key === "parallax")?.spec.name ?? "parallax";
   const kept: CellValue[][] = [];
   const points: { name: string; temperatureK: number; sigmaT: number; luminosity: number; sigmaL: number }[] = [];
   const blank = (line: number, idText: string, reason: string): CellValue[] => {
@@ -233,15 +272,16 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
   };
   const observationKey = new Map(INPUTS.map((q) => [q.key, q.observation]));
   /** The output row of a solved star, from each quantity's value and σ in `sys`. */
-  const solvedRow = (line: number, idText: string, used: string, est: readonly (readonly [number, number])[], c: { chi2: number; dof: number; pValue: number; tensionSigma: number }, worst: string): CellValue[] => {
+  const solvedRow = (line: number, idText: string, used: string, est: readonly (readonly [number, number])[], c: { chi2: number; dof: number; pValue: number; tensionSigma: number }, worst: string, observations: StarObservations<SystemName>): CellValue[] => {
     const row: CellValue[] = [line];
     if (id !== -1) row.push(idText);
-    row.push("ok", used);
+    const bias = parallaxBias(observations, parallaxColumn);
+    row.push(bias === "" ? "ok" : "flagged", used);
     OUTPUT_KEYS.forEach((k, j) => {
       const e = est[j] as readonly [number, number];
       row.push(valueIn(sys, e[0], units[k].unit), valueIn(sys, e[1], units[k].unit));
     });
-    row.push(c.chi2, c.dof, c.pValue, c.tensionSigma, worst, "");
+    row.push(c.chi2, c.dof, c.pValue, c.tensionSigma, worst, bias);
     keep(row);
     if (points.length < REPORT_POINTS) {
       const t = est[0] as readonly [number, number];
@@ -267,7 +307,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
     try {
       const sol = solveStar(sys, observations);
       const est = [sol.temperature, sol.luminosity, sol.radius, sol.distance, sol.angularDiameter, sol.bolometricFlux].map((e) => [e.value, e.sigma] as const);
-      return { cells: solvedRow(line, idText, used.join("+"), est, sol.consistency, worstPull(sol)) };
+      return { cells: solvedRow(line, idText, used.join("+"), est, sol.consistency, worstPull(sol), observations) };
     } catch (e) {
       return rejectedRow(line, idText, e);
     }
@@ -366,7 +406,7 @@ async function bind(columns: readonly ColumnSpec[], args: ParsedArgs, io: CliIO,
         const b = batched[i];
         results[i] =
           b !== undefined
-            ? { cells: solvedRow(item.line, q.idText, q.used.join("+"), b.est, EXACT_CONSISTENCY, "") }
+            ? { cells: solvedRow(item.line, q.idText, q.used.join("+"), b.est, EXACT_CONSISTENCY, "", q.observations) }
             : scalarRow(item.line, q.idText, q.observations, q.used);
       });
       return results as RowResult[];
