@@ -22,6 +22,9 @@ export interface ExitCode {
 /** Exit code 3, shared by every command. */
 export const INTERNAL_EXIT: ExitCode = { code: 3, meaning: "internal error (a bug; please report it with the command line)" };
 
+/** Exit code 4, which every command can return: its output could not be written. */
+export const OUTPUT_EXIT: ExitCode = { code: 4, meaning: "the output could not be written (disk full, no permission, I/O error)" };
+
 /** The exit-code paragraph of a command's help: only the codes it declares. */
 export function exitCodesHelp(codes: readonly ExitCode[]): string {
   const lines = codes.map((c) => `  ${c.code}  ${c.meaning.split("\n").join("\n     ")}`);

@@ -60,7 +60,7 @@ describe("starlume: help, version, usage errors", () => {
   }
 
   // docs/naming.md §10: each command's help lists only the exit codes it can return.
-  const expected: Record<string, readonly number[]> = { solve: [0, 1, 2, 3], fit: [0, 1, 2, 3], planck: [0, 2, 3], lines: [0, 1, 2, 3], convert: [0, 2, 3], demo: [0, 1, 2, 3] };
+  const expected: Record<string, readonly number[]> = { solve: [0, 1, 2, 3, 4], fit: [0, 1, 2, 3, 4], planck: [0, 2, 3, 4], lines: [0, 1, 2, 3, 4], convert: [0, 2, 3, 4], demo: [0, 1, 2, 3, 4] };
   for (const c of COMMANDS) {
     it(`${c.name} --help lists exactly the exit codes ${c.name} can return`, async () => {
       expect(c.exitCodes.map((e) => e.code)).toEqual(expected[c.name]);
@@ -74,9 +74,9 @@ describe("starlume: help, version, usage errors", () => {
       expect(returnsRejected).toBe(expected[c.name]?.includes(1));
     });
   }
-  it("starlume --help keeps the general table of all four codes", () => {
+  it("starlume --help keeps the general table of all five codes", () => {
     const block = toolHelp().slice(toolHelp().indexOf("Exit codes:"));
-    expect([...block.matchAll(/^ {2}(\d) {2}/gm)].map((m) => Number(m[1]))).toEqual([0, 1, 2, 3]);
+    expect([...block.matchAll(/^ {2}(\d) {2}/gm)].map((m) => Number(m[1]))).toEqual([0, 1, 2, 3, 4]);
   });
 });
 

@@ -12,7 +12,7 @@ import { CGS, SI, type UnitSystem } from "../../quantity/system";
 import type { SystemName } from "../../quantity/quantity";
 import type { Unit } from "../../quantity/unit";
 import { optFlag, optInteger, type ParsedArgs } from "../args";
-import { INTERNAL_EXIT, type Command } from "../command";
+import { INTERNAL_EXIT, OUTPUT_EXIT, type Command } from "../command";
 import { EXIT, UsageError, say, type CliIO } from "../context";
 import { formatSignificant } from "../io/write";
 import { coherentUnitName, kindName, readUnit, sameDimension } from "../units";
@@ -81,6 +81,7 @@ double, unless --digits is given.`,
       meaning: "an unparseable value or unit, a change of kind (e.g. wavelength to frequency),\nor a result outside the double range",
     },
     INTERNAL_EXIT,
+    OUTPUT_EXIT,
   ],
   examples: [
     { args: ["3.6e-13 erg s^-1 cm^-2 A^-1", "W m^-2 nm^-1"], note: "a spectral flux density from CGS per ångström to SI per nanometre" },

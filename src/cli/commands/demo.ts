@@ -13,7 +13,7 @@ import { SI } from "../../quantity/system";
 import { units } from "../../quantity/units";
 import type { ReportFigure } from "../../plot/index";
 import { optFlag, optInteger, optString, type ParsedArgs } from "../args";
-import { INTERNAL_EXIT, type Command } from "../command";
+import { INTERNAL_EXIT, OUTPUT_EXIT, type Command } from "../command";
 import { EXIT, UsageError, say, type CliIO } from "../context";
 import type { ColumnSpec } from "../io/header";
 import type { CellValue } from "../io/write";
@@ -111,6 +111,7 @@ responses and residuals, Planck curves, temperature–luminosity diagram) is wri
       meaning: "arguments given, the demo survey not installed, or an unwritable report\ndirectory",
     },
     INTERNAL_EXIT,
+    OUTPUT_EXIT,
   ],
   examples: [{ args: ["--no-report"], note: "fit and solve the demo stars, print the table only" }],
   async run(args: ParsedArgs, io: CliIO): Promise<number> {

@@ -12,7 +12,7 @@ import type { ReportFigure } from "../../plot/index";
 import type { CellValue } from "../io/write";
 import type { ColumnSpec } from "../io/header";
 import { optInteger, optString, type ParsedArgs } from "../args";
-import { INTERNAL_EXIT, type Command } from "../command";
+import { INTERNAL_EXIT, OUTPUT_EXIT, type Command } from "../command";
 import { UsageError, say, type CliIO } from "../context";
 import { loadBands, type BandSet, type CliBand } from "../bands";
 import { createStarFitter, raisedFlags, type StarDistance, type StarFitResult, type StarMeasurement } from "../fit-adapter";
@@ -380,6 +380,7 @@ built-in demo bands ('--bands demo', the default). Status is 'ok', 'flagged'
         "usage: unknown option or bad value, unreadable input or band file, fewer than\ntwo band columns, or [mag] where [AB mag] is needed",
     },
     INTERNAL_EXIT,
+    OUTPUT_EXIT,
   ],
   examples: [
     { args: ["examples/demo-survey/photometry.csv", "--format", "table"], note: "fit the demo survey with the built-in demo bands" },

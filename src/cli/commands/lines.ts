@@ -31,7 +31,7 @@ import {
 } from "../../spectra/index";
 import type { MarkerLine } from "../../plot/index";
 import { optFlag, optInteger, optString, type ParsedArgs } from "../args";
-import { INTERNAL_EXIT, type Command } from "../command";
+import { INTERNAL_EXIT, OUTPUT_EXIT, type Command } from "../command";
 import { EXIT, UsageError, say, type CliIO } from "../context";
 import type { CellValue } from "../io/write";
 import { formatK, spectrumFigure } from "../figures";
@@ -209,6 +209,7 @@ With --svg FILE or --report DIR a synthetic spectrum (blackbody continuum at
     },
     { code: 2, meaning: "usage: unknown option or bad value" },
     INTERNAL_EXIT,
+    OUTPUT_EXIT,
   ],
   examples: [
     { args: ["--format", "table"], note: "the first 8 Balmer lines of hydrogen in vacuum" },

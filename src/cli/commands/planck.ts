@@ -17,7 +17,7 @@ import { lambertianExitance, planckRadianceFrequency, planckRadianceWavelength }
 import { PALETTE, svgChart } from "../../plot/index";
 import { optFlag, optInteger, optList, optString, type ParsedArgs } from "../args";
 import { keyValuePairs } from "../run-table";
-import { INTERNAL_EXIT, type Command } from "../command";
+import { INTERNAL_EXIT, OUTPUT_EXIT, type Command } from "../command";
 import { EXIT, UsageError, say, type CliIO } from "../context";
 import type { CellValue } from "../io/write";
 import { formatK, logGrid } from "../figures";
@@ -176,6 +176,7 @@ given too.`,
         "usage: a bad temperature list, a --unit of the wrong kind (the message suggests\n--quantity exitance when that is the mix-up), or a bad axis range",
     },
     INTERNAL_EXIT,
+    OUTPUT_EXIT,
   ],
   examples: [
     { args: ["--temperature", "5772", "--from", "300 nm", "--to", "1 um", "--points", "8", "--format", "table"], note: "the Sun's effective temperature, 300 nm – 1 µm, 8 points" },

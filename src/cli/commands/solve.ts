@@ -23,7 +23,7 @@ import { formatValueUncertainty } from "../io/write";
 import type { CellValue } from "../io/write";
 import type { ColumnSpec } from "../io/header";
 import { optList, optString, type ParsedArgs } from "../args";
-import { INTERNAL_EXIT, type Command } from "../command";
+import { INTERNAL_EXIT, OUTPUT_EXIT, type Command } from "../command";
 import { UsageError, say, type CliIO } from "../context";
 import { hrFigure, roundedK, luminosityLabel, planckFamilyFigure, spreadByTemperature } from "../figures";
 import { writeReport } from "../report-write";
@@ -520,6 +520,7 @@ is checked to be of the right kind. Table format: docs/guides/table-format.md.`,
       meaning: "usage: unknown option or bad value, unreadable input, a header unit of the\nwrong kind, or no solver input column",
     },
     INTERNAL_EXIT,
+    OUTPUT_EXIT,
   ],
   examples: [
     { args: ["examples/demo-survey/solve-input.csv", "--format", "table"], note: "solve the demo stars (temperature, angular diameter, parallax, bolometric flux)" },
