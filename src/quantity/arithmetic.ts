@@ -58,7 +58,6 @@ export type MulResult<A, B> = A extends AnyBrand ? (B extends AnyBrand ? Product
 /** The type of `div(a, b)` where either operand may be a plain number. */
 export type DivResult<A, B> = A extends AnyBrand ? (B extends AnyBrand ? Quotient<A, B> : A) : B extends AnyBrand ? Inverse<B> : number;
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
 type AnyBrand = number & Brand<any, any>;
 
 /** The type of `1 / a`. */
