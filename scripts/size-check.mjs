@@ -9,6 +9,12 @@
 //   node scripts/size-check.mjs            check against the budgets
 //   node scripts/size-check.mjs --json     also print the figures as JSON
 //   node scripts/size-check.mjs --explain  also list each bundle's modules by minified bytes
+//
+// Budgets raised in the same change as the growth (2026-12-02): the unit-text
+// grammar of the open standards reaches every SI user through SI.parse (core
+// 6.0 → 10.3 KB, Planck 11.0 → 15.4 KB), and the SED models, the Faddeeva
+// function and the air-index models joined the library (52.8 → 65.5 KB).
+// Moving parsing off the system object is the open fix.
 import { build } from "esbuild";
 import { mkdtempSync, mkdirSync, rmSync, symlinkSync } from "node:fs";
 import { tmpdir } from "node:os";
@@ -21,21 +27,21 @@ const cases = [
   {
     name: "whole library (import *)",
     contents: 'import * as s from "starlume"; console.log(s);',
-    budget: 53_500,
+    budget: 67_000,
     before: 52_920,
   },
   {
     name: "Planck only (SI, units, planckRadianceWavelength)",
     contents:
       'import { SI, units, planckRadianceWavelength } from "starlume"; console.log(planckRadianceWavelength(SI, SI.of(500, units.nm), SI.of(5772, units.K)));',
-    budget: 11_500,
+    budget: 16_000,
     before: 21_950,
   },
   {
     name: "core (SI, units, add, mul)",
     contents:
       'import { SI, units, add, mul } from "starlume"; const a = SI.of(1, units.m); console.log(add(a, a), mul(a, a));',
-    budget: 6_500,
+    budget: 11_000,
     before: 21_950,
   },
   {
