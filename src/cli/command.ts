@@ -14,7 +14,7 @@ export interface Example {
 
 /** One exit code a command can return, and what it means for that command. */
 export interface ExitCode {
-  readonly code: 0 | 1 | 2 | 3;
+  readonly code: 0 | 1 | 2 | 3 | 4;
   /** Wrapped help text (no leading spaces; lines after the first are indented by the help). */
   readonly meaning: string;
 }
