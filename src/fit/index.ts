@@ -65,6 +65,7 @@ export type {
   ParameterCovarianceSI,
   ParameterEstimateSI,
   SedFitFlagsSI,
+  SedFitOutcomeSI,
   SedFitSI,
   SedFitterSettingsSI,
   SedFitterSI,

@@ -49,8 +49,11 @@ export interface FitChannelSI {
 
 /** One fitted (or held) parameter: the estimate shape of docs/naming.md §6, in SI. */
 export interface ParameterEstimateSI {
+  /** Parameter name, as declared by its component (e.g. `temperatureK`). */
   readonly name: string;
+  /** SI unit text of the value and σ (e.g. `K`, `sr`, `1`). */
   readonly unit: string;
+  /** Best-fit value, in `unit`. */
   readonly value: number;
   /** First-order standard uncertainty (0 when held). */
   readonly sigma: number;
@@ -64,8 +67,11 @@ export interface ParameterEstimateSI {
 
 /** Covariance of the fitted parameters (docs/naming.md §6 form, internal coordinates beside). */
 export interface ParameterCovarianceSI {
+  /** Parameter names in the order of the matrix rows and columns. */
   readonly order: string[];
+  /** SI unit text of each parameter, in `order`. */
   readonly units: string[];
+  /** Covariance of the parameters in their own units (σᵢ² on the diagonal). */
   readonly matrix: number[][];
   /** In internal coordinates (ln p for log parameters, p for linear ones). */
   readonly internalMatrix: number[][];
@@ -73,9 +79,13 @@ export interface ParameterCovarianceSI {
 
 /** Quality flags of a model fit. */
 export interface SedFitFlagsSI {
+  /** The iteration stopped before its convergence criterion. */
   readonly notConverged: boolean;
+  /** A fitted parameter ends at one of its bounds (its σ is then only indicative). */
   readonly atLimit: boolean;
+  /** Fewer data points than fitted parameters (no degrees of freedom). */
   readonly tooFewBands: boolean;
+  /** χ² is improbably large for its degrees of freedom (p < 0.001). */
   readonly poorFit: boolean;
   /** Some pair of fitted parameters has |ρ| > 0.95 (a degeneracy: see `strongCorrelations`). */
   readonly strongCorrelation: boolean;
@@ -83,36 +93,55 @@ export interface SedFitFlagsSI {
 
 /** Result of a model fit, plain JSON. */
 export interface SedFitSI {
+  /** Every model parameter with its value and σ (held ones with σ = 0). */
   readonly parameters: ParameterEstimateSI[];
+  /** Covariance of the fitted parameters. */
   readonly covariance: ParameterCovarianceSI;
+  /** Correlation matrix of the fitted parameters (in `covariance.order`). */
   readonly correlation: number[][];
   /** Pairs of fitted parameters with |ρ| > 0.95: [name, name, ρ]. */
   readonly strongCorrelations: [string, string, number][];
+  /** χ² at the best fit. */
   readonly chi2: number;
+  /** Degrees of freedom: data points minus fitted parameters. */
   readonly dof: number;
+  /** χ²/dof, or null without degrees of freedom. */
   readonly reducedChi2: number | null;
+  /** Probability of a χ² at least this large for `dof` degrees of freedom, or null without them. */
   readonly pValue: number | null;
   /** χ² + 2k (k fitted parameters). */
   readonly aic: number;
   /** χ² + k ln n (n channels). */
   readonly bic: number;
+  /** Levenberg–Marquardt iterations taken. */
   readonly iterations: number;
+  /** Model evaluations taken (including rejected steps). */
   readonly evaluations: number;
+  /** How the start was found (the strategy's name, or `grid`). */
   readonly startMethod: string;
+  /** Why the iteration stopped. */
   readonly stopReason: StopReason;
   /** Model per channel in its data unit. */
   readonly model: number[];
+  /** (data − model)/σ for each data point. */
   readonly pulls: number[];
+  /** Warnings about the fit. */
   readonly flags: SedFitFlagsSI;
 }
 
 /** What a start strategy can use. */
 export interface StartContextSI {
+  /** The model being fitted. */
   readonly model: SedModelSI;
+  /** Number of data points (bands or spectrum pixels). */
   readonly channels: number;
+  /** Data values, in the kind given by `kinds` (f_λ in W m⁻³ or AB mag). */
   readonly values: Float64Array;
+  /** Standard uncertainties of `values`, same units. */
   readonly sigmas: Float64Array;
+  /** Data kind of each point (0: band-mean f_λ, 1: AB magnitude). */
   readonly kinds: Uint8Array;
+  /** Pivot wavelength of each point, m. */
   readonly pivotsM: Float64Array;
   /** Observed band-mean f_λ of a channel (NaN for a non-positive flux). */
   observedFluxLambda(c: number): number;
@@ -128,22 +157,33 @@ export type StartStrategySI = (ctx: StartContextSI, q: Float64Array) => boolean;
 /** Settings of a model fitter. */
 export interface SedFitterSettingsSI extends LeastSquaresSettings {
   /** Start strategy tried before the grid (its name goes to `startMethod`). */
-  readonly start?: { readonly name: string; readonly strategy: StartStrategySI };
+  readonly start?: {
+    /** Name recorded in `startMethod`. */
+    readonly name: string;
+    /** Returns start values (internal coordinates) from the data. */
+    readonly strategy: StartStrategySI;
+  };
   /** "auto" (strategy, then grid; default) or "grid". */
   readonly startMode?: "auto" | "grid";
 }
 
 /** Lower-level outcome (internal coordinates) for wrappers. */
 export interface SedFitOutcomeSI {
+  /** The fit as returned to users. */
   readonly result: SedFitSI;
+  /** Best fit in the internal coordinates (log for positive scales). */
   readonly q: Float64Array;
+  /** Covariance in the internal coordinates, or null when singular. */
   readonly internalCovariance: number[][] | null;
+  /** The start point in the internal coordinates. */
   readonly startInternal: Float64Array;
 }
 
 /** A reusable fitter for one model on one set of channels. */
 export interface SedFitterSI {
+  /** Number of data points this fitter was prepared for. */
   readonly channels: number;
+  /** The model this fitter fits. */
   readonly model: SedModelSI;
   /**
    * Fit one star. `kinds[c]`: DATA_FLUX_LAMBDA (W m⁻³) or DATA_AB_MAGNITUDE (mag); sigmas > 0.

@@ -117,7 +117,9 @@ export interface AttenuationSI {
 
 /** One term of a model: a component, optionally attenuated, with an optional label. */
 export interface SedTermSI {
+  /** The emitting component (its amplitude and shape). */
   readonly component: SedComponentSI;
+  /** Attenuation applied to this term only (e.g. CCM 1989 extinction); omit for none. */
   readonly attenuation?: AttenuationSI;
   /** Prefix of its parameter names (`"dust"` → `dust.temperatureK`); omit for none. */
   readonly label?: string;
@@ -125,6 +127,7 @@ export interface SedTermSI {
 
 /** A model: a sum of terms; its parameters are the terms' (in order) then the attenuations'. */
 export interface SedModelSI {
+  /** The terms whose fluxes add up. */
   readonly terms: readonly SedTermSI[];
   /** Full parameter list, in the fit's order. */
   readonly parameters: readonly ModelParameterSI[];
@@ -134,13 +137,17 @@ export interface SedModelSI {
 
 /** Channel layout a model is prepared on (bands.ts `PreparedBandSI` fits). */
 export interface ModelChannelSI {
+  /** Integration nodes of the channel, m. */
   readonly wavelengthsM: ArrayLike<number>;
+  /** Normalized weights of the nodes (Σ = 1). */
   readonly weights: ArrayLike<number>;
 }
 
 /** A model prepared on a fixed set of channels. */
 export interface PreparedSedModelSI {
+  /** The model prepared. */
   readonly model: SedModelSI;
+  /** Number of channels it was prepared on. */
   readonly channels: number;
   /**
    * Band means ⟨f_λ⟩ (W m⁻³) into `means` and ∂⟨f_λ⟩/∂qₐ (internal
