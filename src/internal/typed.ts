@@ -9,7 +9,7 @@ import type { Dimension } from "../quantity/dimension";
 import type { SystemName } from "../quantity/quantity";
 import type { UnitSystem } from "../quantity/system";
 import { times10 } from "../quantity/unit";
-import { requireFinite, requireNonNegative, requirePositive } from "./checks";
+import { requireFinite, requirePositive } from "./checks";
 
 /** A value in `sys`'s coherent unit of `d`, as SI. */
 export function toSI(sys: UnitSystem<SystemName>, value: number, d: Dimension): number {
@@ -30,23 +30,10 @@ export function arrayToSI(sys: UnitSystem<SystemName>, values: Float64Array, d: 
   return out;
 }
 
-/** Convert an SI typed array to the system in place. */
-export function arrayFromSIInPlace(sys: UnitSystem<SystemName>, values: Float64Array, d: Dimension): Float64Array {
-  const n = -sys.exp10(d);
-  if (n === 0) return values;
-  for (let i = 0; i < values.length; i++) values[i] = times10(values[i] as number, n);
-  return values;
-}
-
 /** Throw a RangeError unless finite and > 0, naming the caller's unit. */
 export function positive(sys: UnitSystem<SystemName>, name: string, value: number, d: Dimension): number {
   // the unit text is built only when the check fails (valid input stays cheap)
   return value > 0 && value !== Infinity ? value : requirePositive(name, value, sys.coherentUnit(d));
-}
-
-/** Throw a RangeError unless finite and ≥ 0, naming the caller's unit. */
-export function nonNegative(sys: UnitSystem<SystemName>, name: string, value: number, d: Dimension): number {
-  return value >= 0 && value !== Infinity ? value : requireNonNegative(name, value, sys.coherentUnit(d));
 }
 
 /** Throw a RangeError unless finite, naming the caller's unit. */
